@@ -1,0 +1,32 @@
+import tseslint from "typescript-eslint";
+
+// The one-way doors of the layout: shared/ is pure; server/ and src/ never import each other.
+const nodeBuiltins = ["node:*", "fs", "path", "http", "crypto", "child_process", "os", "url", "worker_threads"];
+const forbid = (groups, message) => ({
+  "no-restricted-imports": ["error", { patterns: [{ group: groups, message }] }],
+});
+
+export default tseslint.config(
+  { ignores: ["dist/**", "node_modules/**", ".data/**", "test-results/**", "playwright-report/**"] },
+  ...tseslint.configs.recommended,
+  {
+    rules: {
+      "@typescript-eslint/no-unused-vars": ["error", { argsIgnorePattern: "^_", varsIgnorePattern: "^_" }],
+    },
+  },
+  {
+    files: ["shared/**/*.ts"],
+    rules: forbid(
+      ["@/*", "@server/*", "react", "react-dom", "express", "sequelize", "pg", ...nodeBuiltins, "../src/*", "../server/*"],
+      "shared/ is pure TypeScript: no DOM, Node, server or client imports.",
+    ),
+  },
+  {
+    files: ["src/**/*.ts", "src/**/*.tsx"],
+    rules: forbid(["@server/*", "**/server/*", ...nodeBuiltins], "The client depends on shared/, never on server/."),
+  },
+  {
+    files: ["server/**/*.ts"],
+    rules: forbid(["@/*", "**/src/*", "react", "react-dom"], "The server depends on shared/, never on src/."),
+  },
+);
