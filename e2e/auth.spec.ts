@@ -1,0 +1,32 @@
+import { expect, test } from "@playwright/test";
+import { PASSWORD, signUp, uniqueEmail } from "./helpers";
+
+test("a wrong password is refused with a visible error and the user stays signed out", async ({ page }) => {
+  const email = uniqueEmail("wrongpass");
+  await signUp(page, "Ines Wrongpass", email);
+  await page.getByRole("button", { name: "Sign out" }).click();
+  await expect(page).toHaveURL(/\/sign-in$/);
+
+  await page.getByLabel("E-mail").fill(email);
+  await page.getByLabel("Password").fill(`${PASSWORD}-typo`);
+  await page.getByRole("button", { name: "Sign in" }).click();
+
+  // common practice: one message for unknown e-mail and wrong password, so accounts cannot be probed.
+  await expect(page.getByRole("alert")).toHaveText("E-mail or password is wrong.");
+  await expect(page).toHaveURL(/\/sign-in$/);
+  await expect(page.getByRole("button", { name: "Sign out" })).toHaveCount(0);
+});
+
+test("signed-out visitors are sent to sign-in and come back to the page they asked for", async ({ page }) => {
+  const email = uniqueEmail("next");
+  await signUp(page, "Noor Next", email);
+  await page.getByRole("button", { name: "Sign out" }).click();
+
+  await page.goto("/teams");
+  await expect(page).toHaveURL(/\/sign-in\?next=%2Fteams$/);
+  await page.getByLabel("E-mail").fill(email);
+  await page.getByLabel("Password").fill(PASSWORD);
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await expect(page).toHaveURL(/\/teams$/);
+  await expect(page.getByRole("heading", { level: 1, name: "Teams" })).toBeVisible();
+});

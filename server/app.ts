@@ -1,0 +1,75 @@
+import express, { type Express } from "express";
+import helmet from "helmet";
+import { existsSync } from "node:fs";
+import { join, resolve } from "node:path";
+import type { Logger } from "pino";
+import type { Sequelize } from "sequelize";
+import type { AppLucia } from "@server/auth/lucia";
+import type { Config } from "@server/config";
+import { authRouter } from "@server/features/auth/router";
+import { diagramsRouter, teamDiagramsRouter } from "@server/features/diagrams/router";
+import { invitationLinkRouter, teamInvitationsRouter } from "@server/features/invitations/router";
+import { systemRouter } from "@server/features/system/router";
+import { teamsRouter } from "@server/features/teams/router";
+import { originCheck } from "@server/http/csrf";
+import { errorHandler, unknownApiRoute } from "@server/http/errors";
+import { authLimiter } from "@server/http/rateLimit";
+import { requestLog } from "@server/http/requestLog";
+import { sessionMiddleware } from "@server/http/session";
+import type { FakeMailService } from "@server/mail/fakeMailService";
+import { mailboxPage } from "@server/mail/mailboxPage";
+import type { Mailer } from "@server/mail/mailer";
+
+export interface AppDeps {
+  config: Config;
+  sequelize: Sequelize;
+  lucia: AppLucia;
+  mailer: Mailer;
+  mailbox: FakeMailService | null;
+  log: Logger;
+}
+
+/** The HTTP application: /api/*, the dev mailbox while the fake mail service runs, and the built client. */
+export function createApp(deps: AppDeps): Express {
+  const { config, log } = deps;
+  const https = config.publicUrl.startsWith("https://");
+  const app = express();
+  app.disable("x-powered-by");
+  app.set("trust proxy", "loopback");
+  app.use(
+    helmet({
+      hsts: https,
+      contentSecurityPolicy: { directives: { "upgrade-insecure-requests": https ? [] : null } },
+    }),
+  );
+
+  const limiter = authLimiter(config.authRateLimit);
+  const api = express.Router();
+  api.use(requestLog(log));
+  api.use(express.json({ limit: "2mb" }));
+  api.use(originCheck(config.publicUrl));
+  api.use(sessionMiddleware(deps.lucia));
+  api.use(systemRouter({ sequelize: deps.sequelize, mailbox: deps.mailbox, demo: config.demo }));
+  api.use("/auth", authRouter(deps.lucia, limiter));
+  api.use("/teams", teamsRouter(), teamInvitationsRouter({ mailer: deps.mailer, publicUrl: config.publicUrl }, limiter), teamDiagramsRouter());
+  api.use("/invitations", invitationLinkRouter(limiter));
+  api.use("/diagrams", diagramsRouter());
+  api.use(unknownApiRoute);
+  app.use("/api", api);
+
+  if (deps.mailbox) {
+    const mailbox = deps.mailbox;
+    app.get("/dev/mailbox", (_req, res) => void res.type("html").send(mailboxPage(mailbox.messages)));
+  }
+
+  const clientDir = resolve(config.clientDir);
+  if (existsSync(join(clientDir, "index.html"))) {
+    app.use(express.static(clientDir, { index: false, maxAge: "1h" }));
+    // SPA fallback: every other GET that wants HTML gets the client, which routes it.
+    app.get(/^\/(?!api\/|dev\/).*/, (req, res, next) =>
+      req.accepts("html") ? res.sendFile(join(clientDir, "index.html")) : next(),
+    );
+  }
+  app.use(errorHandler(log));
+  return app;
+}

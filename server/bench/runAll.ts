@@ -1,0 +1,13 @@
+import { readdirSync } from "node:fs";
+import { spawnSync } from "node:child_process";
+
+// `npm run bench`: every server/bench/*.bench.ts in turn, each printing its own table of figures.
+const dir = "server/bench";
+const only = process.argv[2];
+let failed = 0;
+for (const file of readdirSync(dir).filter((f) => f.endsWith(".bench.ts") && (!only || f.includes(only))).sort()) {
+  console.log(`\n=== ${file} ===`);
+  const r = spawnSync("node_modules/.bin/tsx", [`${dir}/${file}`], { stdio: "inherit" });
+  if (r.status !== 0) failed++;
+}
+process.exit(failed ? 1 : 0);

@@ -1,0 +1,19 @@
+import type { Sequelize } from "sequelize";
+import { Diagram, DiagramVersion, initDiagramModels } from "@server/db/models/diagram";
+import { Invitation, Membership, Team, initTeamModels } from "@server/db/models/team";
+import { User, initUser } from "@server/db/models/user";
+
+/** Registers every model and their associations on one Sequelize instance. */
+export function initModels(sequelize: Sequelize): void {
+  initUser(sequelize);
+  initTeamModels(sequelize);
+  initDiagramModels(sequelize);
+  Membership.belongsTo(User, { foreignKey: "userId", as: "user" });
+  Membership.belongsTo(Team, { foreignKey: "teamId", as: "team" });
+  Team.hasMany(Membership, { foreignKey: "teamId", as: "memberships" });
+  Invitation.belongsTo(Team, { foreignKey: "teamId", as: "team" });
+  Invitation.belongsTo(User, { foreignKey: "invitedBy", as: "inviter" });
+  Diagram.belongsTo(User, { foreignKey: "createdBy", as: "creator" });
+  Diagram.hasMany(DiagramVersion, { foreignKey: "diagramId", as: "versions" });
+  DiagramVersion.belongsTo(User, { foreignKey: "createdBy", as: "author" });
+}

@@ -1,0 +1,49 @@
+import { Router } from "express";
+import { createDiagramSchema, updateDiagramSchema } from "@shared/api/diagrams";
+import type { Role } from "@shared/api/teams";
+import { requireUser } from "@server/http/session";
+import { parseWith } from "@server/http/validate";
+import { requireRole } from "@server/features/teams/access";
+import { createDiagram, diagramDetail, findDiagram, listDiagrams, setArchived, updateDiagram } from "@server/features/diagrams/service";
+
+/** Team-side routes (mounted under /api/teams). */
+export function teamDiagramsRouter(): Router {
+  const router = Router();
+  router.get("/:teamId/diagrams", async (req, res) => {
+    await requireRole(req.params.teamId, requireUser(res).id);
+    res.json({ diagrams: await listDiagrams(req.params.teamId, req.query.archived === "1") });
+  });
+  router.post("/:teamId/diagrams", async (req, res) => {
+    const user = requireUser(res);
+    await requireRole(req.params.teamId, user.id, "editor");
+    res.status(201).json({ diagram: await createDiagram(req.params.teamId, user.id, parseWith(createDiagramSchema, req.body)) });
+  });
+  return router;
+}
+
+/** Diagram routes (mounted under /api/diagrams); membership of the diagram's team decides access. */
+export function diagramsRouter(): Router {
+  const router = Router();
+  router.get("/:id", async (req, res) => {
+    const { diagram, role } = await diagramWithRole(requireUser(res).id, req.params.id, "viewer");
+    res.json(await diagramDetail(diagram, role));
+  });
+  router.patch("/:id", async (req, res) => {
+    const { diagram } = await diagramWithRole(requireUser(res).id, req.params.id, "editor");
+    res.json({ diagram: await updateDiagram(diagram, parseWith(updateDiagramSchema, req.body)) });
+  });
+  for (const [action, archived] of [["archive", true], ["restore", false]] as const) {
+    router.post(`/:id/${action}`, async (req, res) => {
+      const { diagram } = await diagramWithRole(requireUser(res).id, req.params.id, "editor");
+      res.json({ diagram: await setArchived(diagram, archived) });
+    });
+  }
+  return router;
+}
+
+/** The diagram and the caller's role in its team; a non-member gets the same 404 as for a missing diagram. */
+async function diagramWithRole(userId: string, id: string, least: Role) {
+  const diagram = await findDiagram(id);
+  const role = await requireRole(diagram.teamId, userId, least, "Diagram not found.");
+  return { diagram, role };
+}

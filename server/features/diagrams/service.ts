@@ -1,0 +1,96 @@
+import { Op } from "sequelize";
+import type { CreateDiagramInput, DiagramDetail, DiagramSummary, UpdateDiagramInput } from "@shared/api/diagrams";
+import { createDiagramSchema } from "@shared/api/diagrams";
+import type { Role } from "@shared/api/teams";
+import { Diagram, DiagramVersion } from "@server/db/models/diagram";
+import { Team } from "@server/db/models/team";
+import { User } from "@server/db/models/user";
+import { notFound } from "@server/http/errors";
+import { isUuid } from "@server/http/ids";
+
+type WithCreator = Diagram & { creator?: User };
+type VersionWithAuthor = DiagramVersion & { author?: User };
+
+async function latestVersions(ids: string[]): Promise<Map<string, VersionWithAuthor>> {
+  const rows = (await DiagramVersion.findAll({
+    where: { diagramId: ids },
+    include: [{ model: User, as: "author", attributes: ["name"] }],
+    order: [["diagramId", "ASC"], ["number", "DESC"]],
+  })) as VersionWithAuthor[];
+  const latest = new Map<string, VersionWithAuthor>();
+  for (const v of rows) if (!latest.has(v.diagramId)) latest.set(v.diagramId, v);
+  return latest;
+}
+
+function summary(d: WithCreator, latest?: VersionWithAuthor): DiagramSummary {
+  const updated = latest && latest.createdAt > d.updatedAt ? latest.createdAt : d.updatedAt;
+  return {
+    id: d.id,
+    teamId: d.teamId,
+    title: d.title,
+    description: d.description,
+    latestVersion: latest?.number ?? null,
+    updatedAt: updated.toISOString(),
+    author: latest?.author?.name ?? d.creator?.name ?? "",
+    archivedAt: d.archivedAt ? d.archivedAt.toISOString() : null,
+  };
+}
+
+const withCreator = { include: [{ model: User, as: "creator", attributes: ["name"] }] };
+
+export async function listDiagrams(teamId: string, archived: boolean): Promise<DiagramSummary[]> {
+  const rows = (await Diagram.findAll({
+    where: { teamId, archivedAt: archived ? { [Op.ne]: null } : null },
+    ...withCreator,
+    order: [["updatedAt", "DESC"]],
+  })) as WithCreator[];
+  const latest = await latestVersions(rows.map((d) => d.id));
+  return rows.map((d) => summary(d, latest.get(d.id))).sort((a, b) => b.updatedAt.localeCompare(a.updatedAt));
+}
+
+export async function createDiagram(teamId: string, userId: string, input: CreateDiagramInput): Promise<DiagramSummary> {
+  const { title, description } = createDiagramSchema.parse(input);
+  const d = await Diagram.create({ teamId, title, description, createdBy: userId });
+  return summary(Object.assign(d, { creator: (await User.findByPk(userId)) ?? undefined }));
+}
+
+/** The diagram row, or a 404 for an unknown or malformed id. */
+export async function findDiagram(id: string): Promise<Diagram> {
+  const d = isUuid(id) ? await Diagram.findByPk(id) : null;
+  if (!d) throw notFound("Diagram not found.");
+  return d;
+}
+
+export async function diagramDetail(d: Diagram, role: Role): Promise<DiagramDetail> {
+  const [full, team, latest] = await Promise.all([
+    Diagram.findByPk(d.id, withCreator) as Promise<WithCreator>,
+    Team.findByPk(d.teamId),
+    latestVersions([d.id]).then((m) => m.get(d.id)),
+  ]);
+  return {
+    diagram: { ...summary(full, latest), role, teamName: team?.name ?? "" },
+    latestVersion: latest
+      ? {
+          number: latest.number,
+          document: latest.document,
+          result: latest.result,
+          message: latest.message,
+          createdAt: latest.createdAt.toISOString(),
+          createdBy: latest.author?.name ?? "",
+        }
+      : null,
+  };
+}
+
+export async function updateDiagram(d: Diagram, input: UpdateDiagramInput): Promise<DiagramSummary> {
+  if (input.title !== undefined) d.title = input.title;
+  if (input.description !== undefined) d.description = input.description;
+  await d.save();
+  return summary(await (Diagram.findByPk(d.id, withCreator) as Promise<WithCreator>), (await latestVersions([d.id])).get(d.id));
+}
+
+export async function setArchived(d: Diagram, archived: boolean): Promise<DiagramSummary> {
+  d.archivedAt = archived ? new Date() : null;
+  await d.save();
+  return summary(await (Diagram.findByPk(d.id, withCreator) as Promise<WithCreator>), (await latestVersions([d.id])).get(d.id));
+}

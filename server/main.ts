@@ -1,0 +1,51 @@
+import pg from "pg";
+import { pino } from "pino";
+import { createApp } from "@server/app";
+import { createLucia } from "@server/auth/lucia";
+import { loadConfig } from "@server/config";
+import { createSequelize } from "@server/db/sequelize";
+import { startFakeMailService, type FakeMailService } from "@server/mail/fakeMailService";
+import { createMailer } from "@server/mail/mailer";
+
+// Starts the server: database pools, mail (real SMTP, or the local fake), HTTP. SIGINT/SIGTERM close everything.
+const config = loadConfig();
+const log = pino({ level: config.logLevel });
+
+const pool = new pg.Pool({ connectionString: config.databaseUrl, max: 10, connectionTimeoutMillis: 5000 });
+// An idle client losing its connection (database restarted) must not crash the server; the next query reconnects.
+pool.on("error", (err) => log.warn({ err: err.message }, "database connection lost"));
+const sequelize = createSequelize(config.databaseUrl);
+
+let mailbox: FakeMailService | null = null;
+if (!config.smtp) {
+  try {
+    mailbox = await startFakeMailService(config.fakeMailPort);
+  } catch (e) {
+    log.fatal(`Fake mail service could not listen on 127.0.0.1:${config.fakeMailPort}: ${(e as Error).message}`);
+    process.exit(1);
+  }
+  log.info(`Fake mail service on 127.0.0.1:${mailbox.port}; messages at ${config.publicUrl}/dev/mailbox`);
+}
+
+const app = createApp({
+  config,
+  sequelize,
+  lucia: createLucia(pool, config),
+  mailer: createMailer(config, mailbox?.port ?? config.fakeMailPort),
+  mailbox,
+  log,
+});
+
+const server = app.listen(config.port, "0.0.0.0", () => log.info(`Loopwright listening on ${config.publicUrl}`));
+server.on("error", (e) => {
+  log.fatal(`Cannot listen on port ${config.port}: ${e.message}`);
+  process.exit(1);
+});
+
+async function shutdown() {
+  server.close();
+  await Promise.allSettled([mailbox?.close(), sequelize.close(), pool.end()]);
+  process.exit(0);
+}
+process.on("SIGINT", shutdown);
+process.on("SIGTERM", shutdown);

@@ -1,0 +1,204 @@
+// Own exact rational functions on BigInt: nerdamer/mathjs are too slow and not exact enough for the reduction hot path.
+import { AlgebraError, DEGREE_LIMIT } from "@shared/algebra/errors";
+import type { Field } from "@shared/algebra/field";
+import { zSplitFactors } from "@shared/algebra/factor";
+import { polyFromZ, polyMonic, polyZero, type Poly } from "@shared/algebra/poly";
+import { polyToLatex, polyToText } from "@shared/algebra/polytext";
+import { q, qDiv, qEquals, qInv, qIsOne, qMul, qOne, qPow, qZero, type Q } from "@shared/algebra/rational";
+import { zGcd, zUnitContent } from "@shared/algebra/zgcd";
+import {
+  S, zAdd, zDeg, zEquals, zLeadNum, zMul, zPow, zQuo, zScale, zVarPoly, zVars, type ZPoly,
+} from "@shared/algebra/zpoly";
+import type { ExprNode } from "@shared/expr/ast";
+
+/**
+ * An exact rational function of s (coefficients rational or polynomial in the parameters), always in lowest terms:
+ * value k·n/d with n, d integer polynomials that are coprime in Z[params, s] (so no common factor in s for generic
+ * parameter values, and no common parameter factor either), each with content 1 and a positive leading numeric
+ * coefficient. That makes the triple unique: equal values are structurally equal and print identically.
+ * Zero is k = 0, n = d = 1. Printed, the denominator is scaled so its leading term (highest power of s, then
+ * parameters alphabetically) has coefficient 1 — monic whenever its leading coefficient in s is a number.
+ * Example: ratFromExpr of "K*(s+2)/(2*s)" prints as (K*s + 2*K)/s · 1/2 → numerator "1/2*K*s + K", denominator "s".
+ */
+export interface RatFn {
+  readonly k: Q;
+  readonly n: ZPoly;
+  readonly d: ZPoly;
+}
+
+export const ratZero: RatFn = { k: qZero, n: 1n, d: 1n };
+export const ratOne: RatFn = { k: qOne, n: 1n, d: 1n };
+
+/** A constant. Example: ratConst(q(1, 2)) is 1/2. */
+export const ratConst = (c: Q): RatFn => (c.n === 0n ? ratZero : { k: c, n: 1n, d: 1n });
+
+function checkDegree(n: ZPoly, d: ZPoly): void {
+  const dn = zDeg(n, S);
+  const dd = zDeg(d, S);
+  if (dn > DEGREE_LIMIT || dd > DEGREE_LIMIT) {
+    throw new AlgebraError(
+      "degree-limit",
+      `The result would have degree ${Math.max(dn, dd)} in s; the limit is ${DEGREE_LIMIT}. Simplify the diagram.`,
+    );
+  }
+}
+
+/** Builds k·n/d from coprime integer polynomials, moving their contents and signs into k. */
+function normalised(k: Q, n: ZPoly, d: ZPoly): RatFn {
+  if (n === 0n || k.n === 0n) return ratZero;
+  checkDegree(n, d);
+  const un = zUnitContent(n);
+  const ud = zUnitContent(d);
+  return { k: qMul(k, q(un, ud)), n: zQuo(n, un), d: zQuo(d, ud) };
+}
+
+/** Sum (Henrici: only the gcd of the denominators can cancel). Example: ratAdd(1/s, 1/s) is 2/s. */
+export function ratAdd(a: RatFn, b: RatFn): RatFn {
+  if (a.k.n === 0n) return b;
+  if (b.k.n === 0n) return a;
+  const x1 = a.k.n * b.k.d;
+  const x2 = b.k.n * a.k.d;
+  const k = q(1n, a.k.d * b.k.d);
+  const g = a.d === 1n || b.d === 1n ? 1n : zEquals(a.d, b.d) ? a.d : zGcd(a.d, b.d);
+  const da = zQuo(a.d, g);
+  const db = zQuo(b.d, g);
+  const t = zAdd(zScale(zMul(a.n, db), x1), zScale(zMul(b.n, da), x2));
+  if (t === 0n) return ratZero;
+  if (g === 1n) return normalised(k, t, zMul(a.d, b.d));
+  const g2 = zGcd(t, g);
+  return normalised(k, zQuo(t, g2), zMul(da, zQuo(b.d, g2)));
+}
+
+/** Negation. Example: ratNeg(1/s) is -1/s. */
+export const ratNeg = (a: RatFn): RatFn => ({ k: { n: -a.k.n, d: a.k.d }, n: a.n, d: a.d });
+
+/** Difference. Example: ratSub(s, s) is 0. */
+export const ratSub = (a: RatFn, b: RatFn): RatFn => ratAdd(a, ratNeg(b));
+
+const gcdOrOne = (x: ZPoly, y: ZPoly): ZPoly => (x === 1n || y === 1n ? 1n : zGcd(x, y));
+
+/** Product, cancelling crosswise first so the pieces stay small. Example: ratMul((s+1)/s, s/(s+1)) is 1. */
+export function ratMul(a: RatFn, b: RatFn): RatFn {
+  if (a.k.n === 0n || b.k.n === 0n) return ratZero;
+  const g1 = gcdOrOne(a.n, b.d);
+  const g2 = gcdOrOne(b.n, a.d);
+  const n1 = zQuo(a.n, g1);
+  const n2 = zQuo(b.n, g2);
+  const d1 = zQuo(a.d, g2);
+  const d2 = zQuo(b.d, g1);
+  if (zDeg(n1, S) + zDeg(n2, S) > DEGREE_LIMIT || zDeg(d1, S) + zDeg(d2, S) > DEGREE_LIMIT) checkDegree(zMul(n1, n2), zMul(d1, d2));
+  // Quotients of primitive, positive-leading polynomials by such gcds keep both properties: no renormalising.
+  return { k: qMul(a.k, b.k), n: zMul(n1, n2), d: zMul(d1, d2) };
+}
+
+/** Reciprocal; throws AlgebraError "division-by-zero" for 0. Example: ratInv(s/(s+1)) is (s+1)/s. */
+export function ratInv(a: RatFn): RatFn {
+  if (a.k.n === 0n) throw new AlgebraError("division-by-zero", "Division by a transfer function that is identically 0.");
+  return { k: qInv(a.k), n: a.d, d: a.n };
+}
+
+/** Quotient; throws AlgebraError "division-by-zero" when b is 0. Example: ratDiv(1, s) is 1/s. */
+export const ratDiv = (a: RatFn, b: RatFn): RatFn => ratMul(a, ratInv(b));
+
+/** Non-negative integer power (lowest terms are kept without a gcd). Example: ratPow(1/(s+1), 2) is 1/(s^2 + 2*s + 1). */
+export function ratPow(a: RatFn, e: number): RatFn {
+  if (e === 0) return ratOne;
+  if (a.k.n === 0n) return ratZero;
+  for (const v of new Set([...zVars(a.n), ...zVars(a.d)])) {
+    const dv = Math.max(zDeg(a.n, v), zDeg(a.d, v)) * e;
+    if (dv > DEGREE_LIMIT) {
+      throw new AlgebraError("degree-limit", `A power would have degree ${dv} in ${v}; the limit is ${DEGREE_LIMIT}.`, v);
+    }
+  }
+  return { k: qPow(a.k, e), n: zPow(a.n, e), d: zPow(a.d, e) };
+}
+
+export const ratIsZero = (a: RatFn): boolean => a.k.n === 0n;
+export const ratIsOne = (a: RatFn): boolean => qIsOne(a.k) && a.n === 1n && a.d === 1n;
+/** Exact equality of values (the representation is canonical). Example: ratEquals(ratAdd(x, x), ratMul(2, x)). */
+export const ratEquals = (a: RatFn, b: RatFn): boolean => qEquals(a.k, b.k) && zEquals(a.n, b.n) && zEquals(a.d, b.d);
+
+/** The field the reducer runs on. Example: ratField.add(ratField.one, ratField.one) is 2. */
+export const ratField: Field<RatFn> = {
+  zero: ratZero,
+  one: ratOne,
+  add: ratAdd,
+  sub: ratSub,
+  mul: ratMul,
+  div: ratDiv,
+  neg: ratNeg,
+  isZero: ratIsZero,
+  isOne: ratIsOne,
+};
+
+/**
+ * Exact value of a checked expression tree. Throws AlgebraError "division-by-zero" when a divisor is identically
+ * zero and "degree-limit" when a power is too high. Example: ratFromExpr(tree of "1/(0.5*s + 1)") is 2/(s + 2).
+ */
+export function ratFromExpr(ast: ExprNode): RatFn {
+  switch (ast.kind) {
+    case "num":
+      return ratConst(q(ast.num, ast.den));
+    case "s":
+    case "param":
+      return { k: qOne, n: zVarPoly(ast.kind === "s" ? S : ast.name), d: 1n };
+    case "add":
+      return ratAdd(ratFromExpr(ast.left), ratFromExpr(ast.right));
+    case "sub":
+      return ratSub(ratFromExpr(ast.left), ratFromExpr(ast.right));
+    case "mul":
+      return ratMul(ratFromExpr(ast.left), ratFromExpr(ast.right));
+    case "div": {
+      const divisor = ratFromExpr(ast.right);
+      if (ratIsZero(divisor)) {
+        throw new AlgebraError("division-by-zero", "Division by zero: a divisor in the expression is identically 0.");
+      }
+      return ratDiv(ratFromExpr(ast.left), divisor);
+    }
+    case "neg":
+      return ratNeg(ratFromExpr(ast.arg));
+    case "pow":
+      return ratPow(ratFromExpr(ast.base), ast.exp);
+  }
+}
+
+/** Numerator as printed (pairs with ratDenominator). Example: ratNumerator of 1/(2*s + 1) is 1/2. */
+export const ratNumerator = (r: RatFn): Poly => (r.k.n === 0n ? polyZero : { q: qMul(r.k, q(zLeadNum(r.d))), z: r.n });
+
+/** Denominator with leading term coefficient 1 (monic when numeric). Example: ratDenominator of 1/(2*s + 1) is s + 1/2. */
+export const ratDenominator = (r: RatFn): Poly => polyMonic({ q: qOne, z: r.d });
+
+/** Degrees in s; num is -1 for zero. Example: ratDegrees of (s+1)/s^2 is { num: 1, den: 2 }. */
+export const ratDegrees = (r: RatFn): { num: number; den: number } => ({
+  num: r.k.n === 0n ? -1 : zDeg(r.n, S),
+  den: zDeg(r.d, S),
+});
+
+/**
+ * num/den in lowest terms, reporting the cancelled common factor (gcd) split into factors where possible
+ * (parameter content, square-free parts, rational linear and quadratic factors), each in the polyMonic form and
+ * repeated by multiplicity. A zero numerator cancels the whole denominator. Throws "division-by-zero" for den = 0.
+ * Example: ratReduceTracked(s^2 - 1, s^2 + s) is { value: (s - 1)/s, cancelled: [s + 1] }.
+ */
+export function ratReduceTracked(num: Poly, den: Poly): { value: RatFn; cancelled: Poly[] } {
+  if (den.q.n === 0n) throw new AlgebraError("division-by-zero", "The denominator polynomial is identically 0.");
+  const g = zGcd(num.z, den.z);
+  const value = normalised(qDiv(num.q, den.q), zQuo(num.z, g), zQuo(den.z, g));
+  return { value, cancelled: zSplitFactors(g).map((f) => polyMonic(polyFromZ(qOne, f))) };
+}
+
+const bare = (t: string): boolean => /^[A-Za-z0-9_^]+$/.test(t);
+
+/** Plain text in the expression syntax. Example: ratToText of 1/(s + 1) is "1/(s + 1)". */
+export function ratToText(r: RatFn): string {
+  const n = polyToText(ratNumerator(r));
+  if (r.d === 1n) return n;
+  const d = polyToText(ratDenominator(r));
+  return `${bare(n) ? n : `(${n})`}/${bare(d) ? d : `(${d})`}`;
+}
+
+/** LaTeX: \frac{num}{den}, or the numerator alone over 1. Example: "\frac{1}{s + 1}". */
+export function ratToLatex(r: RatFn): string {
+  const n = polyToLatex(ratNumerator(r));
+  return r.d === 1n ? n : `\\frac{${n}}{${polyToLatex(ratDenominator(r))}}`;
+}

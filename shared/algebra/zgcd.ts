@@ -1,0 +1,172 @@
+// Own exact gcd on BigInt: nerdamer/mathjs are too slow and not exact enough for the reduction hot path.
+import { bigGcd } from "@shared/algebra/rational";
+import { bigMod, evalModP, gcdModP, invMod, modPrime, mulMod, type ModPoly } from "@shared/algebra/modp";
+import {
+  allInt, zContentInt, zDivExact, zLeadNum, zMake, zMul, zNormSign, zPow, zQuo, zSub, varOuter,
+  type ZPoly, type ZRec,
+} from "@shared/algebra/zpoly";
+
+/**
+ * Greatest common divisor in Z[s, params], sign-normalised (leading numeric coefficient > 0).
+ * Strategy: split off contents recursively; one modular image at a random point answers the common
+ * "coprime" case and the "one divides the other" case; otherwise a modular gcd with CRT (integers in s only)
+ * or the subresultant PRS (with parameters). Example: zGcd(s^2 - 1, 2*s + 2) is s + 1.
+ */
+export function zGcd(a: ZPoly, b: ZPoly): ZPoly {
+  if (a === 0n) return zNormSign(b);
+  if (b === 0n) return zNormSign(a);
+  if (typeof a === "bigint") return bigGcd(a, zContentInt(b));
+  if (typeof b === "bigint") return bigGcd(b, zContentInt(a));
+  if (a.v !== b.v) return varOuter(a.v, b.v) ? zGcd(zContent(a), b) : zGcd(a, zContent(b));
+  const ca = zContent(a);
+  const cb = zContent(b);
+  const c = zGcd(ca, cb);
+  const g = gcdPrimitive(zQuo(a, ca) as ZRec, zQuo(b, cb) as ZRec);
+  return zNormSign(zMul(c, g));
+}
+
+/** Content in the main variable: gcd of the coefficients (sign-normalised). Example: zContent(K*s + K) is K. */
+export function zContent(a: ZPoly): ZPoly {
+  if (typeof a === "bigint") return a < 0n ? -a : a;
+  let g: ZPoly = 0n;
+  for (const x of a.c) {
+    g = zGcd(g, x);
+    if (g === 1n) return 1n;
+  }
+  return g;
+}
+
+/** Primitive part in the main variable. Example: zPrimitive(2*K*s + 4*K) is s + 2. */
+export function zPrimitive(a: ZPoly): ZPoly {
+  return zNormSign(zQuo(a, zContent(a)));
+}
+
+const deg = (a: ZRec): number => a.c.length - 1;
+
+function gcdPrimitive(a: ZRec, b: ZRec): ZPoly {
+  if (deg(a) < deg(b)) [a, b] = [b, a];
+  const bound = probeDegree(a, b);
+  if (bound === 0) return 1n;
+  if (bound === deg(b) && zDivExact(a, b) !== null) return b;
+  if (allInt(a.c) && allInt(b.c)) return modularGcd(a.v, a.c, b.c);
+  return subresultantGcd(a, b);
+}
+
+let seed = 0x2545f491;
+/** Deterministic pseudo-random residue in [1, p): results never depend on it, only speed. */
+function nextRandom(p: number): number {
+  seed = (Math.imul(seed, 1103515245) + 12345) >>> 0;
+  return 1 + (seed % (p - 1));
+}
+
+/**
+ * Degree of gcd(a, b) at one random image (an upper bound on the true degree), or -1 when the image lost a
+ * leading coefficient. Valid because lc(gcd) divides lc(a), so a surviving lc(a) keeps the gcd's degree.
+ */
+function probeDegree(a: ZRec, b: ZRec): number {
+  for (let attempt = 0; attempt < 3; attempt++) {
+    const p = modPrime(attempt);
+    const point = new Map<string, number>();
+    const at = (v: string): number => {
+      let x = point.get(v);
+      if (x === undefined) point.set(v, (x = nextRandom(p)));
+      return x;
+    };
+    const ia = evalModP(a, a.v, at, p);
+    const ib = evalModP(b, b.v, at, p);
+    if (ia.length === a.c.length && ib.length === b.c.length) return gcdModP(ia, ib, p).length - 1;
+  }
+  return -1;
+}
+
+/** Small-primes modular gcd of primitive integer polynomials, checked by exact division. */
+function modularGcd(v: string, A: readonly bigint[], B: readonly bigint[]): ZPoly {
+  const lcA = A[A.length - 1];
+  const lcB = B[B.length - 1];
+  const gamma = bigGcd(lcA, lcB);
+  let acc: bigint[] = [];
+  let modulus = 1n;
+  let candidate: ZPoly | null = null;
+  for (let i = 0; ; i++) {
+    const p = modPrime(i);
+    const P = BigInt(p);
+    if (lcA % P === 0n || lcB % P === 0n) continue;
+    const img = gcdModP(A.map((x) => bigMod(x, p)), B.map((x) => bigMod(x, p)), p);
+    if (img.length === 1) return 1n;
+    if (acc.length && img.length > acc.length) continue; // unlucky prime
+    const gp = bigMod(gamma, p);
+    const scaled: ModPoly = img.map((x) => mulMod(x, gp, p));
+    if (!acc.length || img.length < acc.length) {
+      acc = scaled.map(BigInt);
+      modulus = P;
+      candidate = null;
+      continue;
+    }
+    const inv = BigInt(invMod(bigMod(modulus, p), p));
+    acc = acc.map((x, k) => x + modulus * ((((BigInt(scaled[k]) - x) % P) * inv % P + P) % P));
+    modulus *= P;
+    const half = modulus / 2n;
+    const next = zNormSign(zQuoContent(zMake(v, acc.map((x) => (x > half ? x - modulus : x)))));
+    if (candidate !== null && zEqualsInt(candidate, next)) {
+      if (zDivExact({ v, c: A }, next) !== null && zDivExact({ v, c: B }, next) !== null) return next;
+    }
+    candidate = next;
+  }
+}
+
+const zQuoContent = (a: ZPoly): ZPoly => zQuo(a, zContentInt(a));
+
+function zEqualsInt(a: ZPoly, b: ZPoly): boolean {
+  if (typeof a === "bigint" || typeof b === "bigint") return a === b;
+  return a.c.length === b.c.length && a.c.every((x, i) => x === b.c[i]);
+}
+
+/** Pseudo-remainder lc(b)^(deg a − deg b + 1)·a mod b on coefficient lists of one variable. */
+function prem(A: readonly ZPoly[], B: readonly ZPoly[]): ZPoly[] {
+  const db = B.length - 1;
+  const lb = B[db];
+  let R = A.slice();
+  let e = A.length - B.length + 1;
+  while (R.length - 1 >= db) {
+    const dr = R.length - 1;
+    const lr = R[dr];
+    const k = dr - db;
+    const next: ZPoly[] = new Array(dr);
+    for (let i = 0; i < dr; i++) next[i] = zMul(R[i], lb);
+    for (let j = 0; j < db; j++) next[k + j] = zSub(next[k + j], zMul(lr, B[j]));
+    while (next.length && next[next.length - 1] === 0n) next.pop();
+    R = next;
+    e--;
+  }
+  if (e > 0 && R.length) {
+    const f = zPow(lb, e);
+    R = R.map((x) => zMul(x, f));
+  }
+  return R;
+}
+
+/** Subresultant PRS for primitive a, b in the same main variable, deg a ≥ deg b. */
+function subresultantGcd(a: ZRec, b: ZRec): ZPoly {
+  let A = a.c;
+  let B = b.c;
+  let g: ZPoly = 1n;
+  let h: ZPoly = 1n;
+  for (;;) {
+    const delta = A.length - B.length;
+    const R = prem(A, B);
+    if (R.length === 0) break;
+    if (R.length === 1) return 1n;
+    A = B;
+    const divisor = zMul(g, zPow(h, delta));
+    B = R.map((x) => zQuo(x, divisor));
+    g = A[A.length - 1];
+    if (delta > 0) h = zQuo(zPow(g, delta), zPow(h, delta - 1));
+  }
+  return zPrimitive(zMake(a.v, B.slice()));
+}
+
+/** Integer content times the sign of the leading coefficient. Example: zUnitContent(-4*s - 2) === -2n. */
+export function zUnitContent(a: ZPoly): bigint {
+  const c = zContentInt(a);
+  return zLeadNum(a) < 0n ? -c : c;
+}

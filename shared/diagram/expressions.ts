@@ -1,0 +1,58 @@
+import type { ExprNode } from "@shared/expr/ast";
+import { exprDegreeBound } from "@shared/expr/degree";
+import { parseExpression } from "@shared/expr/parse";
+import type { Problem } from "@shared/diagram/problems";
+import { LIMITS, type DiagramDocument } from "@shared/diagram/schema";
+
+/**
+ * Parses every gain and transfer expression against the declared parameters and checks the cheap
+ * degree bound of the whole diagram (sum over blocks of max(deg num, deg den) as written; integrator = 1),
+ * so a diagram whose result could exceed the degree limit is refused before any algebra runs.
+ * Example: a gain "2*s" → problem "s-in-gain" on that block, field "expr", position 2.
+ */
+export function expressionProblems(doc: DiagramDocument): { problems: Problem[]; expressions: Map<string, ExprNode> } {
+  const problems: Problem[] = [];
+  const expressions = new Map<string, ExprNode>();
+  const parameters = Object.keys(doc.parameters ?? {});
+  let degree = 0;
+  for (const block of doc.blocks) {
+    if (block.type === "integrator") degree += 1;
+    if (block.type !== "gain" && block.type !== "transfer") continue;
+    const parsed = parseExpression(block.expr, { allowS: block.type === "transfer", parameters });
+    if (!parsed.ok) {
+      const { code, message, position } = parsed;
+      problems.push({ severity: "error", code, message: `Block "${block.id}", expr: ${message}`, blockId: block.id, field: "expr", position });
+      continue;
+    }
+    if (!expressions.has(block.id)) expressions.set(block.id, parsed.ast);
+    degree += exprDegreeBound(parsed.ast);
+  }
+  if (degree > LIMITS.resultDegree) {
+    problems.push({
+      severity: "error",
+      code: "degree-limit",
+      message:
+        `The blocks together reach degree ${degree} in s (sum of each block's degree as written), above the limit of ` +
+        `${LIMITS.resultDegree}; the closed-loop result could be too large to compute exactly — split the diagram`,
+    });
+  }
+  return { problems, expressions };
+}
+
+/** Range checks of parameter specs (warnings). Example: { value: 5, min: 0, max: 2 } → "parameter-out-of-range". */
+export function parameterProblems(doc: DiagramDocument): Problem[] {
+  const problems: Problem[] = [];
+  for (const [name, spec] of Object.entries(doc.parameters ?? {})) {
+    if (typeof spec === "number") continue;
+    const { value, min, max } = spec;
+    const field = `parameters.${name}`;
+    if (min !== undefined && max !== undefined && min > max) {
+      const message = `Parameter ${name} has min ${min} above max ${max}; swap them`;
+      problems.push({ severity: "warning", code: "parameter-min-above-max", message, field });
+    } else if ((min !== undefined && value < min) || (max !== undefined && value > max)) {
+      const message = `Parameter ${name} has value ${value} outside its range [${min ?? "−∞"}, ${max ?? "∞"}]`;
+      problems.push({ severity: "warning", code: "parameter-out-of-range", message, field });
+    }
+  }
+  return problems;
+}

@@ -1,0 +1,251 @@
+import { parse, type MathNode } from "mathjs";
+import type { ExprNode } from "@shared/expr/ast";
+import { LIMITS } from "@shared/diagram/schema";
+import { decimalToRational, MAX_DECIMAL_EXPONENT } from "@shared/expr/decimal";
+import { lexExpression, type Token } from "@shared/expr/lexer";
+
+/**
+ * Block expressions: numbers, `s`, declared parameters, + - * / ^, unary minus and plus, parentheses.
+ * mathjs builds the tree; we walk it in source order alongside our own tokens, which gives every node a
+ * position and its literal text (decimals become exact rationals). Anything mathjs reads beyond that
+ * grammar — functions, units, matrices, constants such as pi — is refused.
+ * Exponent choice: the exponent must be an integer literal 0..50, optionally in parentheses (`s^(2)`);
+ * computed exponents such as `s^(1+1)` are refused rather than evaluated.
+ */
+export type ParseErrorCode =
+  | "empty"
+  | "expr-too-long"
+  | "syntax"
+  | "implicit-multiplication"
+  | "function-call"
+  | "unknown-name"
+  | "s-in-gain"
+  | "bad-exponent"
+  | "exponent-limit"
+  | "division-by-zero"
+  | "number-range";
+
+export interface ParseOptions {
+  /** False for a gain: its expression may not contain `s`. */
+  allowS: boolean;
+  /** Declared parameter names; any other name is an error. */
+  parameters: Iterable<string>;
+}
+
+export type ParseFailure = { ok: false; code: ParseErrorCode; message: string; position: number };
+export type ParseResult = { ok: true; ast: ExprNode } | ParseFailure;
+
+class Refusal extends Error {
+  constructor(
+    readonly code: ParseErrorCode,
+    message: string,
+    readonly position: number,
+  ) {
+    super(message);
+  }
+}
+
+/**
+ * Parse a block expression into an exact tree, or say precisely what is wrong and where.
+ * Example: parseExpression("K*(s+2)/s", { allowS: true, parameters: ["K"] }) → { ok: true, ast: div(…) }.
+ */
+export function parseExpression(text: string, options: ParseOptions): ParseResult {
+  if (text.length > LIMITS.exprLength) {
+    return fail("expr-too-long", `The expression is ${text.length} characters long; the limit is ${LIMITS.exprLength}`, LIMITS.exprLength);
+  }
+  if (text.trim() === "") {
+    return fail("empty", "The expression is empty: enter a number, a parameter or an expression in s", 0);
+  }
+  const lexed = lexExpression(text);
+  if ("error" in lexed) return { ok: false, ...lexed.error };
+  let tree: MathNode;
+  try {
+    // Whitespace becomes plain spaces (same length, so positions hold): mathjs reads a newline as a separator.
+    tree = parse(text.replace(/\s/g, " "));
+  } catch (err) {
+    return mathjsSyntaxFailure(err, text, lexed.tokens);
+  }
+  try {
+    const walker = new TreeWalker(lexed.tokens, new Set(options.parameters), options.allowS);
+    return { ok: true, ast: walker.walkAll(tree) };
+  } catch (err) {
+    if (err instanceof Refusal) return fail(err.code, err.message, err.position);
+    throw err;
+  }
+}
+
+function fail(code: ParseErrorCode, message: string, position: number): ParseFailure {
+  return { ok: false, code, message, position };
+}
+
+const FRIENDLY_SYNTAX: [RegExp, string][] = [
+  [/^Unexpected end of expression/, "the expression ends where a number, s, a parameter or `(` was expected"],
+  [/^Value expected/, "a number, s, a parameter or `(` was expected here"],
+  [/^Parenthesis \) expected/, "a closing parenthesis `)` is missing"],
+  [/^Unexpected operator \)/, "this `)` has no matching `(`"],
+];
+
+function mathjsSyntaxFailure(err: unknown, text: string, tokens: Token[]): ParseFailure {
+  if (err instanceof RangeError) {
+    return fail("syntax", "The expression is nested too deeply to read; simplify its parentheses", 0);
+  }
+  const raw = err instanceof Error ? err.message : String(err);
+  const char = (err as { char?: unknown }).char;
+  const position = typeof char === "number" ? Math.min(Math.max(char - 1, 0), text.length) : 0;
+  const plain = raw.replace(/\s*\(char \d+\)\s*$/, "");
+  const friendly = FRIENDLY_SYNTAX.find(([re]) => re.test(plain))?.[1] ?? plain;
+  const token = tokens.find((t) => t.position === position);
+  const where = token ? `at \`${token.text}\` (position ${position})` : `at position ${position}`;
+  return fail("syntax", `Syntax error ${where}: ${friendly}`, position);
+}
+
+/** Walks the mathjs tree in source order, consuming one of our tokens per leaf, operator and parenthesis. */
+class TreeWalker {
+  private at = 0;
+
+  constructor(
+    private readonly tokens: Token[],
+    private readonly parameters: Set<string>,
+    private readonly allowS: boolean,
+  ) {}
+
+  walkAll(tree: MathNode): ExprNode {
+    const ast = this.walk(tree);
+    if (this.at < this.tokens.length) this.refuseHere();
+    return ast;
+  }
+
+  private walk(node: MathNode): ExprNode {
+    const n = node as MathNode & { op?: string; fn?: unknown; args?: MathNode[]; content?: MathNode; name?: string };
+    switch (node.type) {
+      case "ParenthesisNode": {
+        this.take("lparen");
+        const inner = this.walk(n.content as MathNode);
+        this.take("rparen");
+        return inner;
+      }
+      case "OperatorNode":
+        return n.args?.length === 1 ? this.unary(n.fn, n.args[0]) : this.binary(n.op ?? "", n.args ?? []);
+      case "ConstantNode":
+      case "SymbolNode": {
+        const token = this.take();
+        return token.kind === "num" ? this.number(token) : this.name(token);
+      }
+      default:
+        return this.refuseHere();
+    }
+  }
+
+  private unary(fn: unknown, arg: MathNode): ExprNode {
+    if (fn === "unaryMinus") {
+      this.take("op", "-");
+      return { kind: "neg", arg: this.walk(arg) };
+    }
+    if (fn === "unaryPlus") {
+      this.take("op", "+");
+      return this.walk(arg);
+    }
+    return this.refuseHere();
+  }
+
+  private binary(op: string, [leftNode, rightNode]: MathNode[]): ExprNode {
+    const left = this.walk(leftNode);
+    this.take("op", op);
+    const rightStart = this.peek()?.position ?? 0;
+    // Judge the exponent's shape before walking into it, so `s^K^2` is refused at its first exponent.
+    if (op === "^") this.exponentShape(rightNode, rightStart);
+    const right = this.walk(rightNode);
+    if (op === "^") return { kind: "pow", base: left, exp: this.exponent(right, rightStart) };
+    if (op === "/" && isLiteralZero(right)) {
+      throw new Refusal("division-by-zero", `Division by zero at position ${rightStart}: the divisor is the literal 0`, rightStart);
+    }
+    const kind = ({ "+": "add", "-": "sub", "*": "mul", "/": "div" } as const)[op as "+" | "-" | "*" | "/"];
+    if (!kind) return this.refuseHere();
+    return { kind, left, right };
+  }
+
+  private badExponent(position: number, why: string): never {
+    const shown = this.tokens.find((t) => t.position === position)?.text ?? "";
+    throw new Refusal("bad-exponent", `The exponent starting \`${shown}\` at position ${position} ${why}`, position);
+  }
+
+  /** Only a number literal, optionally in parentheses, may follow `^`. */
+  private exponentShape(node: MathNode, position: number): void {
+    let inner = node as MathNode & { content?: MathNode; fn?: unknown };
+    while (inner.type === "ParenthesisNode" && inner.content) inner = inner.content;
+    if (inner.type === "OperatorNode" && inner.fn === "unaryMinus") this.badExponent(position, "is negative; write 1/(…)^n instead");
+    if (inner.type !== "ConstantNode" || this.tokens.find((t) => t.position === position)?.kind === "name") {
+      this.badExponent(position, "must be a whole number written out, such as 2 (not a parameter, s or a calculation)");
+    }
+  }
+
+  private exponent(exp: ExprNode, position: number): number {
+    if (exp.kind !== "num" || exp.den !== 1n) return this.badExponent(position, "is not a whole number");
+    if (exp.num > BigInt(LIMITS.exponent)) {
+      throw new Refusal("exponent-limit", `The exponent ${exp.num} at position ${position} is above the limit of ${LIMITS.exponent}`, position);
+    }
+    return Number(exp.num);
+  }
+
+  private number(token: Token): ExprNode {
+    const value = decimalToRational(token.text);
+    if (!value) {
+      throw new Refusal(
+        "number-range",
+        `The number \`${token.text}\` at position ${token.position} has a power of ten beyond ±${MAX_DECIMAL_EXPONENT}`,
+        token.position,
+      );
+    }
+    return { kind: "num", num: value.num, den: value.den };
+  }
+
+  private name(token: Token): ExprNode {
+    if (token.kind !== "name") return this.refuseAt(token);
+    if (token.text === "s") {
+      if (this.allowS) return { kind: "s" };
+      throw new Refusal(
+        "s-in-gain",
+        `\`s\` at position ${token.position} is not allowed in a gain; use a transfer block for expressions in s`,
+        token.position,
+      );
+    }
+    if (this.parameters.has(token.text)) return { kind: "param", name: token.text };
+    throw new Refusal(
+      "unknown-name",
+      `Unknown name \`${token.text}\` at position ${token.position}: declare it as a parameter or fix the spelling` +
+        " (constants such as pi or e are not built in)",
+      token.position,
+    );
+  }
+
+  private peek(): Token | undefined {
+    return this.tokens[this.at];
+  }
+
+  private take(kind?: Token["kind"], text?: string): Token {
+    const token = this.peek();
+    if (!token || (kind && token.kind !== kind) || (text !== undefined && token.text !== text)) return this.refuseHere();
+    this.at += 1;
+    return token;
+  }
+
+  private refuseHere(): never {
+    const token = this.peek();
+    if (!token) throw new Refusal("syntax", "The expression ends too early", this.tokens.at(-1)?.position ?? 0);
+    return this.refuseAt(token);
+  }
+
+  private refuseAt(token: Token): never {
+    throw new Refusal(
+      "syntax",
+      `\`${token.text}\` at position ${token.position} is not part of the expression syntax ` +
+        "(numbers, s, parameters, + - * / ^ and parentheses)",
+      token.position,
+    );
+  }
+}
+
+function isLiteralZero(node: ExprNode): boolean {
+  if (node.kind === "neg") return isLiteralZero(node.arg);
+  return node.kind === "num" && node.num === 0n;
+}

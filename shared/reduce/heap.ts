@@ -1,0 +1,47 @@
+/**
+ * Binary min-heap ordered by a comparator; the reducer's agenda of nodes to work on.
+ * Example: const h = new MinHeap<number>((a, b) => a - b); h.push(3); h.push(1); h.pop() === 1.
+ */
+export class MinHeap<T> {
+  private readonly items: T[] = [];
+
+  constructor(private readonly before: (a: T, b: T) => number) {}
+
+  get size(): number {
+    return this.items.length;
+  }
+
+  push(item: T): void {
+    const items = this.items;
+    items.push(item);
+    let i = items.length - 1;
+    while (i > 0) {
+      const parent = (i - 1) >> 1;
+      if (this.before(items[i], items[parent]) >= 0) break;
+      [items[i], items[parent]] = [items[parent], items[i]];
+      i = parent;
+    }
+  }
+
+  pop(): T | undefined {
+    const items = this.items;
+    if (items.length === 0) return undefined;
+    const top = items[0];
+    const last = items.pop()!;
+    if (items.length > 0) {
+      items[0] = last;
+      let i = 0;
+      for (;;) {
+        const l = 2 * i + 1;
+        const r = l + 1;
+        let m = i;
+        if (l < items.length && this.before(items[l], items[m]) < 0) m = l;
+        if (r < items.length && this.before(items[r], items[m]) < 0) m = r;
+        if (m === i) break;
+        [items[i], items[m]] = [items[m], items[i]];
+        i = m;
+      }
+    }
+    return top;
+  }
+}

@@ -1,0 +1,93 @@
+import type { SfgEdge, SfgNode, SignalFlowGraph } from "@shared/reduce/graph";
+
+/**
+ * Which rule applies at a node, and how urgent it is. The reducer always applies the most urgent plan
+ * first — wire tidying, then parallel, series and feedback (the textbook rules), then moving a junction
+ * or pickoff point, then general node elimination — ties broken by fill-in (new edges) and then by the
+ * node's position in the document, so the same document always gives the same steps.
+ * Example: a node with one labelled edge in and one out plans { action: "series", urgency: 2 }.
+ */
+export type Action =
+  | "tidy" // series with a bare wire, or a junction next to a bare wire: no new expression
+  | "drop" // a node with nothing in or nothing out (determinant runs only)
+  | "parallel"
+  | "series"
+  | "feedback-pair" // sum e feeds only F, F's end p is fed only by e, and p feeds e back through H
+  | "feedback-self"
+  | "move-sum"
+  | "move-pickoff"
+  | "eliminate";
+
+export interface Plan {
+  action: Action;
+  urgency: number;
+  /** Edges the rule creates; orders plans of equal urgency. */
+  fill: number;
+}
+
+/** Pivots already found to be zero, so their rules are not planned again until the edges change. */
+export interface Blocked {
+  /** node → seq of a self-loop whose return difference is zero */
+  pivot: Map<string, number>;
+  /** node → "F.seq:H.seq" of a feedback pair whose return difference is zero */
+  pair: Map<string, string>;
+}
+
+const only = <T>(set: Set<T>): T => set.values().next().value as T;
+
+const plan = (action: Action, urgency: number, fill = 0): Plan => ({ action, urgency, fill });
+
+/** True when two edges run from the same node into `node`, or the node has two loops. */
+export function hasParallel<T>(node: SfgNode<T>): boolean {
+  if (node.loops.size > 1) return true;
+  const sources = new Set<string>();
+  for (const e of node.ins) {
+    if (sources.has(e.from)) return true;
+    sources.add(e.from);
+  }
+  return false;
+}
+
+/** The feedback edge p → e of a feedback pair at p, when the pattern holds. */
+export function feedbackPair<T>(
+  graph: SignalFlowGraph<T>,
+  node: SfgNode<T>,
+  terminals: ReadonlySet<string>,
+): { forward: SfgEdge<T>; back: SfgEdge<T> } | null {
+  if (node.ins.size !== 1 || node.loops.size > 0) return null;
+  const forward = only(node.ins);
+  const sum = graph.node(forward.from);
+  if (terminals.has(sum.id) || sum.outs.size !== 1 || sum.loops.size > 0) return null;
+  for (const back of node.outs) if (back.to === sum.id) return { forward, back };
+  return null;
+}
+
+/** The plan for one node, or null when nothing can be done there (yet). */
+export function planNode<T>(
+  graph: SignalFlowGraph<T>,
+  node: SfgNode<T>,
+  terminals: ReadonlySet<string>,
+  blocked: Blocked,
+): Plan | null {
+  if (hasParallel(node)) return plan("parallel", 1);
+  if (terminals.has(node.id)) return null;
+  const ins = node.ins.size;
+  const outs = node.outs.size;
+  const loop = node.loops.size > 0 ? only(node.loops) : null;
+  if (loop && blocked.pivot.get(node.id) === loop.seq) return null;
+  if (ins === 0 || outs === 0) return plan("drop", 0);
+  if (loop) return ins === 1 || outs === 1 ? plan("feedback-self", 3, 1) : plan("eliminate", 4, ins * outs);
+  if (ins === 1 && outs === 1) {
+    const bare = only(node.ins).label === null || only(node.outs).label === null;
+    return bare ? plan("tidy", 0) : plan("series", 2, 1);
+  }
+  const pair = feedbackPair(graph, node, terminals);
+  if (pair && blocked.pair.get(node.id) !== `${pair.forward.seq}:${pair.back.seq}`) return plan("feedback-pair", 3, 1);
+  if (outs === 1) return only(node.outs).label === null ? plan("tidy", 0) : plan("move-sum", 4, ins);
+  if (ins === 1) return only(node.ins).label === null ? plan("tidy", 0) : plan("move-pickoff", 4, outs);
+  return plan("eliminate", 4, ins * outs);
+}
+
+/** Orders plans: more urgent, then less fill, then earlier in the document. */
+export const comparePlans = (a: Plan & { order: number }, b: Plan & { order: number }): number =>
+  a.urgency - b.urgency || a.fill - b.fill || a.order - b.order;

@@ -1,0 +1,57 @@
+import type { SfgEdge } from "@shared/reduce/graph";
+import type { ReductionRule, ReductionStep } from "@shared/reduce/result";
+
+/** How a gain is printed in a step: plain expression syntax and LaTeX. */
+export type ShowGain<T> = (gain: T) => { expr: string; latex: string };
+
+/** How a step names an edge in its sentence: its label with sign ("c", "−h"), or a bare wire's sign. */
+export const edgeName = <T>(e: SfgEdge<T>): string =>
+  e.label === null ? (e.sign < 0 ? "−1" : "1") : e.sign < 0 ? `−${e.label}` : e.label;
+
+/**
+ * The reduction trace: numbers equivalent blocks eq1, eq2, … across all pairs of one document and
+ * records what each step consumed. Example: log.record("series", [ec, cp], [], g, (eq) => `… ${eq} …`) → "eq1".
+ */
+export class StepLog<T> {
+  readonly steps: ReductionStep[] = [];
+  private nextEq = 1;
+  private pair: { input: string; output: string } | null = null;
+
+  constructor(private readonly show: ShowGain<T>) {}
+
+  /** Steps recorded from now on belong to this input → output pair. */
+  beginPair(input: string, output: string): void {
+    this.pair = { input, output };
+  }
+
+  record(
+    rule: ReductionRule,
+    consumed: readonly SfgEdge<T>[],
+    extraBlocks: readonly (string | null)[],
+    gain: T,
+    describe: (eq: string) => string,
+  ): string {
+    const produced = `eq${this.nextEq++}`;
+    const blocks = new Set<string>();
+    const wires = new Set<string>();
+    for (const e of consumed) {
+      if (e.label !== null) blocks.add(e.label);
+      for (const b of e.blocks) blocks.add(b);
+      for (const w of e.wires) wires.add(w);
+    }
+    for (const b of extraBlocks) if (b !== null) blocks.add(b);
+    const shown = this.show(gain);
+    this.steps.push({
+      index: this.steps.length,
+      rule,
+      description: describe(produced),
+      consumedBlocks: [...blocks],
+      consumedWires: [...wires],
+      produced,
+      expr: shown.expr,
+      latex: shown.latex,
+      ...(this.pair ?? {}),
+    });
+    return produced;
+  }
+}

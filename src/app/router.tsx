@@ -1,0 +1,39 @@
+import { lazy } from "react";
+import { createBrowserRouter, Navigate } from "react-router-dom";
+import { AppShell } from "@/app/layout/AppShell";
+import { RequireAuth } from "@/app/RequireAuth";
+import { RouteError } from "@/app/routes/RouteError";
+import { paths } from "@/lib/paths";
+
+// Every page is its own chunk, so the first load carries only the shell and the page it shows.
+const SignInRoute = lazy(() => import("@/app/routes/SignInRoute").then((m) => ({ default: m.SignInRoute })));
+const SignUpRoute = lazy(() => import("@/app/routes/SignUpRoute").then((m) => ({ default: m.SignUpRoute })));
+const InviteRoute = lazy(() => import("@/app/routes/InviteRoute").then((m) => ({ default: m.InviteRoute })));
+const TeamsRoute = lazy(() => import("@/app/routes/TeamsRoute").then((m) => ({ default: m.TeamsRoute })));
+const TeamRoute = lazy(() => import("@/app/routes/TeamRoute").then((m) => ({ default: m.TeamRoute })));
+const MembersRoute = lazy(() => import("@/app/routes/MembersRoute").then((m) => ({ default: m.MembersRoute })));
+const DiagramRoute = lazy(() => import("@/app/routes/DiagramRoute").then((m) => ({ default: m.DiagramRoute })));
+const NotFoundRoute = lazy(() => import("@/app/routes/NotFoundRoute").then((m) => ({ default: m.NotFoundRoute })));
+
+export const router = createBrowserRouter([
+  {
+    element: <AppShell />,
+    errorElement: <RouteError />,
+    children: [
+      { path: paths.signIn, element: <SignInRoute /> },
+      { path: paths.signUp, element: <SignUpRoute /> },
+      { path: paths.invite, element: <InviteRoute /> },
+      {
+        element: <RequireAuth />,
+        children: [
+          { path: paths.home, element: <Navigate to={paths.teams} replace /> },
+          { path: paths.teams, element: <TeamsRoute /> },
+          { path: paths.team, element: <TeamRoute /> },
+          { path: paths.members, element: <MembersRoute /> },
+          { path: paths.diagram, element: <DiagramRoute /> },
+        ],
+      },
+      { path: "*", element: <NotFoundRoute /> },
+    ],
+  },
+]);

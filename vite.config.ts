@@ -1,0 +1,23 @@
+import { defineConfig } from "vite";
+import react from "@vitejs/plugin-react";
+import tailwindcss from "@tailwindcss/vite";
+import { fileURLToPath } from "node:url";
+
+const at = (p: string) => fileURLToPath(new URL(p, import.meta.url));
+const apiServer = "http://127.0.0.1:3000";
+
+export default defineConfig({
+  plugins: [react(), tailwindcss()],
+  resolve: {
+    alias: { "@shared": at("./shared"), "@": at("./src") },
+  },
+  build: {
+    outDir: "dist/client",
+    emptyOutDir: true,
+  },
+  server: {
+    port: 5173,
+    strictPort: true,
+    proxy: { "/api": apiServer, "/dev": apiServer },
+  },
+});
