@@ -11,7 +11,7 @@ test("a wrong password is refused with a visible error and the user stays signed
   await page.getByLabel("Password").fill(`${PASSWORD}-typo`);
   await page.getByRole("button", { name: "Sign in" }).click();
 
-  // common practice: one message for unknown e-mail and wrong password, so accounts cannot be probed.
+  // API contract (sign-in 401); common practice: the same words for an unknown e-mail, so accounts cannot be probed.
   await expect(page.getByRole("alert")).toHaveText("E-mail or password is wrong.");
   await expect(page).toHaveURL(/\/sign-in$/);
   await expect(page.getByRole("button", { name: "Sign out" })).toHaveCount(0);

@@ -18,7 +18,7 @@ import type { ExprNode } from "@shared/expr/ast";
  * coefficient. That makes the triple unique: equal values are structurally equal and print identically.
  * Zero is k = 0, n = d = 1. Printed, the denominator is scaled so its leading term (highest power of s, then
  * parameters alphabetically) has coefficient 1 — monic whenever its leading coefficient in s is a number.
- * Example: ratFromExpr of "K*(s+2)/(2*s)" prints as (K*s + 2*K)/s · 1/2 → numerator "1/2*K*s + K", denominator "s".
+ * Example: "K*(s+2)/(2*s)" is stored as k = 1/2, n = K*s + 2*K, d = s and prints as (1/2*K*s + K)/s.
  */
 export interface RatFn {
   readonly k: Q;
@@ -163,7 +163,7 @@ export function ratFromExpr(ast: ExprNode): RatFn {
 }
 
 /** Numerator as printed (pairs with ratDenominator). Example: ratNumerator of 1/(2*s + 1) is 1/2. */
-export const ratNumerator = (r: RatFn): Poly => (r.k.n === 0n ? polyZero : { q: qMul(r.k, q(zLeadNum(r.d))), z: r.n });
+export const ratNumerator = (r: RatFn): Poly => (r.k.n === 0n ? polyZero : { q: qMul(r.k, q(1n, zLeadNum(r.d))), z: r.n });
 
 /** Denominator with leading term coefficient 1 (monic when numeric). Example: ratDenominator of 1/(2*s + 1) is s + 1/2. */
 export const ratDenominator = (r: RatFn): Poly => polyMonic({ q: qOne, z: r.d });

@@ -72,6 +72,38 @@ function startingPoints(asc: number[]): [number, number][] {
   return out;
 }
 
+interface Step {
+  /** Newton correction p/p'. */
+  re: number;
+  im: number;
+  /** |p(z)| against its rounding-error bound: a smaller value means a better point. */
+  residual: number;
+  /** |p(z)| is at rounding-error level: the root cannot be improved. */
+  converged: boolean;
+}
+
+/** Newton correction at z; outside the unit disc through q(w) = w^n p(1/w), w = 1/z (no overflow). */
+function newton(desc: number[], asc: number[], x: number, y: number): Step {
+  const n = desc.length - 1;
+  const outside = x * x + y * y > 1;
+  const [wx, wy] = outside ? cdiv(1, 0, x, y) : [x, y];
+  const coeffs = outside ? asc : desc;
+  let [pr, pi, dr, di] = [coeffs[0], 0, 0, 0];
+  let bound = Math.abs(coeffs[0]);
+  const wm = Math.hypot(wx, wy);
+  for (let i = 1; i <= n; i++) {
+    [dr, di] = [dr * wx - di * wy + pr, dr * wy + di * wx + pi];
+    [pr, pi] = [pr * wx - pi * wy + coeffs[i], pr * wy + pi * wx];
+    bound = bound * wm + Math.abs(coeffs[i]);
+  }
+  const residual = Math.hypot(pr, pi) / bound;
+  // Outside: p/p' = z·q / (n·q − w·q').
+  const [re, im] = outside
+    ? cdiv(...cmul(x, y, pr, pi), n * pr - (wx * dr - wy * di), n * pi - (wx * di + wy * dr))
+    : cdiv(pr, pi, dr, di);
+  return { re, im, residual, converged: residual <= 4 * n * EPS };
+}
+
 function aberth(desc: number[]): [number, number][] {
   const n = desc.length - 1;
   const asc = desc.slice().reverse();
@@ -81,24 +113,11 @@ function aberth(desc: number[]): [number, number][] {
     for (let k = 0; k < n; k++) {
       if (done[k]) continue;
       const [x, y] = z[k];
-      const outside = x * x + y * y > 1;
-      // Outside the unit disc evaluate q(w) = w^n p(1/w) at w = 1/z: no overflow, same relative accuracy.
-      const [wx, wy] = outside ? cdiv(1, 0, x, y) : [x, y];
-      const coeffs = outside ? asc : desc;
-      let [pr, pi, dr, di] = [coeffs[0], 0, 0, 0];
-      let bound = Math.abs(coeffs[0]);
-      const wm = Math.hypot(wx, wy);
-      for (let i = 1; i <= n; i++) {
-        [dr, di] = [dr * wx - di * wy + pr, dr * wy + di * wx + pi];
-        [pr, pi] = [pr * wx - pi * wy + coeffs[i], pr * wy + pi * wx];
-        bound = bound * wm + Math.abs(coeffs[i]);
-      }
-      if (Math.hypot(pr, pi) <= 4 * n * EPS * bound) {
+      const step = newton(desc, asc, x, y);
+      if (step.converged) {
         done[k] = true;
         continue;
       }
-      // Newton ratio p/p'; outside: z·q / (n·q − w·q').
-      const [nr, ni] = outside ? cdiv(...cmul(x, y, pr, pi), n * pr - (wx * dr - wy * di), n * pi - (wx * di + wy * dr)) : cdiv(pr, pi, dr, di);
       let [sr, si] = [0, 0];
       for (let j = 0; j < n; j++) {
         if (j === k) continue;
@@ -106,14 +125,26 @@ function aberth(desc: number[]): [number, number][] {
         sr += ir;
         si += ii;
       }
-      const [mr, mi] = cmul(nr, ni, sr, si);
-      const [cr, ci] = cdiv(nr, ni, 1 - mr, -mi);
+      const [mr, mi] = cmul(step.re, step.im, sr, si);
+      const [cr, ci] = cdiv(step.re, step.im, 1 - mr, -mi);
       if (!Number.isFinite(cr) || !Number.isFinite(ci)) continue;
       z[k] = [x - cr, y - ci];
       if (Math.hypot(cr, ci) <= EPS * Math.hypot(x, y)) done[k] = true;
     }
   }
-  return z;
+  return z.map(([x, y]) => polish(desc, asc, x, y));
+}
+
+/** Two plain Newton steps, each kept only if it lowers the residual (it never jumps to a neighbouring root). */
+function polish(desc: number[], asc: number[], x: number, y: number): [number, number] {
+  let step = newton(desc, asc, x, y);
+  for (let i = 0; i < 2 && step.residual > 0; i++) {
+    const next = newton(desc, asc, x - step.re, y - step.im);
+    if (!(next.residual < step.residual)) break;
+    [x, y] = [x - step.re, y - step.im];
+    step = next;
+  }
+  return [x, y];
 }
 
 function cmul(a: number, b: number, c: number, d: number): [number, number] {

@@ -156,6 +156,7 @@ export const zNormSign = (a: ZPoly): ZPoly => (zLeadNum(a) < 0n ? zNeg(a) : a);
 /** Gcd of all integer coefficients (≥ 0). Example: zContentInt(4*s + 6) === 2n. */
 export function zContentInt(a: ZPoly, acc = 0n): bigint {
   if (typeof a === "bigint") return bigGcd(acc, a);
+  if (acc === 0n && allInt(a.c)) acc = smallest(a.c); // starting small makes Euclid on huge coefficients short
   for (const x of a.c) {
     acc = zContentInt(x, acc);
     if (acc === 1n) return 1n;
@@ -163,8 +164,19 @@ export function zContentInt(a: ZPoly, acc = 0n): bigint {
   return acc;
 }
 
+function smallest(c: readonly bigint[]): bigint {
+  let best = 0n;
+  for (const x of c) {
+    const m = x < 0n ? -x : x;
+    if (m !== 0n && (best === 0n || m < best)) best = m;
+  }
+  return best;
+}
+
 /** Exact quotient by a non-zero integer, or null when some coefficient is not divisible. Example: zDivInt(4*s, 2n) is 2*s. */
 export function zDivInt(a: ZPoly, k: bigint): ZPoly | null {
+  if (k === 1n) return a;
+  if (k === -1n) return zNeg(a);
   if (typeof a === "bigint") return a % k === 0n ? a / k : null;
   const c: ZPoly[] = [];
   for (const x of a.c) {

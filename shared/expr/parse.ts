@@ -153,9 +153,11 @@ class TreeWalker {
     this.take("op", op);
     const rightStart = this.peek()?.position ?? 0;
     // Judge the exponent's shape before walking into it, so `s^K^2` is refused at its first exponent.
-    if (op === "^") this.exponentShape(rightNode, rightStart);
+    if (op === "^") {
+      const literalAt = this.exponentLiteral(rightNode, rightStart);
+      return { kind: "pow", base: left, exp: this.exponent(this.walk(rightNode), literalAt) };
+    }
     const right = this.walk(rightNode);
-    if (op === "^") return { kind: "pow", base: left, exp: this.exponent(right, rightStart) };
     if (op === "/" && isLiteralZero(right)) {
       throw new Refusal("division-by-zero", `Division by zero at position ${rightStart}: the divisor is the literal 0`, rightStart);
     }
@@ -169,14 +171,17 @@ class TreeWalker {
     throw new Refusal("bad-exponent", `The exponent starting \`${shown}\` at position ${position} ${why}`, position);
   }
 
-  /** Only a number literal, optionally in parentheses, may follow `^`. */
-  private exponentShape(node: MathNode, position: number): void {
+  /** Only a number literal, optionally in parentheses, may follow `^`; returns the literal's position. */
+  private exponentLiteral(node: MathNode, position: number): number {
     let inner = node as MathNode & { content?: MathNode; fn?: unknown };
-    while (inner.type === "ParenthesisNode" && inner.content) inner = inner.content;
+    let depth = 0;
+    for (; inner.type === "ParenthesisNode" && inner.content; depth += 1) inner = inner.content;
     if (inner.type === "OperatorNode" && inner.fn === "unaryMinus") this.badExponent(position, "is negative; write 1/(…)^n instead");
-    if (inner.type !== "ConstantNode" || this.tokens.find((t) => t.position === position)?.kind === "name") {
+    const literal = this.tokens[this.at + depth];
+    if (inner.type !== "ConstantNode" || literal?.kind !== "num") {
       this.badExponent(position, "must be a whole number written out, such as 2 (not a parameter, s or a calculation)");
     }
+    return literal.position;
   }
 
   private exponent(exp: ExprNode, position: number): number {

@@ -6,7 +6,7 @@ exactly over QQ(s, parameters). Reads one JSON request on stdin, writes one JSON
 
   {"mode": "reduce", "jobs": [{"id", "doc", "ours"?: {"transfers": [...], "characteristic"}}]}
     -> {"results": [{"id", "transfers": [{"input", "output", "numerator", "denominator",
-        "agrees"?, "lowestTerms"?}], "characteristic", "characteristicAgrees"?, "error"?}]}
+        "agrees"?, "lowestTerms"?, "monic"?}], "characteristic", "characteristicAgrees"?, "error"?}]}
   {"mode": "bench", "doc", "input", "output"}
     -> {"seconds", "numeratorDegree", "denominatorDegree"}
 
@@ -149,8 +149,12 @@ def reduce_job(job):
                 entry["lowestTerms"] = False
             else:
                 n_o, d_o = parse(mine["numerator"], names), parse(mine["denominator"], names)
+                if not (n_o.is_polynomial() and d_o.is_polynomial()):  # a closed-form formula, not N/D
+                    n_o, d_o = fraction(together(n_o / d_o))
                 entry["agrees"] = bool(d_o != 0 and expand(n_o * d_ref - n_ref * d_o) == 0)
                 entry["lowestTerms"] = bool(n_o == 0 or not gcd(n_o, d_o).has(S))
+                if d_o.free_symbols <= {S}:  # numeric denominators are printed monic
+                    entry["monic"] = bool(sympy.Poly(d_o, S).LC() == 1)
         out["transfers"].append(entry)
     if ours is not None:
         ratio = cancel(parse(ours["characteristic"], names) / chi) if chi != 0 else sympy.zoo

@@ -49,8 +49,8 @@ const coreArb = fc.record({
   ports: fc.integer({ min: 1, max: 3 }),
   minus: fc.array(fc.boolean(), { minLength: 3, maxLength: 3 }),
   sources: fc.array(fc.nat(1000), { minLength: 3, maxLength: 3 }),
-  // about one port in four closes a loop
-  back: fc.array(fc.nat(3).map((x) => x === 0), { minLength: 3, maxLength: 3 }),
+  // about three ports in four close a loop when a strictly proper block is there to close it
+  back: fc.array(fc.nat(3).map((x) => x > 0), { minLength: 3, maxLength: 3 }),
   expr: exprSpecArb,
 });
 type CoreSpec = typeof coreArb extends fc.Arbitrary<infer T> ? T : never;
@@ -63,7 +63,7 @@ const specArb = (maxCore: number) =>
     inputs: fc.integer({ min: 1, max: 3 }),
     outputs: fc.integer({ min: 1, max: 3 }),
     outSources: fc.array(fc.nat(1000), { minLength: 3, maxLength: 3 }),
-    core: fc.array(coreArb, { minLength: 1, maxLength: maxCore }),
+    core: fc.array(coreArb, { minLength: 2, maxLength: maxCore }),
   });
 type DiagramSpec = typeof specArb extends (n: number) => fc.Arbitrary<infer T> ? T : never;
 
@@ -86,6 +86,7 @@ function transferExpr(e: ExprSpec, symbolic: boolean): BuiltExpr {
   const nums = Array.from({ length: numDeg }, (_, i) => pick(numPool, e.picks[3] + i));
   const scale = pick(scalePool, e.picks[4]);
   const denText = product(dens.map((d) => d[0]));
+  const over = dens.length === 1 ? `/${denText}` : `/(${denText})`;
   const distinct = dens.length === 2 && dens[0][0] !== dens[1][0];
   if (properness === "strict" && nums.length === 0 && distinct && e.style === 3) {
     // partial-fraction form: same lowest-terms denominator since the two factors are coprime
@@ -94,8 +95,8 @@ function transferExpr(e: ExprSpec, symbolic: boolean): BuiltExpr {
   }
   const numText = nums.length ? product(nums) : "";
   const styles = [
-    () => (numText ? `${scale}*${numText}/(${denText})` : `${scale}/(${denText})`),
-    () => (numText ? `${scale}/(${denText})*${numText}` : `${scale}/(${denText})`),
+    () => `${scale}${numText ? `*${numText}` : ""}${over}`,
+    () => `${scale}${over}${numText ? `*${numText}` : ""}`,
     () => [numText || "1", scale].join("*") + dens.map((d) => `/(${d[0]})`).join(""),
   ];
   return { text: pick(styles, e.style)(), den: denText, properness };

@@ -11,6 +11,8 @@ export interface TextbookCase {
   source: string;
   doc: DiagramDocument;
   expected: Record<string, string>;
+  /** Δ(s) times every block's denominator, worked out by hand (up to a constant factor). */
+  characteristic: string;
 }
 
 const G1 = "1/(s + 1)";
@@ -31,6 +33,7 @@ export const TEXTBOOK_CASES: TextbookCase[] = [
       { wn: 2, zeta: { value: 0.5 } },
     ),
     expected: { "r→y": "wn^2/(s^2 + 2*zeta*wn*s + wn^2)" },
+    characteristic: "s^2 + 2*zeta*wn*s + wn^2",
   },
   {
     name: "non-unity feedback G/(1+GH)",
@@ -47,6 +50,7 @@ export const TEXTBOOK_CASES: TextbookCase[] = [
       { K: 3 },
     ),
     expected: { "r→y": "K*(s + 5)/((s + 1)*(s + 5) + K)" },
+    characteristic: "(s + 1)*(s + 5) + K",
   },
   {
     name: "servo with velocity (tachometer) minor loop",
@@ -66,6 +70,7 @@ export const TEXTBOOK_CASES: TextbookCase[] = [
       { K: 5, kt: 0.2 },
     ),
     expected: { "r→y": "K/(s^2 + (1 + kt)*s + K)" },
+    characteristic: "s^2 + (1 + kt)*s + K",
   },
   {
     name: "two non-touching loops in cascade",
@@ -84,6 +89,7 @@ export const TEXTBOOK_CASES: TextbookCase[] = [
       ["r->e1:0", "e1->g1", "g1->h1", "h1->e1:1", "g1->e2:0", "e2->g2", "g2->h2", "h2->e2:1", "g2->y"],
     ),
     expected: { "r→y": `(${G1})*(${G2})/(1 + (${G1})*0.5 + (${G2})*4 + (${G1})*0.5*(${G2})*4)` },
+    characteristic: "(s + 1.5)*(s + 10)",
   },
   {
     name: "interlocked loops with an outer unity loop",
@@ -106,6 +112,7 @@ export const TEXTBOOK_CASES: TextbookCase[] = [
     expected: {
       "r→y": `(${G1})*(${G2})*(1/s)/(1 + (${G1})*(${G2})*0.5 + (${G2})*(1/s)*3 + (${G1})*(${G2})*(1/s))`,
     },
+    characteristic: "s*(s + 1)*(s + 2) + s + 6*(s + 1) + 2",
   },
   {
     name: "parallel paths, a loop that does not touch one path",
@@ -125,6 +132,7 @@ export const TEXTBOOK_CASES: TextbookCase[] = [
       { K: 0.5 },
     ),
     expected: { "r→y": "K + (3/(s + 2))/(1 + 3/((s + 2)*(s + 4)))" },
+    characteristic: "(s + 2)*(s + 4) + 3",
   },
   {
     name: "reference and disturbance inputs, output and control effort",
@@ -149,5 +157,6 @@ export const TEXTBOOK_CASES: TextbookCase[] = [
       "r→u": "(K*(s + 2)/s)/(1 + (K*(s + 2)/s)*(1/(s^2 + 3*s)))",
       "d→u": "-(K*(s + 2)/s)*(1/(s^2 + 3*s))/(1 + (K*(s + 2)/s)*(1/(s^2 + 3*s)))",
     },
+    characteristic: "s*(s^2 + 3*s) + K*(s + 2)",
   },
 ];

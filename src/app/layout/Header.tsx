@@ -13,9 +13,11 @@ export function Header() {
   const signOut = useSignOut();
   const navigate = useNavigate();
 
+  // flushSync: leave the signed-in page before the cleared session re-renders it, or RequireAuth would
+  // bounce to /sign-in?next=<this page> as if the session had expired.
   const doSignOut = () =>
     signOut.mutateAsync().then(
-      () => navigate(paths.signIn),
+      () => navigate(paths.signIn, { flushSync: true }),
       (e) => toast.error(`Could not sign out: ${errorMessage(e)}`),
     );
 

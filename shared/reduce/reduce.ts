@@ -1,0 +1,63 @@
+import type { Field } from "@shared/algebra/field";
+import type { Budget } from "@shared/reduce/budget";
+import { loopDeterminant, reducePairGraph } from "@shared/reduce/eliminate";
+import type { SignalFlowGraph } from "@shared/reduce/graph";
+import type { ReductionStep } from "@shared/reduce/result";
+import { loopComponents, reachable } from "@shared/reduce/scc";
+import { StepLog, type ShowGain } from "@shared/reduce/trace";
+
+/**
+ * Field-generic entry points of the reducer, on a signal-flow graph (see buildSignalGraph).
+ *
+ * det(I − A) of the whole graph is the product of the determinants of its loop components (the
+ * strongly connected parts: the matrix is block-triangular in their order), so each component is checked
+ * on its own and a singular one can be named.
+ * Example: loopDeterminants(graph, field, budget) → [{ nodes: ["e", "c", "p", "h"], det: 1 + c·p·h }].
+ */
+export interface LoopDeterminant<T> {
+  nodes: string[];
+  det: T;
+}
+
+export function loopDeterminants<T>(graph: SignalFlowGraph<T>, field: Field<T>, budget: Budget): LoopDeterminant<T>[] {
+  return loopComponents(graph).map((nodes) => ({ nodes, det: loopDeterminant(graph.subgraph(nodes), field, budget) }));
+}
+
+export interface PairTransfer<T> {
+  input: string;
+  output: string;
+  gain: T;
+  /** Label of the final edge: the equivalent block (or document block) that is the whole transfer. */
+  final: string | null;
+}
+
+/**
+ * Transfer of every (input, output) pair, each with all other inputs zero, with the steps of each pair's
+ * reduction (tagged with the pair). Only nodes on a path from the input to the output take part: loops
+ * elsewhere do not change this pair's transfer. A pair without a path has transfer 0 and no steps.
+ * Example: reducePairs(graph, field, show, [["r", "y"]], budget).transfers[0].gain is T(r → y).
+ */
+export function reducePairs<T>(
+  graph: SignalFlowGraph<T>,
+  field: Field<T>,
+  show: ShowGain<T>,
+  pairs: readonly (readonly [string, string])[],
+  budget: Budget,
+): { transfers: PairTransfer<T>[]; steps: ReductionStep[] } {
+  const log = new StepLog(show);
+  const forward = new Map<string, Set<string>>();
+  const backward = new Map<string, Set<string>>();
+  const reach = (cache: Map<string, Set<string>>, id: string, dir: "forward" | "backward") => {
+    if (!cache.has(id)) cache.set(id, reachable(graph, id, dir));
+    return cache.get(id)!;
+  };
+  const transfers = pairs.map(([input, output]) => {
+    const from = reach(forward, input, "forward");
+    if (!from.has(output)) return { input, output, gain: field.zero, final: null };
+    const to = reach(backward, output, "backward");
+    const onPath = [...from].filter((id) => to.has(id));
+    log.beginPair(input, output);
+    return { input, output, ...reducePairGraph(graph.subgraph(onPath), field, input, output, log, budget) };
+  });
+  return { transfers, steps: log.steps };
+}

@@ -1,0 +1,82 @@
+import pg from "pg";
+import type { Sequelize } from "sequelize";
+import { pino } from "pino";
+import request from "supertest";
+import type { Express } from "express";
+import { createApp } from "@server/app";
+import { createLucia } from "@server/auth/lucia";
+import { loadConfig, type Config } from "@server/config";
+import { createSequelize } from "@server/db/sequelize";
+import { startFakeMailService, type FakeMailService } from "@server/mail/fakeMailService";
+import { createMailer } from "@server/mail/mailer";
+
+let sharedSequelize: Sequelize | undefined;
+
+export const ORIGIN = "http://loopwright.test";
+
+export interface TestApp {
+  app: Express;
+  config: Config;
+  mailbox: FakeMailService;
+  /** A cookie-keeping client that sends our Origin, as the browser app does. */
+  client(): ReturnType<typeof request.agent>;
+  close(): Promise<void>;
+}
+
+/** The real app on the real test database (DATABASE_URL from `npm test`), with a real fake-SMTP on a free port. */
+export async function startTestApp(env: Record<string, string> = {}): Promise<TestApp> {
+  const config = loadConfig({
+    ...process.env,
+    NODE_ENV: "test",
+    PUBLIC_URL: ORIGIN,
+    LOG_LEVEL: "silent",
+    RATE_LIMIT_AUTH_PER_15_MIN: "100000",
+    ...env,
+  });
+  const pool = new pg.Pool({ connectionString: config.databaseUrl, connectionTimeoutMillis: 2000 });
+  pool.on("error", () => undefined);
+  // Sequelize models are bound to one instance per process: every test app of a file shares it.
+  sharedSequelize ??= createSequelize(config.databaseUrl);
+  const sequelize = sharedSequelize;
+  const mailbox = await startFakeMailService(0);
+  const app = createApp({
+    config,
+    sequelize,
+    lucia: createLucia(pool, config),
+    mailer: createMailer(config, mailbox.port),
+    mailbox,
+    log: pino({ level: config.logLevel }),
+  });
+  return {
+    app,
+    config,
+    mailbox,
+    client: () => request.agent(app).set("Origin", ORIGIN),
+    close: async () => {
+      await Promise.allSettled([mailbox.close(), pool.end()]);
+    },
+  };
+}
+
+let counter = 0;
+/** A fresh e-mail address for each call, so tests never collide on the shared test database. */
+export const uniqueEmail = (who: string) => `${who}.${Date.now().toString(36)}.${++counter}@example.test`;
+
+export const PASSWORD = "correct horse battery";
+
+/** Signs up a new account and returns its signed-in client and user. */
+export async function signedUp(t: TestApp, who: string) {
+  const client = t.client();
+  const email = uniqueEmail(who);
+  const res = await client.post("/api/auth/sign-up").send({ name: who, email, password: PASSWORD });
+  if (res.status !== 201) throw new Error(`sign-up failed: ${res.status} ${JSON.stringify(res.body)}`);
+  return { client, user: res.body.user as { id: string; email: string; name: string } };
+}
+
+/** The invitation link's token from the newest message the fake mail service caught for `to`. */
+export function invitationToken(mailbox: FakeMailService, to: string): string {
+  const message = mailbox.messages.find((m) => m.to.includes(to));
+  const match = message?.text.match(/\/invite\/([A-Za-z0-9_-]+)/);
+  if (!match) throw new Error(`no invitation mail for ${to}`);
+  return match[1];
+}
