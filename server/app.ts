@@ -35,6 +35,7 @@ export function createApp(deps: AppDeps): Express {
   const https = config.publicUrl.startsWith("https://");
   const app = express();
   app.disable("x-powered-by");
+  app.set("etag", false); // API answers are per-user and live: never a 304 from a stale validator
   app.set("trust proxy", "loopback");
   app.use(
     helmet({
@@ -46,6 +47,7 @@ export function createApp(deps: AppDeps): Express {
   const limiter = authLimiter(config.authRateLimit);
   const api = express.Router();
   api.use(requestLog(log));
+  api.use((_req, res, next) => (res.set("Cache-Control", "no-store"), next()));
   api.use(express.json({ limit: "2mb" }));
   api.use(originCheck(config.publicUrl));
   api.use(sessionMiddleware(deps.lucia));

@@ -4,8 +4,7 @@ import { createApp } from "@server/app";
 import { createLucia } from "@server/auth/lucia";
 import { loadConfig } from "@server/config";
 import { createSequelize } from "@server/db/sequelize";
-import { startFakeMailService, type FakeMailService } from "@server/mail/fakeMailService";
-import { createMailer } from "@server/mail/mailer";
+import { setUpMail } from "@server/mail/setUpMail";
 
 // Starts the server: database pools, mail (real SMTP, or the local fake), HTTP. SIGINT/SIGTERM close everything.
 const config = loadConfig();
@@ -16,22 +15,17 @@ const pool = new pg.Pool({ connectionString: config.databaseUrl, max: 10, connec
 pool.on("error", (err) => log.warn({ err: err.message }, "database connection lost"));
 const sequelize = createSequelize(config.databaseUrl);
 
-let mailbox: FakeMailService | null = null;
-if (!config.smtp) {
-  try {
-    mailbox = await startFakeMailService(config.fakeMailPort);
-  } catch (e) {
-    log.fatal(`Fake mail service could not listen on 127.0.0.1:${config.fakeMailPort}: ${(e as Error).message}`);
-    process.exit(1);
-  }
-  log.info(`Fake mail service on 127.0.0.1:${mailbox.port}; messages at ${config.publicUrl}/dev/mailbox`);
-}
+const { mailer, mailbox } = await setUpMail(config).catch((e: Error) => {
+  log.fatal(e.message);
+  process.exit(1);
+});
+if (mailbox) log.info(`Fake mail service on 127.0.0.1:${mailbox.port}; messages at ${config.publicUrl}/dev/mailbox`);
 
 const app = createApp({
   config,
   sequelize,
   lucia: createLucia(pool, config),
-  mailer: createMailer(config, mailbox?.port ?? config.fakeMailPort),
+  mailer,
   mailbox,
   log,
 });

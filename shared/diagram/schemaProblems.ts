@@ -18,31 +18,35 @@ const formatPath = (path: Path): string =>
 
 const text = (v: unknown): string => (typeof v === "string" ? v : JSON.stringify(v) ?? String(v));
 
-function subject(path: Path, raw: Record<string, unknown>): { at: Partial<Problem>; name: string; rest: Path } {
+/** Who the issue is about, the Problem field, and the part of the path a message still needs to name. */
+function subject(path: Path, raw: Record<string, unknown>): { at: Partial<Problem>; name: string; field?: string; detail?: string } {
   const [head, index, ...rest] = path;
   const list = raw[String(head)];
+  const tail = rest.length > 0 ? formatPath(rest) : undefined;
   if ((head === "blocks" || head === "wires") && typeof index === "number" && Array.isArray(list)) {
     const item = (list[index] ?? {}) as Record<string, unknown>;
     if (head === "blocks") {
       const blockId = typeof item.id === "string" && item.id !== "" ? item.id : `blocks[${index}]`;
-      return { at: { blockId }, name: item.id === blockId ? `Block "${blockId}"` : `Block ${blockId}`, rest };
+      const name = item.id === blockId ? `Block "${blockId}"` : `Block ${blockId}`;
+      return { at: { blockId }, name, field: tail, detail: tail };
     }
     const id = typeof item.id === "string" && item.id !== "" ? item.id : undefined;
     const wireId = wireLabel({ id, from: text(item.from ?? "?"), to: text(item.to ?? "?") }, index);
-    return { at: { wireId }, name: id ? `Wire "${id}"` : `Wire ${wireId.slice(5)}`, rest };
+    return { at: { wireId }, name: id ? `Wire "${id}"` : `Wire ${wireId.slice(5)}`, field: tail, detail: tail };
   }
-  return { at: {}, name: "The document", rest: path };
+  const field = path.length > 0 ? formatPath(path) : undefined;
+  if (head === "parameters" && index !== undefined) return { at: {}, name: `Parameter "${String(index)}"`, field, detail: tail };
+  return { at: {}, name: "The document", field, detail: field };
 }
 
 function toProblem(issue: z.core.$ZodIssue, raw: Record<string, unknown>): Problem {
-  const { at, name, rest } = subject(issue.path, raw);
-  const field = rest.length > 0 ? formatPath(rest) : undefined;
-  const where = field ? `${name}, field ${field}` : name;
+  const { at, name, field, detail } = subject(issue.path, raw);
+  const where = detail ? `${name}, field ${detail}` : name;
   const base = { severity: "error" as const, ...at, ...(field ? { field } : {}) };
   if (issue.code === "invalid_union" && "discriminator" in issue && issue.discriminator === "type") {
     const value = raw.blocks && issue.path.length >= 2 ? (raw.blocks as Record<string, unknown>[])[issue.path[1] as number]?.type : undefined;
     const options = (issue as { options?: unknown[] }).options?.join(", ") ?? "";
-    const message = value === undefined ? `${name} has no type: use one of ${options}` : `${name} has unknown type ${text(value)}: use one of ${options}`;
+    const message = value === undefined ? `${name} has no type: use one of ${options}` : `${name} has unknown type ${JSON.stringify(value)}: use one of ${options}`;
     return { ...base, code: value === undefined ? "missing-field" : "unknown-block-type", message };
   }
   if (issue.code === "invalid_type" && issue.message.endsWith("received undefined")) {
@@ -53,8 +57,7 @@ function toProblem(issue: z.core.$ZodIssue, raw: Record<string, unknown>): Probl
 
 function explain(issue: z.core.$ZodIssue, isParameter: boolean): string {
   if (issue.code === "invalid_key") {
-    const key = String(issue.path.at(-1));
-    return `the name "${key}" is not allowed — ${issue.issues[0]?.message ?? issue.message}`;
+    return `this name is not allowed — ${issue.issues[0]?.message ?? issue.message}`;
   }
   if (issue.code === "invalid_union") {
     // Report the branch that got furthest: its nested path says which sub-field is wrong.
@@ -66,4 +69,4 @@ function explain(issue: z.core.$ZodIssue, isParameter: boolean): string {
   return plain(issue.message);
 }
 
-const plain = (message: string): string => message.replace(/^Invalid input: /, "");
+const plain = (message: string): string => message.replace(/^Invalid (input|option): /, "");

@@ -23,3 +23,24 @@ it("lists caught messages with clickable links on /dev/mailbox while the fake ma
   const config = await request(t.app).get("/api/config");
   expect(config.body.mailbox).toBe(true);
 });
+
+it("sends through the configured SMTP server and has no mailbox page when SMTP settings are given", async () => {
+  // A second fake stands in for the hosted mail service here: the app must deliver to it over SMTP.
+  const { startFakeMailService } = await import("@server/mail/fakeMailService");
+  const hosted = await startFakeMailService(0);
+  const smtp = await startTestApp({ SMTP_HOST: "127.0.0.1", SMTP_PORT: String(hosted.port) });
+  try {
+    expect(smtp.mailbox).toBeNull();
+    expect((await request(smtp.app).get("/dev/mailbox")).status).toBe(404);
+    expect((await request(smtp.app).get("/api/dev/mailbox")).status).toBe(404);
+    expect((await request(smtp.app).get("/api/config")).body.mailbox).toBe(false);
+    const owner = await signedUp(smtp, "lena");
+    const teamId = (await owner.client.post("/api/teams").send({ name: "Winder" })).body.team.id;
+    const email = uniqueEmail("omar");
+    await owner.client.post(`/api/teams/${teamId}/invitations`).send({ email, role: "editor" }).expect(201);
+    expect(hosted.messages.map((m) => m.to)).toEqual([email]);
+  } finally {
+    await smtp.close();
+    await hosted.close();
+  }
+});

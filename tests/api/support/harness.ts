@@ -7,8 +7,8 @@ import { createApp } from "@server/app";
 import { createLucia } from "@server/auth/lucia";
 import { loadConfig, type Config } from "@server/config";
 import { createSequelize } from "@server/db/sequelize";
-import { startFakeMailService, type FakeMailService } from "@server/mail/fakeMailService";
-import { createMailer } from "@server/mail/mailer";
+import type { FakeMailService } from "@server/mail/fakeMailService";
+import { setUpMail } from "@server/mail/setUpMail";
 
 let sharedSequelize: Sequelize | undefined;
 
@@ -17,6 +17,7 @@ export const ORIGIN = "http://loopwright.test";
 export interface TestApp {
   app: Express;
   config: Config;
+  /** The fake mail service, or null when SMTP settings are given. */
   mailbox: FakeMailService;
   /** A cookie-keeping client that sends our Origin, as the browser app does. */
   client(): ReturnType<typeof request.agent>;
@@ -31,6 +32,7 @@ export async function startTestApp(env: Record<string, string> = {}): Promise<Te
     PUBLIC_URL: ORIGIN,
     LOG_LEVEL: "silent",
     RATE_LIMIT_AUTH_PER_15_MIN: "100000",
+    FAKE_MAIL_PORT: "0",
     ...env,
   });
   const pool = new pg.Pool({ connectionString: config.databaseUrl, connectionTimeoutMillis: 2000 });
@@ -38,22 +40,22 @@ export async function startTestApp(env: Record<string, string> = {}): Promise<Te
   // Sequelize models are bound to one instance per process: every test app of a file shares it.
   sharedSequelize ??= createSequelize(config.databaseUrl);
   const sequelize = sharedSequelize;
-  const mailbox = await startFakeMailService(0);
+  const { mailer, mailbox } = await setUpMail(config);
   const app = createApp({
     config,
     sequelize,
     lucia: createLucia(pool, config),
-    mailer: createMailer(config, mailbox.port),
+    mailer,
     mailbox,
     log: pino({ level: config.logLevel }),
   });
   return {
     app,
     config,
-    mailbox,
+    mailbox: mailbox as FakeMailService,
     client: () => request.agent(app).set("Origin", ORIGIN),
     close: async () => {
-      await Promise.allSettled([mailbox.close(), pool.end()]);
+      await Promise.allSettled([mailbox?.close(), pool.end()]);
     },
   };
 }
