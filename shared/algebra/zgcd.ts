@@ -1,4 +1,5 @@
 // Own exact gcd on BigInt: nerdamer/mathjs are too slow and not exact enough for the reduction hot path.
+import { heuristicGcd } from "@shared/algebra/heugcd";
 import { bigGcd } from "@shared/algebra/rational";
 import { bigMod, evalModP, gcdModP, invMod, modPrime, mulMod, type ModPoly } from "@shared/algebra/modp";
 import {
@@ -10,7 +11,7 @@ import {
  * Greatest common divisor in Z[s, params], sign-normalised (leading numeric coefficient > 0).
  * Strategy: split off contents recursively; one modular image at a random point answers the common
  * "coprime" case and the "one divides the other" case; otherwise a modular gcd with CRT (integers in s only)
- * or the subresultant PRS (with parameters). Example: zGcd(s^2 - 1, 2*s + 2) is s + 1.
+ * or the heuristic gcd (with parameters), with the subresultant PRS as the last resort. Example: zGcd(s^2 - 1, 2*s + 2) is s + 1.
  */
 export function zGcd(a: ZPoly, b: ZPoly): ZPoly {
   if (a === 0n) return zNormSign(b);
@@ -49,7 +50,7 @@ function gcdPrimitive(a: ZRec, b: ZRec): ZPoly {
   if (bound === 0) return 1n;
   if (bound === deg(b) && zDivExact(a, b) !== null) return b;
   if (allInt(a.c) && allInt(b.c)) return modularGcd(a.v, a.c, b.c);
-  return subresultantGcd(a, b);
+  return heuristicGcd(a, b, zGcd) ?? subresultantGcd(a, b);
 }
 
 let seed = 0x2545f491;

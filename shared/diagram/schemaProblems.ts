@@ -32,7 +32,7 @@ function subject(path: Path, raw: Record<string, unknown>): { at: Partial<Proble
     }
     const id = typeof item.id === "string" && item.id !== "" ? item.id : undefined;
     const wireId = wireLabel({ id, from: text(item.from ?? "?"), to: text(item.to ?? "?") }, index);
-    return { at: { wireId }, name: id ? `Wire "${id}"` : `Wire ${wireId.slice(5)}`, field: tail, detail: tail };
+    return { at: { wireId }, name: id ? `Wire "${id}"` : wireId.replace(/^wire/, "Wire"), field: tail, detail: tail };
   }
   const field = path.length > 0 ? formatPath(path) : undefined;
   if (head === "parameters" && index !== undefined) return { at: {}, name: `Parameter "${String(index)}"`, field, detail: tail };

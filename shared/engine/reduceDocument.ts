@@ -8,11 +8,12 @@ import { loadDiagram, validateDiagram } from "@shared/diagram/validate";
 import { blockGains } from "@shared/engine/blockGains";
 import { cancelledModes, characteristicPolynomial } from "@shared/engine/modes";
 import { selectPairs } from "@shared/engine/pairs";
-import { listBlocks, loopProblems } from "@shared/engine/wellPosed";
+import { checkLoops } from "@shared/engine/loops";
+import { listBlocks } from "@shared/engine/wellPosed";
 import { buildSignalGraph } from "@shared/reduce/build";
 import { createBudget, ReductionLimitError } from "@shared/reduce/budget";
 import { SingularLoopError } from "@shared/reduce/eliminate";
-import { loopDeterminants, reducePairs } from "@shared/reduce/reduce";
+import { reducePairs } from "@shared/reduce/reduce";
 import type { Cancellation, ReductionResult } from "@shared/reduce/result";
 
 export interface ReduceOptions {
@@ -66,14 +67,24 @@ function reduceChecked(
 ): ReduceOutcome {
   const graph = buildSignalGraph(doc, gains, ratField);
   const budget = createBudget(opts.limits);
-  const loops = loopDeterminants(graph, ratField, budget);
-  const loopIssues = loopProblems(loops, gains);
+  let reduced: ReturnType<typeof reducePairs<RatFn>>;
+  try {
+    reduced = reducePairs(graph, ratField, showRat, pairs, budget, true);
+  } catch (err) {
+    // A singular loop on a pair's paths: name it through the loop-by-loop check.
+    const named = err instanceof SingularLoopError ? checkLoops(graph, gains, undefined, budget).problems : [];
+    if (named.some(isError)) return { ok: false, problems: [...found, ...named] };
+    throw err;
+  }
+  const { transfers, steps } = reduced;
+  const first = transfers.find((t) => t.pivots !== null);
+  const check = checkLoops(graph, gains, first, budget);
+  const loopIssues = check.problems;
   if (loopIssues.some(isError)) return { ok: false, problems: [...found, ...loopIssues] };
-  const chi = characteristicPolynomial(loops, gains);
+  const chi = characteristicPolynomial(check, gains, first);
   if (polyDegree(chi) > DEGREE_LIMIT) {
     throw new AlgebraError("degree-limit", `The characteristic polynomial has degree ${polyDegree(chi)} in s; the limit is ${DEGREE_LIMIT}.`);
   }
-  const { transfers, steps } = reducePairs(graph, ratField, showRat, pairs, budget);
   const nominal = Object.fromEntries(Object.entries(doc.parameters).map(([k, v]) => [k, parameterValue(v)]));
   const cache = new Map<string, Cancellation[]>();
   return {

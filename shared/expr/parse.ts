@@ -60,8 +60,7 @@ export function parseExpression(text: string, options: ParseOptions): ParseResul
   if ("error" in lexed) return { ok: false, ...lexed.error };
   let tree: MathNode;
   try {
-    // Whitespace becomes plain spaces (same length, so positions hold): mathjs reads a newline as a separator.
-    tree = parse(text.replace(/\s/g, " "));
+    tree = parse(maskForMathjs(text, lexed.tokens));
   } catch (err) {
     return mathjsSyntaxFailure(err, text, lexed.tokens);
   }
@@ -72,6 +71,17 @@ export function parseExpression(text: string, options: ParseOptions): ParseResul
     if (err instanceof Refusal) return fail(err.code, err.message, err.position);
     throw err;
   }
+}
+
+/**
+ * What mathjs gets to read: whitespace as plain spaces (a newline would separate statements) and every name
+ * as a neutral same-length symbol `x__`, so names mathjs treats as keywords, constants or operators
+ * (`not`, `true`, `Infinity`, `mod`) stay plain parameter names. Same length keeps mathjs's error positions.
+ */
+function maskForMathjs(text: string, tokens: Token[]): string {
+  const chars = text.replace(/\s/g, " ").split("");
+  for (const t of tokens) if (t.kind === "name") chars.splice(t.position, t.text.length, ..."x".padEnd(t.text.length, "_"));
+  return chars.join("");
 }
 
 function fail(code: ParseErrorCode, message: string, position: number): ParseFailure {
@@ -116,7 +126,7 @@ class TreeWalker {
   }
 
   private walk(node: MathNode): ExprNode {
-    const n = node as MathNode & { op?: string; fn?: unknown; args?: MathNode[]; content?: MathNode; name?: string };
+    const n = node as MathNode & { op?: string; fn?: unknown; args?: MathNode[]; content?: MathNode };
     switch (node.type) {
       case "ParenthesisNode": {
         this.take("lparen");

@@ -40,6 +40,7 @@ const context = <T>(
   terminals: string[],
   log: StepLog<T> | null,
   budget: Budget,
+  determinant: boolean,
 ): RuleContext<T> => ({
   graph,
   field,
@@ -47,8 +48,16 @@ const context = <T>(
   budget,
   terminals: new Set(terminals),
   blocked: { pivot: new Map(), pair: new Map() },
-  det: field.one,
+  pivots: determinant ? [] : null,
 });
+
+/** Product by halves, so the operands of each multiplication stay about the same size. */
+export function fieldProduct<T>(field: Field<T>, items: readonly T[]): T {
+  if (items.length === 0) return field.one;
+  if (items.length === 1) return items[0];
+  const half = items.length >> 1;
+  return field.mul(fieldProduct(field, items.slice(0, half)), fieldProduct(field, items.slice(half)));
+}
 
 /**
  * det(I − A) of a graph (one strongly connected loop component): the product of the pivots of a full
@@ -56,16 +65,18 @@ const context = <T>(
  * Example: a single loop of gain L gives 1 − L.
  */
 export function loopDeterminant<T>(graph: SignalFlowGraph<T>, field: Field<T>, budget: Budget): T {
-  const ctx = context(graph, field, [], null, budget);
+  const ctx = context(graph, field, [], null, budget, true);
   runRules(ctx);
-  if (graph.nodes.size === 0) return ctx.det;
-  return field.mul(ctx.det, solveDense(field, graph, null).det);
+  if (graph.nodes.size > 0) ctx.pivots!.push(solveDense(field, graph, null).det);
+  return fieldProduct(field, ctx.pivots!);
 }
 
 /**
  * Reduces a graph holding only the nodes on paths from `input` to `output` to one edge input → output,
- * recording every step in `log`. Returns the transfer and the label of the final edge (null for a bare
- * wire). The graph is consumed. Throws when the remaining loops are singular (an algebraic loop).
+ * recording every step in `log`. Returns the transfer, the label of the final edge (null for a bare
+ * wire) and, when `determinant` is set, the pivots whose product is det(I − A) of the graph (multiplying
+ * them out costs as much as the rules, so it is left to the caller). The graph is consumed. Throws
+ * SingularLoopError when the remaining loops are singular (an algebraic loop).
  * Example: r → e → c → p → y with p fed back through h to e gives c·p/(1 + c·p·h), final "eq2".
  */
 export function reducePairGraph<T>(
@@ -75,19 +86,21 @@ export function reducePairGraph<T>(
   output: string,
   log: StepLog<T> | null,
   budget: Budget,
-): { gain: T; final: string | null } {
-  const ctx = context(graph, field, [input, output], log, budget);
+  determinant = false,
+): { gain: T; final: string | null; pivots: T[] | null } {
+  const ctx = context(graph, field, [input, output], log, budget, determinant);
   runRules(ctx);
   if (graph.nodes.size > 2) solveRemaining(ctx, input, output);
-  const edges = [...graph.node(output).ins];
-  if (edges.length === 0) return { gain: field.zero, final: null };
-  return { gain: edges[0].gain, final: edges[0].label };
+  const [edge] = graph.node(output).ins;
+  const pivots = ctx.pivots;
+  return edge ? { gain: edge.gain, final: edge.label, pivots } : { gain: field.zero, final: null, pivots };
 }
 
 /** One general elimination of every node left, solved together (see solveDense). */
 function solveRemaining<T>(ctx: RuleContext<T>, input: string, output: string): void {
   const { graph, field } = ctx;
-  const { solution } = solveDense(field, graph, input);
+  const { solution, det } = solveDense(field, graph, input);
+  ctx.pivots?.push(det);
   if (!solution) throw new SingularLoopError([...graph.nodes.keys()].filter((id) => id !== input && id !== output));
   const edges: SfgEdge<T>[] = graph.edges();
   const inner = [...graph.nodes.values()].filter((n) => n.id !== input && n.id !== output);

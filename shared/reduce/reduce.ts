@@ -29,12 +29,18 @@ export interface PairTransfer<T> {
   gain: T;
   /** Label of the final edge: the equivalent block (or document block) that is the whole transfer. */
   final: string | null;
+  /** Nodes on a path from input to output (the only ones that take part). */
+  nodes: string[];
+  /** Pivots whose product is det(I − A) over `nodes`: for the first pair with a path, when asked for. */
+  pivots: T[] | null;
 }
 
 /**
  * Transfer of every (input, output) pair, each with all other inputs zero, with the steps of each pair's
  * reduction (tagged with the pair). Only nodes on a path from the input to the output take part: loops
  * elsewhere do not change this pair's transfer. A pair without a path has transfer 0 and no steps.
+ * With `determinant`, the first pair with a path also returns the pivots of its reduction, whose product
+ * is det(I − A) over its nodes: that saves a separate determinant run of the same loops.
  * Example: reducePairs(graph, field, show, [["r", "y"]], budget).transfers[0].gain is T(r → y).
  */
 export function reducePairs<T>(
@@ -43,6 +49,7 @@ export function reducePairs<T>(
   show: ShowGain<T>,
   pairs: readonly (readonly [string, string])[],
   budget: Budget,
+  determinant = false,
 ): { transfers: PairTransfer<T>[]; steps: ReductionStep[] } {
   const log = new StepLog(show);
   const forward = new Map<string, Set<string>>();
@@ -51,13 +58,16 @@ export function reducePairs<T>(
     if (!cache.has(id)) cache.set(id, reachable(graph, id, dir));
     return cache.get(id)!;
   };
-  const transfers = pairs.map(([input, output]) => {
+  let wantDet = determinant;
+  const transfers = pairs.map(([input, output]): PairTransfer<T> => {
     const from = reach(forward, input, "forward");
-    if (!from.has(output)) return { input, output, gain: field.zero, final: null };
+    if (!from.has(output)) return { input, output, gain: field.zero, final: null, nodes: [], pivots: null };
     const to = reach(backward, output, "backward");
-    const onPath = [...from].filter((id) => to.has(id));
+    const nodes = [...from].filter((id) => to.has(id));
     log.beginPair(input, output);
-    return { input, output, ...reducePairGraph(graph.subgraph(onPath), field, input, output, log, budget) };
+    const reduced = reducePairGraph(graph.subgraph(nodes), field, input, output, log, budget, wantDet);
+    wantDet = false;
+    return { input, output, ...reduced, nodes };
   });
   return { transfers, steps: log.steps };
 }

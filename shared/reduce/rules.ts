@@ -7,8 +7,8 @@ import { edgeName, type StepLog } from "@shared/reduce/trace";
 
 /**
  * The reduction rules on the signal-flow graph. Each is an exact elimination: a node goes away (or a
- * loop is closed) and the transfer between the remaining nodes is unchanged. `det` collects the pivots
- * (return differences), whose product is det(I − A) of the graph reduced.
+ * loop is closed) and the transfer between the remaining nodes is unchanged. `pivots` collects the pivots
+ * (return differences) when asked: their product is det(I − A) of the graph reduced.
  * Example: applyPlan(ctx, node, "series") turns a → n → b into one edge a → b with the product gain.
  */
 export interface RuleContext<T> {
@@ -19,7 +19,8 @@ export interface RuleContext<T> {
   readonly budget: Budget;
   readonly terminals: ReadonlySet<string>;
   readonly blocked: Blocked;
-  det: T;
+  /** Factors of det(I − A) collected so far, or null when the determinant is not wanted. */
+  readonly pivots: T[] | null;
 }
 
 type Draft<T> = Omit<SfgEdge<T>, "seq" | "from" | "to">;
@@ -46,9 +47,11 @@ function produce<T>(
 
 const signed = <T>(field: Field<T>, sign: 1 | -1, gain: T): T => (sign > 0 ? gain : field.neg(gain));
 
-/** "1 − F·H" written with the feedback edge's sign folded in: "1 + F·h" for negative feedback. */
-const returnDifference = <T>(loop: string, back: SfgEdge<T>): string =>
-  back.sign < 0 ? `1 + ${loop}${back.label ?? "1"}` : `1 − ${loop}${back.label ?? "1"}`;
+/** "1 − F·H" with the feedback edge's sign folded in: "1 + F·h" for negative feedback, "1 + F" for a bare wire. */
+function returnDifference<T>(forward: string | null, back: SfgEdge<T>): string {
+  const loop = [forward, back.label].filter((x) => x !== null).join("·") || "1";
+  return `1 ${back.sign < 0 ? "+" : "−"} ${loop}`;
+}
 
 const sorted = <T>(edges: Iterable<SfgEdge<T>>): SfgEdge<T>[] => [...edges].sort((a, b) => a.seq - b.seq);
 
@@ -82,18 +85,20 @@ function tidy<T>(ctx: RuleContext<T>, node: SfgNode<T>): void {
     });
     return;
   }
-  // A junction next to a bare wire: the labelled edges on the other side slide across it unchanged.
-  const wire = ins.length === 1 ? ins[0] : outs[0];
-  const many = ins.length === 1 ? outs : ins;
-  many.forEach((e, k) => {
-    const first = k === 0 ? { blocks: [...wire.blocks, ...(node.own ? [node.own] : [])], wires: wire.wires } : null;
-    const ends = ins.length === 1 ? [wire.from, e.to] : [e.from, wire.to];
-    link(ctx, ends[0], ends[1], {
+  // A junction next to a bare wire: the edges on its other side slide across it unchanged; the first
+  // one carries the wire and the junction's block along.
+  const upstream = ins.length === 1; // the wire feeds a pickoff point; otherwise it leaves a junction
+  const wire = upstream ? ins[0] : outs[0];
+  (upstream ? outs : ins).forEach((e, k) => {
+    const carried = k === 0 ? { blocks: [...wire.blocks, ...(node.own ? [node.own] : [])], wires: wire.wires } : null;
+    const join = (mine: readonly string[], theirs: readonly string[] = []) =>
+      upstream ? [...theirs, ...mine] : [...mine, ...theirs];
+    link(ctx, upstream ? wire.from : e.from, upstream ? e.to : wire.to, {
       gain: signed(field, wire.sign, e.gain),
       label: e.label,
       sign: e.sign * wire.sign > 0 ? 1 : -1,
-      blocks: ins.length === 1 ? [...(first?.blocks ?? []), ...e.blocks] : [...e.blocks, ...(first?.blocks ?? [])],
-      wires: ins.length === 1 ? [...(first?.wires ?? []), ...e.wires] : [...e.wires, ...(first?.wires ?? [])],
+      blocks: join(e.blocks, carried?.blocks),
+      wires: join(e.wires, carried?.wires),
     });
   });
 }
@@ -142,36 +147,41 @@ function feedbackSelf<T>(ctx: RuleContext<T>, node: SfgNode<T>): boolean {
   const onInput = node.ins.size === 1;
   const edge = onInput ? [...node.ins][0] : [...node.outs][0];
   const gain = ctx.field.div(edge.gain, pivot.value);
-  const [g, rd] = [edgeName(edge), returnDifference("", loop)];
-  const where = onInput ? `${g} into ${node.id}` : `${node.id} out through ${g}`;
+  const [g, rd] = [edgeName(edge), returnDifference(null, loop)];
+  const side = onInput ? `into ${node.id}` : `out of ${node.id}`;
   const draft = produce(ctx, "feedback", [edge, loop], [], gain, (eq) =>
-    `Feedback: the loop ${edgeName(loop)} around ${node.id} closes over ${where}: ${eq} = ${g}/(${rd}).`,
+    `Feedback: the loop ${edgeName(loop)} around ${node.id} closes over ${g} (${side}): ${eq} = ${g}/(${rd}).`,
   );
   ctx.graph.removeEdge(edge);
   ctx.graph.removeEdge(loop);
   link(ctx, edge.from, edge.to, draft);
-  ctx.det = ctx.field.mul(ctx.det, pivot.value);
+  ctx.pivots?.push(pivot.value);
   return true;
 }
 
 function feedbackOfPair<T>(ctx: RuleContext<T>, node: SfgNode<T>): boolean {
   const { forward, back } = feedbackPair(ctx.graph, node, ctx.terminals)!;
   const { field } = ctx;
-  const pivot = field.sub(field.one, field.mul(forward.gain, back.gain));
-  if (field.isZero(pivot)) {
+  // F/(1 − F·H) as 1/(1/F − H): one addition instead of two products; the pivot is F·(1/F − H).
+  const inverse = field.isZero(forward.gain) ? null : field.sub(field.div(field.one, forward.gain), back.gain);
+  if (inverse && field.isZero(inverse)) {
     ctx.blocked.pair.set(node.id, `${forward.seq}:${back.seq}`);
     return false;
   }
-  const gain = field.div(forward.gain, pivot);
+  const gain = inverse ? field.div(field.one, inverse) : field.zero;
   const f = edgeName(forward);
   const kind = back.sign < 0 ? "negative" : "positive";
+  const how =
+    back.label === null
+      ? `with unity ${kind} feedback to ${forward.from}`
+      : `with ${edgeName(back)} fed back to ${forward.from} (${kind} feedback)`;
   const draft = produce(ctx, "feedback", [forward, back], [], gain, (eq) =>
-    `Feedback: ${f} with ${edgeName(back)} fed back to ${forward.from} (${kind} feedback) becomes ${eq} = ${f}/(${returnDifference(`${f}·`, back)}).`,
+    `Feedback: ${f} ${how} becomes ${eq} = ${f}/(${returnDifference(f, back)}).`,
   );
   ctx.graph.removeEdge(forward);
   ctx.graph.removeEdge(back);
   link(ctx, forward.from, forward.to, draft);
-  ctx.det = field.mul(ctx.det, pivot);
+  if (inverse) ctx.pivots?.push(forward.gain, inverse);
   return true;
 }
 
@@ -201,12 +211,14 @@ function move<T>(ctx: RuleContext<T>, node: SfgNode<T>, rule: "move-sum" | "move
   copies.forEach((e, k) => {
     const last = k === copies.length - 1;
     const gain = isSum ? ctx.field.mul(e.gain, block.gain) : ctx.field.mul(block.gain, e.gain);
-    const x = edgeName(e);
     const consumed = last && !heir ? [e, block] : [e];
+    // A bare wire gets a copy of the block itself (with the wire's sign), not a product.
+    const x = e.label === null ? `the wire ${isSum ? `from ${e.from}` : `to ${e.to}`}` : edgeName(e);
+    const value = e.label === null ? `${e.sign < 0 ? "−" : ""}${G}` : isSum ? `${x}·${G}` : `${G}·${x}`;
     const draft = produce(ctx, rule, consumed, last ? [node.own] : [], gain, (eq) =>
       isSum
-        ? `Move junction ${node.id} past ${G}: ${x} becomes ${eq} = ${x}·${G}.`
-        : `Move pickoff ${node.id} before ${G}: ${x} becomes ${eq} = ${G}·${x}.`,
+        ? `Move junction ${node.id} past ${G}: ${x} becomes ${eq} = ${value}.`
+        : `Move pickoff ${node.id} before ${G}: ${x} becomes ${eq} = ${value}.`,
     );
     const [from, to] = ends(e);
     link(ctx, from, to, draft);
@@ -223,7 +235,7 @@ function eliminate<T>(ctx: RuleContext<T>, node: SfgNode<T>): boolean {
   spend(ctx.budget, ins.length * outs.length);
   const hasLoop = pivot.loop !== null;
   const scaled = ins.map((i) => (hasLoop ? field.div(i.gain, pivot.value) : i.gain));
-  const tail = hasLoop ? `/(${returnDifference("", pivot.loop!)})` : "";
+  const tail = hasLoop ? `/(${returnDifference(null, pivot.loop!)})` : "";
   ctx.graph.removeNode(node.id);
   ins.forEach((i, a) =>
     outs.forEach((o, b) => {
@@ -238,14 +250,14 @@ function eliminate<T>(ctx: RuleContext<T>, node: SfgNode<T>): boolean {
       link(ctx, i.from, o.to, draft);
     }),
   );
-  ctx.det = field.mul(ctx.det, pivot.value);
+  if (hasLoop) ctx.pivots?.push(pivot.value);
   return true;
 }
 
 /** A node nothing enters or nothing leaves: it only contributes its pivot to the determinant. */
 function drop<T>(ctx: RuleContext<T>, node: SfgNode<T>): void {
   const loop = sorted(node.loops)[0];
-  if (loop) ctx.det = ctx.field.mul(ctx.det, ctx.field.sub(ctx.field.one, loop.gain));
+  if (loop) ctx.pivots?.push(ctx.field.sub(ctx.field.one, loop.gain));
   ctx.graph.removeNode(node.id);
 }
 

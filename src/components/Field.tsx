@@ -8,8 +8,7 @@ import {
 } from "react";
 
 const controlClass =
-  "w-full rounded border bg-paper-raised px-3 py-2 text-sm text-ink placeholder:text-ink-faint " +
-  "read-only:bg-paper-sunk read-only:text-ink-soft aria-invalid:border-fault";
+  "w-full rounded border border-rule-strong px-3 py-2 text-sm placeholder:text-ink-faint aria-invalid:border-fault";
 
 interface FieldFrame {
   label: string;
@@ -51,7 +50,7 @@ export function TextField({ label, error, hint, className, ...input }: InputProp
         id={id}
         aria-invalid={error ? true : undefined}
         aria-describedby={describedBy(id, { label, error, hint })}
-        className={`${controlClass} border-rule-strong ${className ?? ""}`}
+        className={`${controlClass} ${input.readOnly ? "bg-paper-sunk text-ink-soft" : "bg-paper-raised text-ink"} ${className ?? ""}`}
         {...input}
       />
     </Frame>
@@ -68,7 +67,7 @@ export function SelectField({ label, error, hint, className, children, ...select
         id={id}
         aria-invalid={error ? true : undefined}
         aria-describedby={describedBy(id, { label, error, hint })}
-        className={`${controlClass} border-rule-strong ${className ?? ""}`}
+        className={`${controlClass} bg-paper-raised text-ink ${className ?? ""}`}
         {...select}
       >
         {children}
@@ -88,7 +87,7 @@ export function TextAreaField({ label, error, hint, className, ...area }: TextAr
         rows={3}
         aria-invalid={error ? true : undefined}
         aria-describedby={describedBy(id, { label, error, hint })}
-        className={`${controlClass} border-rule-strong ${className ?? ""}`}
+        className={`${controlClass} bg-paper-raised text-ink ${className ?? ""}`}
         {...area}
       />
     </Frame>

@@ -1,10 +1,9 @@
-import { useEffect, type ReactNode } from "react";
+import type { ReactNode } from "react";
+import { useDocumentTitle } from "@/lib/useDocumentTitle";
 
 /** The page's one h1, also written to the document title so tabs and history read well. */
 export function PageTitle({ title, kicker, children }: { title: string; kicker?: ReactNode; children?: ReactNode }) {
-  useEffect(() => {
-    document.title = `${title} · Loopwright`;
-  }, [title]);
+  useDocumentTitle(title);
   return (
     <div className="mb-6 flex flex-wrap items-end justify-between gap-4 border-b border-rule pb-4">
       <div>

@@ -1,11 +1,13 @@
-import type { ReactNode } from "react";
+import { useId, type ReactNode } from "react";
 
-/** A titled section card; the heading names the section for screen-reader navigation. */
-export function Panel({ title, children, level = 2 }: { title: string; children: ReactNode; level?: 2 | 3 }) {
-  const Heading = level === 2 ? "h2" : "h3";
+/** A titled section card; its heading names the region for screen-reader navigation. */
+export function Panel({ title, children }: { title: string; children: ReactNode }) {
+  const id = useId();
   return (
-    <section aria-label={title} className="rounded-md border border-rule bg-paper-raised p-5 shadow-[0_1px_0_var(--color-rule)]">
-      <Heading className="mb-4 text-base font-semibold">{title}</Heading>
+    <section aria-labelledby={id} className="rounded-md border border-rule bg-paper-raised p-5 shadow-xs">
+      <h2 id={id} className="mb-4 text-base font-semibold">
+        {title}
+      </h2>
       {children}
     </section>
   );

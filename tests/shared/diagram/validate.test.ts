@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { loadDiagram, validateDiagram } from "@shared/diagram/validate";
-import type { Problem } from "@shared/diagram/problems";
+import { problemSchema, type Problem } from "@shared/diagram/problems";
 import { exampleDiagram } from "./exampleDiagram";
 
 type Raw = ReturnType<typeof exampleDiagram>;
@@ -9,7 +9,10 @@ type Raw = ReturnType<typeof exampleDiagram>;
 function check(raw: unknown) {
   const loaded = loadDiagram(raw);
   expect(loaded.problems).toEqual([]);
-  return validateDiagram(loaded.doc!);
+  const result = validateDiagram(loaded.doc!);
+  // Every problem fits the published problem contract (strict: no stray keys).
+  for (const p of result.problems) expect(problemSchema.strict().parse(p)).toEqual(p);
+  return result;
 }
 
 const edited = (edit: (d: Raw) => void): Raw => {
@@ -140,5 +143,68 @@ describe("limits", () => {
   it("refuses more than 2,000 blocks and accepts exactly 2,000", () => {
     expect(check(chain(1999, "1")).problems).toEqual([expect.objectContaining({ code: "too-many-blocks", severity: "error" })]);
     expect(check(chain(1998, "1")).problems).toEqual([]);
+  });
+});
+
+describe("loadDiagram", () => {
+  // source: the Loopwright format spec (format/version header, field rules, readers keep unknown fields).
+  it("reports a wrong format or version on its own, with the version sentence of the spec", () => {
+    expect(loadDiagram({ ...exampleDiagram(), version: 2 }).problems).toEqual([
+      expect.objectContaining({ code: "unsupported-version", field: "version", message: "unsupported version 2: this Loopwright reads version 1" }),
+    ]);
+    expect(loadDiagram({ ...exampleDiagram(), format: "other" }).problems).toEqual([expect.objectContaining({ code: "wrong-format", field: "format" })]);
+    const { format: _dropped, ...noFormat } = exampleDiagram();
+    expect(loadDiagram(noFormat).problems).toEqual([expect.objectContaining({ code: "wrong-format" })]);
+    for (const raw of [null, [], "text", 3]) expect(loadDiagram(raw).problems).toEqual([expect.objectContaining({ code: "not-a-document" })]);
+  });
+
+  const cases: [string, (d: Raw) => void, Partial<Problem>][] = [
+    ["a bad sign names the block id and the field", (d) => (block(d, "e").signs = ["+", "*"]), { code: "invalid-field", blockId: "e", field: "signs[1]" }],
+    ["a block without id is named by its index", (d) => delete d.blocks[2].id, { code: "missing-field", blockId: "blocks[2]", field: "id" }],
+    ["an unknown block type", (d) => (block(d, "h").type = "amplifier"), { code: "unknown-block-type", blockId: "h", field: "type" }],
+    ["a block without type", (d) => delete block(d, "h").type, { code: "missing-field", blockId: "h", field: "type" }],
+    ["a wire without id is named by its label", (d) => delete d.wires[1].to, { code: "missing-field", wireId: "wire #1 (e → ?)", field: "to" }],
+    ["a negative port names the wire id", (d) => (d.wires[0].port = -1), { code: "invalid-field", wireId: "w1", field: "port" }],
+    ["a parameter called s", (d) => (d.parameters.s = 1), { code: "invalid-field", field: "parameters.s" }],
+    ["a parameter name with a space", (d) => (d.parameters["my gain"] = 1), { code: "invalid-field", field: "parameters.my gain" }],
+    ["a parameter spec without a number value", (d) => (d.parameters.K = { value: "4" }), { code: "invalid-field", field: "parameters.K" }],
+    ["a non-number layout coordinate", (d) => (d.layout = { r: { x: "0", y: 0 } }), { code: "invalid-field", field: "layout.r.x" }],
+    ["an expression that is not text", (d) => (block(d, "c").expr = 5), { code: "invalid-field", blockId: "c", field: "expr" }],
+  ];
+  it.each(cases)("%s", (_name, edit, expected) => {
+    const { doc, problems } = loadDiagram(edited(edit));
+    expect(doc).toBeUndefined();
+    expect(problems).toContainEqual(expect.objectContaining({ severity: "error", ...expected }));
+  });
+
+  it("reports every schema problem at once", () => {
+    const raw = edited((d) => {
+      block(d, "e").signs = ["*"];
+      delete d.wires[1].to;
+      d.parameters.s = 1;
+    });
+    expect(loadDiagram(raw).problems.map((p) => p.field).sort()).toEqual(["parameters.s", "signs[0]", "to"]);
+  });
+
+  it("keeps unknown fields everywhere", () => {
+    const raw = edited((d) => {
+      d.theme = { grid: true };
+      block(d, "c").color = "teal";
+      d.wires[0].bend = [1, 2];
+      d.parameters.tau = { value: 0.5, source: "bench test" };
+      d.layout = { r: { x: 0, y: 0, pinned: true } };
+    });
+    const doc = loadDiagram(raw).doc as Record<string, unknown> & { blocks: object[]; wires: object[]; parameters: object; layout: object };
+    expect(doc.theme).toEqual({ grid: true });
+    expect(doc.blocks[2]).toMatchObject({ id: "c", color: "teal" });
+    expect(doc.wires[0]).toMatchObject({ bend: [1, 2] });
+    expect(doc.parameters).toMatchObject({ tau: { source: "bench test" } });
+    expect(doc.layout).toEqual({ r: { x: 0, y: 0, pinned: true } });
+  });
+
+  it("fills in missing parameters as empty", () => {
+    const { parameters: _p, ...raw } = exampleDiagram();
+    raw.blocks = raw.blocks.filter((b) => b.type !== "transfer" && b.type !== "gain");
+    expect(loadDiagram(raw).doc?.parameters).toEqual({});
   });
 });

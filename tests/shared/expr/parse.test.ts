@@ -156,6 +156,17 @@ describe("parseExpression refuses what is outside the grammar, with a code and a
   });
 });
 
+describe("names are only parameters", () => {
+  // source: the format spec — names are parameters only; mathjs keywords, constants and units get no meaning.
+  it("reads declared names that mathjs treats as keywords or constants as plain parameters", () => {
+    const names = ["not", "and", "mod", "in", "to", "true", "NaN", "Infinity", "pi", "e", "i", "end"];
+    for (const name of names) {
+      const r = parseExpression(`-${name}*s^2`, { allowS: true, parameters: names });
+      expect(r.ok && showExpr(r.ast), name).toBe(`(* (neg ${name}) (^ s 2))`);
+    }
+  });
+});
+
 describe("parsed Laplace transforms evaluate to the transform of their time functions", () => {
   // source: Abramowitz & Stegun §29.3 (table of Laplace transforms). Each F(s) is parsed by us, then compared
   // with ∫₀^∞ e^(−st) f(t) dt computed numerically (composite Simpson on [0, 60]) from the table's f(t).

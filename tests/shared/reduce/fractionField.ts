@@ -1,5 +1,4 @@
 import type { Field } from "@shared/algebra/field";
-import type { DiagramDocument } from "@shared/diagram/schema";
 
 /** Exact rationals on BigInt: the plain-number field the graph rules are tested with. */
 export interface Frac {
@@ -41,28 +40,53 @@ export const fracField: Field<Frac> = {
 
 export const showFrac = (a: Frac) => ({ expr: fracText(a), latex: fracText(a) });
 
-type BlockSpec = [id: string, type: string, extra?: string[] | string];
-
 /**
- * A document from a compact spec: blocks as [id, type, signs|expr], wires as "from>to" or "from>to:port".
- * Wires get ids "w0", "w1", … so consumed-wire checks are easy.
+ * Independent reference: solves x_v = Σ gain(u→v)·x_u with x_source = 1 by Gauss–Jordan elimination on
+ * fractions (common practice: the signal equations of a flow graph are a linear system). Returns null when
+ * the system is singular; `det` is det(I − A) over all nodes.
  */
-export function diagram(blocks: BlockSpec[], wires: string[]): DiagramDocument {
-  return {
-    format: "loopwright-diagram",
-    version: 1,
-    parameters: {},
-    blocks: blocks.map(([id, type, extra]) =>
-      type === "sum"
-        ? { id, type, signs: extra as ("+" | "-")[] }
-        : type === "gain" || type === "transfer"
-          ? { id, type, expr: (extra as string) ?? "1" }
-          : { id, type },
-    ) as DiagramDocument["blocks"],
-    wires: wires.map((w, i) => {
-      const [from, rest] = w.split(">");
-      const [to, port] = rest.split(":");
-      return { id: `w${i}`, from, to, ...(port === undefined ? {} : { port: Number(port) }) };
-    }),
-  };
+export function solveSignals(
+  nodes: readonly string[],
+  edges: readonly { from: string; to: string; gain: Frac }[],
+  source: string,
+): { x: Map<string, Frac> | null; det: Frac } {
+  const f = fracField;
+  const n = nodes.length;
+  const at = new Map(nodes.map((id, i) => [id, i]));
+  const m: Frac[][] = nodes.map((_, i) => nodes.map((__, j) => (i === j ? f.one : f.zero)));
+  for (const e of edges) m[at.get(e.to)!][at.get(e.from)!] = f.sub(m[at.get(e.to)!][at.get(e.from)!], e.gain);
+  let det = f.one;
+  for (let c = 0; c < n && !f.isZero(det); c++) {
+    const p = m.findIndex((row, r) => r >= c && !f.isZero(row[c]));
+    if (p < 0) det = f.zero;
+    else {
+      if (p !== c) [m[p], m[c]] = [m[c], m[p]];
+      if (p !== c) det = f.neg(det);
+      det = f.mul(det, m[c][c]);
+      for (let r = c + 1; r < n; r++) {
+        const k = f.div(m[r][c], m[c][c]);
+        m[r] = m[r].map((v, j) => f.sub(v, f.mul(k, m[c][j])));
+      }
+    }
+  }
+  // Solve with the source's row replaced by x_source = 1.
+  const a: Frac[][] = nodes.map((id, i) => {
+    if (id === source) return [...nodes.map((__, j) => (i === j ? f.one : f.zero)), f.one];
+    const row = nodes.map((__, j) => (i === j ? f.one : f.zero));
+    for (const e of edges) if (e.to === id) row[at.get(e.from)!] = f.sub(row[at.get(e.from)!], e.gain);
+    return [...row, f.zero];
+  });
+  for (let c = 0; c < n; c++) {
+    const p = a.findIndex((row, r) => r >= c && !f.isZero(row[c]));
+    if (p < 0) return { x: null, det };
+    [a[p], a[c]] = [a[c], a[p]];
+    const piv = a[c][c];
+    a[c] = a[c].map((v) => f.div(v, piv));
+    for (let r = 0; r < n; r++) {
+      if (r === c || f.isZero(a[r][c])) continue;
+      const k = a[r][c];
+      a[r] = a[r].map((v, j) => f.sub(v, f.mul(k, a[c][j])));
+    }
+  }
+  return { x: new Map(nodes.map((id, i) => [id, a[i][n]])), det };
 }

@@ -15,28 +15,19 @@ export function DemoAccounts({ onPick }: { onPick: (email: string, password: str
       <p className="mt-1 text-ink-soft">
         Every demo account uses the password <code className="rounded bg-paper-raised px-1">{password}</code>.
       </p>
-      <table className="mt-3 w-full text-left">
-        <thead className="text-xs text-ink-soft">
-          <tr>
-            <th scope="col" className="py-1 font-medium">E-mail</th>
-            <th scope="col" className="py-1 font-medium">Role</th>
-            <th scope="col" className="py-1 font-medium"><span className="sr-only">Action</span></th>
-          </tr>
-        </thead>
-        <tbody>
-          {config.demoUsers.map((u) => (
-            <tr key={u.email} className="border-t border-trace/30">
-              <td className="py-1.5 font-mono text-xs">{u.email}</td>
-              <td className="py-1.5">{roleLabel(u.role)}</td>
-              <td className="py-1.5 text-right">
-                <Button size="sm" variant="quiet" aria-label={`Fill in ${u.email}`} onClick={() => onPick(u.email, password)}>
-                  Fill in
-                </Button>
-              </td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
+      <ul className="mt-3 divide-y divide-trace/30 border-t border-trace/30">
+        {config.demoUsers.map((u) => (
+          <li key={u.email} className="flex items-center justify-between gap-3 py-2">
+            <span className="min-w-0">
+              <span className="block font-mono text-xs break-all">{u.email}</span>
+              <span className="text-xs text-ink-soft">{roleLabel(u.role)}</span>
+            </span>
+            <Button size="sm" variant="quiet" aria-label={`Fill in ${u.email}`} onClick={() => onPick(u.email, password)}>
+              Fill in
+            </Button>
+          </li>
+        ))}
+      </ul>
     </section>
   );
 }
