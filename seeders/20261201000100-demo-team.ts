@@ -4,6 +4,16 @@ import { generateIdFromEntropySize } from "lucia";
 import { hashPassword } from "@server/auth/password";
 import { DEMO_PASSWORD, DEMO_TEAM, DEMO_USERS } from "@server/db/demoAccounts";
 import { demoDiagrams } from "@server/db/demoDiagrams";
+import type { CheckedResult } from "@shared/api/versions";
+import { reduceDocument } from "@shared/engine/reduceDocument";
+
+/** The same check a save runs, so demo versions carry their result like every other version. */
+function checked(document: unknown): CheckedResult {
+  const started = performance.now();
+  const outcome = reduceDocument(document);
+  const engineMs = Math.round(performance.now() - started);
+  return outcome.ok ? { ok: true, result: outcome.result, engineMs } : { ok: false, problems: outcome.problems, engineMs };
+}
 
 /** The demo: an invented paper mill's drives team, three people (owner, editor, viewer) and a few loops. */
 export async function up(queryInterface: QueryInterface): Promise<void> {
@@ -25,7 +35,7 @@ export async function up(queryInterface: QueryInterface): Promise<void> {
       await queryInterface.bulkInsert("diagrams", [{ id, team_id: teamId, title: d.title, description: d.description, created_by: author, created_at: now, updated_at: now }], { transaction });
       await queryInterface.bulkInsert(
         "diagram_versions",
-        [{ id: randomUUID(), diagram_id: id, number: 1, document: JSON.stringify(d.document), result: null, message: "First sketch", created_by: author, created_at: now }],
+        [{ id: randomUUID(), diagram_id: id, number: 1, document: JSON.stringify(d.document), result: JSON.stringify(checked(d.document)), message: "First sketch", created_by: author, created_at: now }],
         { transaction },
       );
     }

@@ -11,6 +11,8 @@ import { diagramsRouter, teamDiagramsRouter } from "@server/features/diagrams/ro
 import { invitationLinkRouter, teamInvitationsRouter } from "@server/features/invitations/router";
 import { systemRouter } from "@server/features/system/router";
 import { teamsRouter } from "@server/features/teams/router";
+import { versionsRouter } from "@server/features/versions/router";
+import type { EngineBudget } from "@server/engine/checkDocument";
 import { originCheck } from "@server/http/csrf";
 import { errorHandler, unknownApiRoute } from "@server/http/errors";
 import { authLimiter } from "@server/http/rateLimit";
@@ -27,6 +29,8 @@ export interface AppDeps {
   mailer: Mailer;
   mailbox: FakeMailService | null;
   log: Logger;
+  /** Time, memory and concurrency budget of the engine check on save (defaults in checkDocument). */
+  engineBudget?: EngineBudget;
 }
 
 /** The HTTP application: /api/*, the dev mailbox while the fake mail service runs, and the built client. */
@@ -48,14 +52,14 @@ export function createApp(deps: AppDeps): Express {
   const api = express.Router();
   api.use(requestLog(log));
   api.use((_req, res, next) => (res.set("Cache-Control", "no-store"), next()));
-  api.use(express.json({ limit: "2mb" }));
+  api.use(express.json({ limit: "4mb" }));
   api.use(originCheck(config.publicUrl));
   api.use(sessionMiddleware(deps.lucia));
   api.use(systemRouter({ sequelize: deps.sequelize, mailbox: deps.mailbox, demo: config.demo }));
   api.use("/auth", authRouter(deps.lucia, limiter));
   api.use("/teams", teamsRouter(), teamInvitationsRouter({ mailer: deps.mailer, publicUrl: config.publicUrl }, limiter), teamDiagramsRouter());
   api.use("/invitations", invitationLinkRouter(limiter));
-  api.use("/diagrams", diagramsRouter());
+  api.use("/diagrams", diagramsRouter(), versionsRouter(deps.engineBudget));
   api.use(unknownApiRoute);
   app.use("/api", api);
 

@@ -4,6 +4,7 @@ import { createApp } from "@server/app";
 import { createLucia } from "@server/auth/lucia";
 import { loadConfig } from "@server/config";
 import { createSequelize } from "@server/db/sequelize";
+import { warmEngine } from "@server/engine/checkDocument";
 import { setUpMail } from "@server/mail/setUpMail";
 
 // Starts the server: database pools, mail (real SMTP, or the local fake), HTTP. SIGINT/SIGTERM close everything.
@@ -30,7 +31,10 @@ const app = createApp({
   log,
 });
 
-const server = app.listen(config.port, "0.0.0.0", () => log.info(`Loopwright listening on ${config.publicUrl}`));
+const server = app.listen(config.port, "0.0.0.0", () => {
+  log.info(`Loopwright listening on ${config.publicUrl}`);
+  warmEngine().catch((e: Error) => log.warn(`Engine worker did not start ahead of time: ${e.message}`));
+});
 server.on("error", (e) => {
   log.fatal(`Cannot listen on port ${config.port}: ${e.message}`);
   process.exit(1);

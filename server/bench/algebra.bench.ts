@@ -17,12 +17,15 @@ const randomPoly = (deg: number, range: number): Poly => {
   return polyFromZ(qOne, zMake("s", c));
 };
 
-function time(label: string, reps: number, run: () => unknown): [string, string, string] {
-  run(); // warm-up
-  const t0 = performance.now();
+/** First (cold, includes JIT warm-up) and mean of later runs, in ms. */
+function time(label: string, reps: number, run: () => unknown): [string, string, string, string] {
+  let t0 = performance.now();
+  run();
+  const cold = performance.now() - t0;
+  t0 = performance.now();
   for (let i = 0; i < reps; i++) run();
-  const ms = (performance.now() - t0) / reps;
-  return [label, ms.toFixed(3), String(reps)];
+  const warm = (performance.now() - t0) / reps;
+  return [label, cold.toFixed(2), warm.toFixed(3), String(reps)];
 }
 
 const num = (n: number): ExprNode => ({ kind: "num", num: BigInt(n), den: 1n });
@@ -53,15 +56,15 @@ const b100 = randomPoly(100, 1000);
 const f50 = randomPoly(50, 100);
 const withCommon = [polyMul(f50, randomPoly(50, 100)), polyMul(f50, randomPoly(50, 100))];
 
-const rows: [string, string, string][] = [
+const rows: [string, string, string, string][] = [
   time("multiply two degree-100 integer polynomials", 200, () => polyMul(a100, b100)),
   time("gcd of two coprime degree-100 polynomials", 50, () => polyGcd(a100, b100)),
   time("gcd of two degree-100 polynomials, common degree-50 factor", 20, () => polyGcd(withCommon[0], withCommon[1])),
   time("150-stage numeric ladder (series + feedback)", 5, () => ladder(150, numericSection, numericFeedback)),
-  time("30-stage ladder, parameters K, tau, k_p", 3, () => ladder(30, symbolicSection, symbolicFeedback)),
+  time("30-stage ladder, parameters K, tau, k_p", 10, () => ladder(30, symbolicSection, symbolicFeedback)),
 ];
 const d = ratDegrees(ladder(150, numericSection, numericFeedback));
 console.log(`(150-stage ladder result degrees: num ${d.num}, den ${d.den})`);
 const w = Math.max(...rows.map((r) => r[0].length));
-console.log(`${"case".padEnd(w)}  ${"ms/run".padStart(10)}  runs`);
-for (const [label, ms, reps] of rows) console.log(`${label.padEnd(w)}  ${ms.padStart(10)}  ${reps}`);
+console.log(`${"case".padEnd(w)}  ${"first ms".padStart(9)}  ${"mean ms".padStart(9)}  runs`);
+for (const [label, cold, warm, reps] of rows) console.log(`${label.padEnd(w)}  ${cold.padStart(9)}  ${warm.padStart(9)}  ${reps}`);

@@ -10,6 +10,8 @@ export class HttpError extends Error {
     readonly code: string,
     message: string,
     readonly fields?: FieldError[],
+    /** Extra top-level members of the body beside `error`, e.g. the winning version of a 409. */
+    readonly extra?: Record<string, unknown>,
   ) {
     super(message);
   }
@@ -36,7 +38,8 @@ export const unknownApiRoute: RequestHandler = (req, _res, next) =>
 
 export function errorHandler(log: Logger): ErrorRequestHandler {
   return (err, _req, res, _next) => {
-    if (err instanceof HttpError) return void res.status(err.status).json(body(err.code, err.message, err.fields));
+    if (err instanceof HttpError)
+      return void res.status(err.status).json({ ...body(err.code, err.message, err.fields), ...err.extra });
     // body-parser: malformed JSON or too large a body.
     const type = (err as { type?: string }).type;
     if (type === "entity.parse.failed")

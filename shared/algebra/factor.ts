@@ -42,7 +42,7 @@ function squareFree(p: ZPoly): [ZPoly, number][] {
 
 /** Rational linear and quadratic factors of a square-free integer polynomial in s, guessed from its roots. */
 function splitRational(f: ZPoly): ZPoly[] {
-  if (typeof f === "bigint" || f.v !== S || !allInt(f.c) || f.c.length < 4 || f.c.length > MAX_NUMERIC_SPLIT + 1) {
+  if (typeof f === "bigint" || f.v !== S || !allInt(f.c) || f.c.length < 3 || f.c.length > MAX_NUMERIC_SPLIT + 1) {
     return [f];
   }
   let rest: ZPoly = f;

@@ -31,12 +31,15 @@ const abs = (x: bigint): bigint => (x < 0n ? -x : x);
 const min = (x: bigint, y: bigint): bigint => (x < y ? x : y);
 const max = (x: bigint, y: bigint): bigint => (x > y ? x : y);
 
+/** Integer square root by Newton's iteration from a power-of-two start above the root. */
 function isqrt(n: bigint): bigint {
   if (n < 2n) return n;
-  let x = BigInt(Math.floor(Math.sqrt(Number(n))));
-  while (x * x > n) x--;
-  while ((x + 1n) * (x + 1n) <= n) x++;
-  return x;
+  let x = 1n << BigInt(Math.ceil(n.toString(2).length / 2));
+  for (;;) {
+    const y = (x + n / x) >> 1n;
+    if (y >= x) return x;
+    x = y;
+  }
 }
 
 function maxNorm(a: ZPoly): bigint {

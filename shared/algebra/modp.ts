@@ -8,7 +8,7 @@ import type { ZPoly } from "@shared/algebra/zpoly";
  */
 export type ModPoly = number[];
 
-let primeCache: number[] = [];
+const primeCache: number[] = [];
 
 /** The i-th prime below 2^26 counting downwards (generated on demand). Example: modPrime(0) === 67108859. */
 export function modPrime(i: number): number {

@@ -32,13 +32,11 @@ export const ratOne: RatFn = { k: qOne, n: 1n, d: 1n };
 /** A constant. Example: ratConst(q(1, 2)) is 1/2. */
 export const ratConst = (c: Q): RatFn => (c.n === 0n ? ratZero : { k: c, n: 1n, d: 1n });
 
-function checkDegree(n: ZPoly, d: ZPoly): void {
-  const dn = zDeg(n, S);
-  const dd = zDeg(d, S);
-  if (dn > DEGREE_LIMIT || dd > DEGREE_LIMIT) {
+function refuseDegree(degree: number): void {
+  if (degree > DEGREE_LIMIT) {
     throw new AlgebraError(
       "degree-limit",
-      `The result would have degree ${Math.max(dn, dd)} in s; the limit is ${DEGREE_LIMIT}. Simplify the diagram.`,
+      `The result would have degree ${degree} in s; the limit is ${DEGREE_LIMIT}. Simplify the diagram.`,
     );
   }
 }
@@ -46,7 +44,7 @@ function checkDegree(n: ZPoly, d: ZPoly): void {
 /** Builds k·n/d from coprime integer polynomials, moving their contents and signs into k. */
 function normalised(k: Q, n: ZPoly, d: ZPoly): RatFn {
   if (n === 0n || k.n === 0n) return ratZero;
-  checkDegree(n, d);
+  refuseDegree(Math.max(zDeg(n, S), zDeg(d, S)));
   const un = zUnitContent(n);
   const ud = zUnitContent(d);
   return { k: qMul(k, q(un, ud)), n: zQuo(n, un), d: zQuo(d, ud) };
@@ -86,7 +84,7 @@ export function ratMul(a: RatFn, b: RatFn): RatFn {
   const n2 = zQuo(b.n, g2);
   const d1 = zQuo(a.d, g2);
   const d2 = zQuo(b.d, g1);
-  if (zDeg(n1, S) + zDeg(n2, S) > DEGREE_LIMIT || zDeg(d1, S) + zDeg(d2, S) > DEGREE_LIMIT) checkDegree(zMul(n1, n2), zMul(d1, d2));
+  refuseDegree(Math.max(zDeg(n1, S) + zDeg(n2, S), zDeg(d1, S) + zDeg(d2, S))); // degrees add: check before multiplying
   // Quotients of primitive, positive-leading polynomials by such gcds keep both properties: no renormalising.
   return { k: qMul(a.k, b.k), n: zMul(n1, n2), d: zMul(d1, d2) };
 }

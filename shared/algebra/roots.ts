@@ -135,7 +135,7 @@ function aberth(desc: number[]): [number, number][] {
   return z.map(([x, y]) => polish(desc, asc, x, y));
 }
 
-/** Two plain Newton steps, each kept only if it lowers the residual (it never jumps to a neighbouring root). */
+/** Up to two plain Newton steps, each kept only if it lowers the residual. */
 function polish(desc: number[], asc: number[], x: number, y: number): [number, number] {
   let step = newton(desc, asc, x, y);
   for (let i = 0; i < 2 && step.residual > 0; i++) {

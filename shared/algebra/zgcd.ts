@@ -3,7 +3,7 @@ import { heuristicGcd } from "@shared/algebra/heugcd";
 import { bigGcd } from "@shared/algebra/rational";
 import { bigMod, evalModP, gcdModP, invMod, modPrime, mulMod, type ModPoly } from "@shared/algebra/modp";
 import {
-  allInt, zContentInt, zDivExact, zLeadNum, zMake, zMul, zNormSign, zPow, zQuo, zSub, varOuter,
+  allInt, zContentInt, zDivExact, zEquals, zLeadNum, zMake, zMul, zNormSign, zPow, zQuo, zSub, varOuter,
   type ZPoly, type ZRec,
 } from "@shared/algebra/zpoly";
 
@@ -19,6 +19,7 @@ export function zGcd(a: ZPoly, b: ZPoly): ZPoly {
   if (typeof a === "bigint") return bigGcd(a, zContentInt(b));
   if (typeof b === "bigint") return bigGcd(b, zContentInt(a));
   if (a.v !== b.v) return varOuter(a.v, b.v) ? zGcd(zContent(a), b) : zGcd(a, zContent(b));
+  if (zEquals(a, b)) return zNormSign(a); // common in feedback: the loop's denominator meets itself
   const ca = zContent(a);
   const cb = zContent(b);
   const c = zGcd(ca, cb);
@@ -29,6 +30,7 @@ export function zGcd(a: ZPoly, b: ZPoly): ZPoly {
 /** Content in the main variable: gcd of the coefficients (sign-normalised). Example: zContent(K*s + K) is K. */
 export function zContent(a: ZPoly): ZPoly {
   if (typeof a === "bigint") return a < 0n ? -a : a;
+  if (allInt(a.c)) return zContentInt(a);
   let g: ZPoly = 0n;
   for (const x of a.c) {
     g = zGcd(g, x);

@@ -4,7 +4,7 @@ import {
 import { polyToText } from "@shared/algebra/polytext";
 import { qOne } from "@shared/algebra/rational";
 import {
-  ratDenominator, ratField, ratIsZero, ratMul, ratNumerator, ratReduceTracked, type RatFn,
+  ratDegrees, ratDenominator, ratField, ratIsZero, ratMul, ratNumerator, ratReduceTracked, type RatFn,
 } from "@shared/algebra/ratfn";
 import { polyRoots } from "@shared/algebra/roots";
 import type { LoopCheck } from "@shared/engine/loops";
@@ -20,12 +20,12 @@ const asRat = (p: Poly): RatFn => ratReduceTracked(p, ONE).value;
 /**
  * The characteristic polynomial χ(s) = Δ(s) · Π den_b: the signal-flow determinant times the denominator
  * of every block (integrator: s), nothing cancelled — the modes of the whole interconnection. Formed part
- * by part, each part a polynomial: Δ of a loop component times the denominators of its blocks; the
- * denominators of blocks outside every loop; and for the nodes `covered` by the first pair (see
- * checkLoops) Δ·Π den over those nodes, which is that pair's own denominator D whenever D has its full
- * degree Σ deg den_b (nothing cancelled), else the pair's pivots multiplied out. Printed monic when the
- * leading coefficient is a number; a factor free of s (a numeric or parameter content) is dropped.
- * Example: unity negative feedback around 1/(s(s+1)) gives s^2 + s + 1.
+ * by part, each a polynomial: Δ of a loop component times the denominators of its blocks, and the
+ * denominators of blocks outside every loop. For the first pair's group (see checkLoops), Δ·Π den over
+ * that pair's nodes has degree order(Δ) + Σ deg den_b and is divisible by the pair's denominator D: when
+ * D has that full degree (nothing cancelled) it is D itself, else the pair's pivots are multiplied out.
+ * Printed monic when the leading coefficient is a number; a factor free of s (a numeric or parameter
+ * content) is dropped. Example: unity negative feedback around 1/(s(s+1)) gives s^2 + s + 1.
  */
 export function characteristicPolynomial(
   check: LoopCheck,
@@ -33,16 +33,22 @@ export function characteristicPolynomial(
   first: PairTransfer<RatFn> | undefined,
 ): Poly {
   const densOf = (nodes: readonly string[]) => nodes.flatMap((id) => (gains.has(id) ? [ratDenominator(gains.get(id)!)] : []));
+  const partOf = (nodes: readonly string[], factors: readonly RatFn[]) =>
+    ratNumerator(ratMul(fieldProduct(ratField, factors), asRat(densOf(nodes).reduce(polyMul, ONE))));
   const parts: Poly[] = [];
-  if (check.covered.length > 0 && first?.pivots) {
-    const dens = densOf(check.covered);
+  const counted = new Set<string>();
+  if (check.group && first) {
+    const order = check.group.factors.reduce((n, f) => n + ratDegrees(f).num - ratDegrees(f).den, 0);
+    const full = densOf(first.nodes).reduce((n, p) => n + polyDegree(p), order);
     const d = ratDenominator(first.gain);
-    const full = dens.reduce((n, p) => n + polyDegree(p), 0);
     const whole = !ratIsZero(first.gain) && polyDegree(d) === full;
-    parts.push(whole ? d : ratNumerator(ratMul(fieldProduct(ratField, first.pivots), asRat(dens.reduce(polyMul, ONE)))));
+    parts.push(whole ? d : partOf(check.group.nodes, check.group.factors));
+    for (const id of whole ? first.nodes : check.group.nodes) counted.add(id);
   }
-  for (const { nodes, det } of check.loops) parts.push(ratNumerator(ratMul(det, asRat(densOf(nodes).reduce(polyMul, ONE)))));
-  const counted = new Set([...check.covered, ...check.loops.flatMap((l) => l.nodes)]);
+  for (const { nodes, factors } of check.loops) {
+    parts.push(partOf(nodes, factors));
+    for (const id of nodes) counted.add(id);
+  }
   for (const [id, g] of gains) if (!counted.has(id)) parts.push(ratDenominator(g));
   return withoutContent(parts.reduce(polyMul, ONE));
 }

@@ -51,7 +51,7 @@ const context = <T>(
   pivots: determinant ? [] : null,
 });
 
-/** Product by halves, so the operands of each multiplication stay about the same size. */
+/** Product by halves, so the operands of each multiplication stay about the same size. Example: fieldProduct(f, [a, b, c]) = a·b·c. */
 export function fieldProduct<T>(field: Field<T>, items: readonly T[]): T {
   if (items.length === 0) return field.one;
   if (items.length === 1) return items[0];

@@ -89,15 +89,6 @@ export class SignalFlowGraph<T> {
     return sub;
   }
 
-  /** The same graph with every gain mapped (e.g. to its value as s → ∞). */
-  mapGains<U>(map: (gain: T) => U): SignalFlowGraph<U> {
-    const out = new SignalFlowGraph<U>();
-    for (const n of this.nodes.values()) out.addNode(n.id, n.order, n.own);
-    for (const e of this.edges()) out.addEdge({ ...e, gain: map(e.gain) });
-    out.touched.clear();
-    return out;
-  }
-
   /** Every edge, in creation order. */
   edges(): SfgEdge<T>[] {
     const all: SfgEdge<T>[] = [];

@@ -37,7 +37,7 @@ const only = <T>(set: Set<T>): T => set.values().next().value as T;
 
 const plan = (action: Action, urgency: number, fill = 0): Plan => ({ action, urgency, fill });
 
-/** True when two edges run from the same node into `node`, or the node has two loops. */
+/** True when two edges run from the same node into `node`, or the node has two loops. Example: a → n twice → true. */
 export function hasParallel<T>(node: SfgNode<T>): boolean {
   if (node.loops.size > 1) return true;
   const sources = new Set<string>();
@@ -48,7 +48,7 @@ export function hasParallel<T>(node: SfgNode<T>): boolean {
   return false;
 }
 
-/** The feedback edge p → e of a feedback pair at p, when the pattern holds. */
+/** The forward edge e → p and feedback edge p → e of a feedback pair at p, when the pattern holds. Example: r → e ⇄ p → y at p. */
 export function feedbackPair<T>(
   graph: SignalFlowGraph<T>,
   node: SfgNode<T>,
@@ -62,7 +62,7 @@ export function feedbackPair<T>(
   return null;
 }
 
-/** The plan for one node, or null when nothing can be done there (yet). */
+/** The plan for one node, or null when nothing can be done there (yet). Example: a terminal without parallel edges → null. */
 export function planNode<T>(
   graph: SignalFlowGraph<T>,
   node: SfgNode<T>,
@@ -88,6 +88,6 @@ export function planNode<T>(
   return plan("eliminate", 4, ins * outs);
 }
 
-/** Orders plans: more urgent, then less fill, then earlier in the document. */
+/** Orders plans: more urgent, then less fill, then earlier in the document. Example: series (2) before move-sum (4). */
 export const comparePlans = (a: Plan & { order: number }, b: Plan & { order: number }): number =>
   a.urgency - b.urgency || a.fill - b.fill || a.order - b.order;

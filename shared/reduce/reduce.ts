@@ -6,19 +6,19 @@ import type { ReductionStep } from "@shared/reduce/result";
 import { loopComponents, reachable } from "@shared/reduce/scc";
 import { StepLog, type ShowGain } from "@shared/reduce/trace";
 
-/**
- * Field-generic entry points of the reducer, on a signal-flow graph (see buildSignalGraph).
- *
- * det(I − A) of the whole graph is the product of the determinants of its loop components (the
- * strongly connected parts: the matrix is block-triangular in their order), so each component is checked
- * on its own and a singular one can be named.
- * Example: loopDeterminants(graph, field, budget) → [{ nodes: ["e", "c", "p", "h"], det: 1 + c·p·h }].
- */
+/* Field-generic entry points of the reducer, on a signal-flow graph (see buildSignalGraph). */
+
+/** A loop component (strongly connected part of the graph) and its det(I − A). */
 export interface LoopDeterminant<T> {
   nodes: string[];
   det: T;
 }
 
+/**
+ * det(I − A) of each loop component, one elimination each. The matrix is block-triangular in the order of
+ * the components, so their product is det(I − A) of the whole graph, and a singular one can be named.
+ * Example: loopDeterminants(graph, field, budget) → [{ nodes: ["e", "c", "p", "h"], det: 1 + c·p·h }].
+ */
 export function loopDeterminants<T>(graph: SignalFlowGraph<T>, field: Field<T>, budget: Budget): LoopDeterminant<T>[] {
   return loopComponents(graph).map((nodes) => ({ nodes, det: loopDeterminant(graph.subgraph(nodes), field, budget) }));
 }

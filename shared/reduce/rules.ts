@@ -261,7 +261,7 @@ function drop<T>(ctx: RuleContext<T>, node: SfgNode<T>): void {
   ctx.graph.removeNode(node.id);
 }
 
-/** Applies the planned rule at a node; false when its pivot turned out to be zero (node blocked). */
+/** Applies the planned rule at a node; false when its pivot turned out to be zero (node blocked). Example: applyPlan(ctx, n, "series"). */
 export function applyPlan<T>(ctx: RuleContext<T>, node: SfgNode<T>, action: Action): boolean {
   switch (action) {
     case "tidy":

@@ -55,7 +55,10 @@ export function loopComponents<T>(graph: SignalFlowGraph<T>): string[][] {
   return found.sort((a, b) => order(a[0]) - order(b[0]));
 }
 
-/** Nodes reachable from `start` along edges (forward) or against them (backward), `start` included. */
+/**
+ * Nodes reachable from `start` along edges (forward) or against them (backward), `start` included.
+ * Example: reachable(g, "y", "backward") holds every node with a path to y.
+ */
 export function reachable<T>(graph: SignalFlowGraph<T>, start: string, direction: "forward" | "backward"): Set<string> {
   const seen = new Set<string>([start]);
   const queue = [start];

@@ -45,6 +45,8 @@ beforeAll(async () => {
 });
 afterAll(() => t.close());
 
+const emptyDocument = { format: "loopwright-diagram", version: 1, blocks: [], wires: [] };
+
 interface Route {
   name: string;
   call: (c: ReturnType<TestApp["client"]>) => Promise<request.Response>;
@@ -93,6 +95,15 @@ const routes: Route[] = [
   },
   { name: "POST /api/diagrams/:id/archive", call: (c) => c.post(`/api/diagrams/${diagramId}/archive`), expect: A(401, 404, 403, 200, 200) },
   { name: "POST /api/diagrams/:id/restore", call: (c) => c.post(`/api/diagrams/${diagramId}/restore`), expect: A(401, 404, 403, 200, 200) },
+  { name: "GET /api/diagrams/:id/versions", call: (c) => c.get(`/api/diagrams/${diagramId}/versions`), expect: A(401, 404, 200, 200, 200) },
+  {
+    name: "POST /api/diagrams/:id/versions",
+    call: async (c) => {
+      const base = (await clients.owner.get(`/api/diagrams/${diagramId}`)).body.diagram.latestVersion ?? 0;
+      return c.post(`/api/diagrams/${diagramId}/versions`).send({ baseVersion: base, document: emptyDocument });
+    },
+    expect: A(401, 404, 403, 201, 201),
+  },
   {
     name: "GET /api/invitations/:token",
     call: async (c) => c.get(`/api/invitations/${(await pendingInvitation()).token}`),

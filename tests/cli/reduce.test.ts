@@ -39,6 +39,8 @@ function file(name: string, content: unknown): string {
   return path;
 }
 
+// Each case starts node + tsx (about a second, much more on a busy machine).
+const SPAWN_TIMEOUT = 120_000;
 const STACK_TRACE = /\n\s+at .+:\d+:\d+/;
 const USAGE = "usage: reduce FILE.json";
 
@@ -57,7 +59,7 @@ const spindle = makeDoc(
   "Spindle speed loop",
 );
 
-describe("reduce CLI: success", () => {
+describe("reduce CLI: success", { timeout: SPAWN_TIMEOUT }, () => {
   it("--json prints one ReductionResult whose transfer is G/(1 + G·H) (from memory: Nise, Control Systems Engineering, canonical feedback form)", async () => {
     const run = await reduce(file("spindle.json", spindle), "--json");
     expect(run.stderr).toBe("");
@@ -126,7 +128,7 @@ describe("reduce CLI: success", () => {
   });
 });
 
-describe("reduce CLI: the file's content is wrong → exit 1, messages on stderr, no stack trace", () => {
+describe("reduce CLI: the file's content is wrong → exit 1, messages on stderr, no stack trace", { timeout: SPAWN_TIMEOUT }, () => {
   const expectContentError = (run: Run, ...fragments: string[]) => {
     expect(run.code).toBe(1);
     expect(run.stdout).toBe("");
@@ -189,13 +191,13 @@ describe("reduce CLI: the file's content is wrong → exit 1, messages on stderr
   });
 
   it("over a limit: an expression longer than 2,000 characters", async () => {
-    const long = Array.from({ length: 700 }, () => "1").join("+");
+    const long = Array.from({ length: 1100 }, () => "1").join("+"); // 2,199 characters
     const doc = { ...spindle, blocks: spindle.blocks.map((b) => (b.id === "h" ? { ...b, expr: long } : b)) };
     expectContentError(await reduce(file("long.json", doc)), "[expr-too-long]", "block h");
   });
 });
 
-describe("reduce CLI: the command line is wrong → exit 2 with a usage line", () => {
+describe("reduce CLI: the command line is wrong → exit 2 with a usage line", { timeout: SPAWN_TIMEOUT }, () => {
   const expectUsageError = (run: Run, fragment: string) => {
     expect(run.code).toBe(2);
     expect(run.stdout).toBe("");

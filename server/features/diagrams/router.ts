@@ -1,10 +1,10 @@
 import { Router } from "express";
 import { createDiagramSchema, updateDiagramSchema } from "@shared/api/diagrams";
-import type { Role } from "@shared/api/teams";
 import { requireUser } from "@server/http/session";
 import { parseWith } from "@server/http/validate";
 import { requireRole } from "@server/features/teams/access";
-import { createDiagram, diagramDetail, findDiagram, listDiagrams, setArchived, updateDiagram } from "@server/features/diagrams/service";
+import { diagramWithRole } from "@server/features/diagrams/access";
+import { createDiagram, diagramDetail, listDiagrams, setArchived, updateDiagram } from "@server/features/diagrams/service";
 
 /** Team-side routes (mounted under /api/teams). */
 export function teamDiagramsRouter(): Router {
@@ -39,11 +39,4 @@ export function diagramsRouter(): Router {
     });
   }
   return router;
-}
-
-/** The diagram and the caller's role in its team; a non-member gets the same 404 as for a missing diagram. */
-async function diagramWithRole(userId: string, id: string, least: Role) {
-  const diagram = await findDiagram(id);
-  const role = await requireRole(diagram.teamId, userId, least, "Diagram not found.");
-  return { diagram, role };
 }

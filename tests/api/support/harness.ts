@@ -3,7 +3,7 @@ import type { Sequelize } from "sequelize";
 import { pino } from "pino";
 import request from "supertest";
 import type { Express } from "express";
-import { createApp } from "@server/app";
+import { createApp, type AppDeps } from "@server/app";
 import { createLucia } from "@server/auth/lucia";
 import { loadConfig, type Config } from "@server/config";
 import { createSequelize } from "@server/db/sequelize";
@@ -16,6 +16,7 @@ export const ORIGIN = "http://loopwright.test";
 
 export interface TestApp {
   app: Express;
+  deps: AppDeps;
   config: Config;
   /** The fake mail service, or null when SMTP settings are given. */
   mailbox: FakeMailService;
@@ -41,16 +42,18 @@ export async function startTestApp(env: Record<string, string> = {}): Promise<Te
   sharedSequelize ??= createSequelize(config.databaseUrl);
   const sequelize = sharedSequelize;
   const { mailer, mailbox } = await setUpMail(config);
-  const app = createApp({
+  const deps: AppDeps = {
     config,
     sequelize,
     lucia: createLucia(pool, config),
     mailer,
     mailbox,
     log: pino({ level: config.logLevel }),
-  });
+  };
+  const app = createApp(deps);
   return {
     app,
+    deps,
     config,
     mailbox: mailbox as FakeMailService,
     client: () => request.agent(app).set("Origin", ORIGIN),

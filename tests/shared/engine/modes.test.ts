@@ -72,6 +72,23 @@ describe("cancelled modes", () => {
     expect(rq.cancelled).toEqual([]);
   });
 
+  test("χ is the same whether the loop lies on the reduced pair's path or not", () => {
+    // the loop e–g–h feeds y; z is fed by r directly. Reducing r→y forms χ from the pair's own reduction,
+    // reducing r→z from the loop's separate determinant; by hand Δ = 1 + K/((s + 2)(s + 3)), χ = (s + 2)(s + 3) + K.
+    const doc = diagram(
+      [
+        ["r", "input"], ["e", "sum", ["+", "-"]], ["g", "transfer", "1/(s+2)"], ["q", "transfer", "K/(s+3)"], ["y", "output"],
+        ["z", "output"], ["f", "gain", "2"],
+      ],
+      ["r>e:0", "e>g", "g>q", "q>y", "q>e:1", "r>f", "f>z"],
+      { K: 1.5 },
+    );
+    const viaPair = resultOf(reduceDocument(doc, { output: "y" })).characteristic;
+    const apart = resultOf(reduceDocument(doc, { output: "z" })).characteristic;
+    expect(viaPair).toBe(apart);
+    expect(sameValue(exact(viaPair, ["K"]), exact("(s+2)*(s+3) + K", ["K"]))).toBe(true);
+  });
+
   test("characteristic polynomial keeps what a pair cancels: Δ times every block denominator", () => {
     // by hand for the minor-loop case: Δ = 1 + 2/(s+1) + 3/(s(s+1)) → χ = s^2 + 3s + 3
     const doc = diagram(

@@ -1,5 +1,7 @@
 import { describe, expect, test } from "vitest";
+import { benchDiagram } from "@server/bench/diagrams";
 import { reduceDocument } from "@shared/engine/reduceDocument";
+import { reductionResultSchema } from "@shared/reduce/result";
 import { diagram } from "../reduce/diagramSpec";
 import { traceViolations } from "../reduce/traceCheck";
 import { exact, resultOf, sameValue, transferValue } from "./exact";
@@ -195,5 +197,26 @@ describe("refusals", () => {
     const out = reduceDocument(spindle, { limits: { maxEdges: 1 } });
     expect(out.ok).toBe(false);
     if (!out.ok) expect(out.problems.map((p) => p.code)).toEqual(["too-complex"]);
+  });
+});
+
+describe("generated ladders and nested-loop chains", () => {
+  test.each([
+    ["ladder", 20, false],
+    ["ladder", 60, false],
+    ["nested", 60, false],
+    ["ladder", 30, true],
+    ["nested", 30, true],
+  ] as const)("%s of %i blocks (symbolic: %s): a valid result, a consistent trace, the same every time", (family, n, symbolic) => {
+    const doc = benchDiagram(family, n, { symbolic });
+    const result = resultOf(reduceDocument(doc));
+    expect(reductionResultSchema.safeParse(result).success).toBe(true);
+    expect(traceViolations(doc, result.steps)).toEqual([]);
+    expect(result.warnings).toEqual([]);
+    // every loop holds a strictly proper section, so Δ(∞) = 1 and nothing cancels (common practice):
+    // χ has the degree of all block denominators together and equals the denominator of r → y
+    expect(result.transfers[0].cancelled).toEqual([]);
+    expect(result.transfers[0].denominator).toBe(result.characteristic);
+    expect(JSON.stringify(resultOf(reduceDocument(doc)))).toBe(JSON.stringify(result));
   });
 });

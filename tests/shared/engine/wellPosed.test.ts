@@ -71,6 +71,13 @@ describe("loops singular only at particular parameter values give warnings", () 
     expect(r.warnings[0].message).toContain("improper when K = 1");
   });
 
+  test("a parameter that changes a block's degree: (1 − K)/(K s + 1) in positive feedback, singular at K = 0", () => {
+    // by hand: Δ = 1 − (1 − K)/(K s + 1) = K (s + 1)/(K s + 1), identically zero when K = 0 (the block is then 1)
+    const r = resultOf(reduceDocument(loopAround("(1-K)/(K*s+1)", "+", { K: 2 })));
+    expect(r.warnings.map((w) => w.code)).toEqual(["singular-at-values"]);
+    expect(r.warnings[0].message).toContain("no unique solution when K = 0");
+  });
+
   test("values of a parameter that cancels in Δ(∞) are not reported", () => {
     // the spindle plant 1/(tau s^2 + s): tau leads both numerator and denominator of Δ, so Δ(∞) = 1 for every tau
     const doc = loopAround("K/(tau*s^2 + s)", "-", { K: 4, tau: 0.5 });

@@ -1,0 +1,87 @@
+import type { DiagramVersionView } from "@shared/api/diagrams";
+import type { CheckedResult, VersionListItem } from "@shared/api/versions";
+import { loadDiagram } from "@shared/diagram/validate";
+import { Diagram, DiagramVersion } from "@server/db/models/diagram";
+import { User } from "@server/db/models/user";
+import { checkDocument, type EngineBudget } from "@server/engine/checkDocument";
+import { HttpError, notFound } from "@server/http/errors";
+
+type WithAuthor = DiagramVersion & { author?: User };
+
+export const versionView = (v: WithAuthor): DiagramVersionView => ({
+  number: v.number,
+  document: v.document,
+  result: v.result,
+  message: v.message,
+  createdAt: v.createdAt.toISOString(),
+  createdBy: v.author?.name ?? "",
+});
+
+const withAuthor = { include: [{ model: User, as: "author", attributes: ["name"] }] };
+
+async function latest(diagramId: string): Promise<WithAuthor | null> {
+  return DiagramVersion.findOne({ where: { diagramId }, order: [["number", "DESC"]], ...withAuthor }) as Promise<WithAuthor | null>;
+}
+
+async function staleUnless(diagramId: string, baseVersion: number, current: number): Promise<void> {
+  if (current === baseVersion) return;
+  const winner = await latest(diagramId);
+  throw new HttpError(
+    409,
+    "stale_version",
+    `Version ${current} was saved by ${winner?.author?.name ?? "someone"} after you opened version ${baseVersion}. Reload it or save yours as a new diagram.`,
+    undefined,
+    { latest: winner ? versionView(winner) : null },
+  );
+}
+
+/**
+ * Stores version n+1 of a diagram: the document must be a Loopwright document (422 otherwise), the editor's base
+ * version must still be the latest (409 with the winner otherwise), and the engine re-checks it in a worker.
+ * Documents with diagram problems are kept, with those problems as their result, so unfinished work is never lost.
+ */
+export async function saveVersion(
+  diagram: Diagram,
+  userId: string,
+  input: { baseVersion: number; message: string; document: unknown },
+  budget?: EngineBudget,
+): Promise<DiagramVersionView> {
+  const loaded = loadDiagram(input.document);
+  if (!loaded.doc)
+    throw new HttpError(422, "invalid_document", "This is not a Loopwright diagram document.", undefined, { problems: loaded.problems });
+  await staleUnless(diagram.id, input.baseVersion, (await latest(diagram.id))?.number ?? 0);
+  const checked: CheckedResult = await checkDocument(input.document, budget);
+  const saved = await DiagramVersion.sequelize!.transaction(async (transaction) => {
+    // The row lock serialises concurrent saves of one diagram: exactly one of them wins each number.
+    await Diagram.findByPk(diagram.id, { lock: transaction.LOCK.UPDATE, transaction });
+    const current = ((await DiagramVersion.max("number", { where: { diagramId: diagram.id }, transaction })) as number | null) ?? 0;
+    await staleUnless(diagram.id, input.baseVersion, current);
+    const v = await DiagramVersion.create(
+      { diagramId: diagram.id, number: current + 1, document: loaded.doc, result: checked, message: input.message, createdBy: userId },
+      { transaction },
+    );
+    diagram.changed("updatedAt", true);
+    await diagram.save({ transaction });
+    return v;
+  });
+  return versionView(Object.assign(saved, { author: (await User.findByPk(userId)) ?? undefined }));
+}
+
+export async function listVersions(diagramId: string): Promise<VersionListItem[]> {
+  const rows = (await DiagramVersion.findAll({ where: { diagramId }, order: [["number", "DESC"]], ...withAuthor })) as WithAuthor[];
+  return rows.map((v) => ({
+    number: v.number,
+    message: v.message,
+    createdAt: v.createdAt.toISOString(),
+    createdBy: v.author?.name ?? "",
+    ok: v.result === null ? null : Boolean((v.result as CheckedResult).ok),
+  }));
+}
+
+export async function getVersion(diagramId: string, number: number): Promise<DiagramVersionView> {
+  const v = Number.isInteger(number)
+    ? ((await DiagramVersion.findOne({ where: { diagramId, number }, ...withAuthor })) as WithAuthor | null)
+    : null;
+  if (!v) throw notFound(`Version ${number} of this diagram does not exist.`);
+  return versionView(v);
+}

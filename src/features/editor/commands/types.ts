@@ -1,0 +1,27 @@
+import type { DiagramDocument, Wire } from "@shared/diagram/schema";
+
+/** Inside the editor every wire carries an id, so selection, undo, highlights and messages can name it. */
+export type EditorWire = Wire & { id: string };
+export type EditorDoc = Omit<DiagramDocument, "wires"> & { wires: EditorWire[] };
+
+export interface Point {
+  x: number;
+  y: number;
+}
+
+/** What is selected on the canvas, by id. */
+export interface Selection {
+  blocks: string[];
+  wires: string[];
+}
+
+export const emptySelection: Selection = { blocks: [], wires: [] };
+
+/**
+ * What every command returns: the next document (plus what to select afterwards), or the reason it was
+ * refused — a sentence the editor shows where the user is looking.
+ */
+export type Outcome = { ok: true; doc: EditorDoc; select?: Selection } | { ok: false; reason: string };
+
+export const done = (doc: EditorDoc, select?: Selection): Outcome => ({ ok: true, doc, ...(select ? { select } : {}) });
+export const refuse = (reason: string): Outcome => ({ ok: false, reason });

@@ -1,0 +1,128 @@
+import type { DragEvent, PointerEvent as ReactPointerEvent, RefObject } from "react";
+import {
+  Background,
+  BackgroundVariant,
+  Controls,
+  MiniMap,
+  ReactFlow,
+  useReactFlow,
+  type Connection,
+  type EdgeTypes,
+  type FinalConnectionState,
+  type NodeTypes,
+  type OnEdgesChange,
+  type OnNodesChange,
+} from "@xyflow/react";
+import "@xyflow/react/dist/base.css";
+import type { BlockType } from "@shared/diagram/schema";
+import { GRID } from "@/features/editor/commands/blocks";
+import type { ConnectArgs } from "@/features/editor/commands/wires";
+import type { Point } from "@/features/editor/commands/types";
+import { BranchNode, InputNode, OutputNode } from "@/features/editor/components/nodes/TerminalNodes";
+import { GainNode, IntegratorNode, TransferNode } from "@/features/editor/components/nodes/ExpressionNodes";
+import { SumNode } from "@/features/editor/components/nodes/SumNode";
+import { SignalEdgeView, WireMarkers } from "@/features/editor/components/SignalEdgeView";
+import { BLOCK_MIME } from "@/features/editor/components/BlockRail";
+import type { FlowNode, SignalEdge } from "@/features/editor/lib/flowModel";
+import type { ReactNode } from "react";
+
+// Module-level so the canvas never sees new type tables (which would remount every node).
+const nodeTypes = {
+  input: InputNode,
+  output: OutputNode,
+  sum: SumNode,
+  gain: GainNode,
+  transfer: TransferNode,
+  integrator: IntegratorNode,
+  branch: BranchNode,
+} satisfies NodeTypes;
+const edgeTypes = { signal: SignalEdgeView } satisfies EdgeTypes;
+
+const portOf = (handle: string | null | undefined) => (handle && handle.startsWith("in") && handle !== "in" ? Number(handle.slice(2)) : undefined);
+
+interface Props {
+  nodes: FlowNode[];
+  edges: SignalEdge[];
+  onNodesChange: OnNodesChange<FlowNode>;
+  onEdgesChange: OnEdgesChange<SignalEdge>;
+  readOnly: boolean;
+  /** Last pointer position over the canvas (client coordinates), for messages shown where the user looks. */
+  pointer: RefObject<Point | null>;
+  onConnectWire: (args: ConnectArgs) => void;
+  onDropBlock: (type: BlockType, at: Point) => void;
+  children?: ReactNode;
+}
+
+/** The drawing surface: blocks, wires, grid, zoom and pan, overview map; it draws, the document decides. */
+export function DiagramCanvas({ nodes, edges, onNodesChange, onEdgesChange, readOnly, pointer, onConnectWire, onDropBlock, children }: Props) {
+  const flow = useReactFlow();
+
+  const onConnect = (c: Connection) => onConnectWire({ from: c.source, to: c.target, port: portOf(c.targetHandle) });
+
+  // A drop on a block without a fitting handle (an input block, an output's body) still gets its reason.
+  const onConnectEnd = (event: MouseEvent | TouchEvent, state: FinalConnectionState) => {
+    if (state.isValid || !state.fromNode || !state.fromHandle) return;
+    const at = "changedTouches" in event ? event.changedTouches[0] : event;
+    const over = document.elementFromPoint(at.clientX, at.clientY)?.closest(".react-flow__node")?.getAttribute("data-id");
+    if (!over || over === state.fromNode.id) return;
+    if (state.fromHandle.type === "source") onConnectWire({ from: state.fromNode.id, to: over });
+    else onConnectWire({ from: over, to: state.fromNode.id, port: portOf(state.fromHandle.id) });
+  };
+
+  const onDragOver = (e: DragEvent) => {
+    if (!e.dataTransfer.types.includes(BLOCK_MIME)) return;
+    e.preventDefault();
+    e.dataTransfer.dropEffect = "copy";
+  };
+  const onDrop = (e: DragEvent) => {
+    const type = e.dataTransfer.getData(BLOCK_MIME) as BlockType;
+    if (!type) return;
+    e.preventDefault();
+    onDropBlock(type, flow.screenToFlowPosition({ x: e.clientX, y: e.clientY }));
+  };
+  const track = (e: ReactPointerEvent) => {
+    pointer.current = { x: e.clientX, y: e.clientY };
+  };
+
+  return (
+    <div className="relative size-full" onPointerMove={track} onPointerDown={track} onDragOver={onDragOver} onDrop={onDrop}>
+      <WireMarkers />
+      <ReactFlow<FlowNode, SignalEdge>
+        nodes={nodes}
+        edges={edges}
+        nodeTypes={nodeTypes}
+        edgeTypes={edgeTypes}
+        onNodesChange={onNodesChange}
+        onEdgesChange={onEdgesChange}
+        onConnect={onConnect}
+        onConnectEnd={onConnectEnd}
+        nodesDraggable={!readOnly}
+        nodesConnectable={!readOnly}
+        elementsSelectable
+        deleteKeyCode={null}
+        snapToGrid
+        snapGrid={[GRID, GRID]}
+        minZoom={0.2}
+        maxZoom={2.5}
+        fitView
+        fitViewOptions={{ padding: 0.25, maxZoom: 1.2 }}
+        connectionRadius={24}
+        aria-label="Diagram canvas"
+        className="bg-paper"
+      >
+        <Background variant={BackgroundVariant.Dots} gap={GRID} size={1.2} color="#b9b2a3" />
+        <Controls showInteractive={false} position="bottom-left" />
+        <MiniMap
+          pannable
+          zoomable
+          position="bottom-right"
+          ariaLabel="Overview of the whole diagram"
+          nodeColor={(n) => ((n as FlowNode).data.highlighted ? "#d4891c" : n.selected ? "#1d5c63" : "#b9b2a3")}
+          maskColor="rgba(235, 232, 224, 0.7)"
+          className="!border !border-rule !bg-paper-raised"
+        />
+        {children}
+      </ReactFlow>
+    </div>
+  );
+}

@@ -1,0 +1,67 @@
+import { useId, useMemo, type Ref } from "react";
+import { parseExpression } from "@shared/expr/parse";
+import { setExpression } from "@/features/editor/commands/blocks";
+import { useEditorActions } from "@/features/editor/components/EditorContext";
+import { Tex } from "@/features/editor/components/Tex";
+import { exprLatex } from "@/features/editor/lib/exprLatex";
+
+interface Props {
+  blockId: string;
+  expr: string;
+  allowS: boolean;
+  parameters: Record<string, unknown>;
+  inputRef?: Ref<HTMLInputElement>;
+}
+
+/** Shows the expression with the offending character marked, so the message and the place agree. */
+function Pointer({ text, position }: { text: string; position: number }) {
+  const at = Math.min(position, text.length);
+  return (
+    <code aria-hidden className="block overflow-x-auto rounded bg-paper-sunk px-2 py-1 text-xs whitespace-pre">
+      {text.slice(0, at)}
+      <mark className="rounded-sm bg-fault px-px text-white">{text.slice(at, at + 1) || " "}</mark>
+      {text.slice(at + 1)}
+    </code>
+  );
+}
+
+/** The expression of a gain or transfer block, parsed on every keystroke against the declared parameters. */
+export function ExpressionField({ blockId, expr, allowS, parameters, inputRef }: Props) {
+  const { act, readOnly } = useEditorActions();
+  const id = useId();
+  const parsed = useMemo(() => parseExpression(expr, { allowS, parameters: Object.keys(parameters) }), [expr, allowS, parameters]);
+  const latex = parsed.ok ? exprLatex(parsed.ast) : null;
+  return (
+    <div className="flex flex-col gap-1">
+      <label htmlFor={id} className="text-sm font-medium">
+        {allowS ? "Transfer function of s" : "Gain (no s)"}
+      </label>
+      <input
+        id={id}
+        ref={inputRef}
+        value={expr}
+        readOnly={readOnly}
+        spellCheck={false}
+        autoComplete="off"
+        aria-invalid={parsed.ok ? undefined : true}
+        aria-describedby={`${id}-status`}
+        onChange={(e) => act("Edit expression", (d) => setExpression(d, blockId, e.target.value), { coalesce: `expr:${blockId}` })}
+        className="w-full rounded border border-rule-strong bg-paper-raised px-2.5 py-1.5 font-mono text-sm aria-invalid:border-fault read-only:bg-paper-sunk"
+      />
+      <div id={`${id}-status`} aria-live="polite">
+        {parsed.ok ? (
+          <p className="text-xs text-ink-soft">
+            Reads as <Tex latex={latex ?? ""} />
+          </p>
+        ) : (
+          <div className="flex flex-col gap-1">
+            <p className="text-xs font-medium text-fault">
+              {parsed.message} (character {parsed.position + 1})
+            </p>
+            <Pointer text={expr} position={parsed.position} />
+          </div>
+        )}
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,113 @@
+import { useId, type Ref } from "react";
+import { Button } from "@/components/Button";
+import { setLabel } from "@/features/editor/commands/blocks";
+import { deleteSelection, duplicate } from "@/features/editor/commands/selection";
+import type { EditorDoc, Selection } from "@/features/editor/commands/types";
+import { useEditorActions } from "@/features/editor/components/EditorContext";
+import { Connections } from "@/features/editor/components/panels/Connections";
+import { ExpressionField } from "@/features/editor/components/panels/ExpressionField";
+import { SumPorts } from "@/features/editor/components/panels/SumPorts";
+import { TYPE_NAME, wireAriaLabel } from "@/features/editor/lib/flowModel";
+
+interface Props {
+  doc: EditorDoc;
+  selection: Selection;
+  /** Receives the first field of the selected block, so Enter on the canvas can focus it. */
+  firstFieldRef: Ref<HTMLInputElement>;
+}
+
+/** What the selection is and everything that can be changed about it. */
+export function PropertiesPanel({ doc, selection, firstFieldRef }: Props) {
+  const { act, readOnly } = useEditorActions();
+  const labelId = useId();
+  const { blocks, wires } = selection;
+
+  if (blocks.length === 0 && wires.length === 0) {
+    return (
+      <p className="text-sm text-ink-soft">
+        Select a block or a wire to see and change it. {readOnly ? "" : "Add blocks from the rail; drag from a block's right-hand port to another block's input to wire them."}
+      </p>
+    );
+  }
+  if (blocks.length + wires.length > 1) {
+    return (
+      <div className="flex flex-col gap-3 text-sm">
+        <p>
+          {blocks.length} block{blocks.length === 1 ? "" : "s"} and {wires.length} wire{wires.length === 1 ? "" : "s"} selected.
+        </p>
+        {!readOnly && (
+          <div className="flex gap-2">
+            <Button size="sm" onClick={() => act("Duplicate", (d) => duplicate(d, selection))} disabled={blocks.length === 0}>
+              Duplicate
+            </Button>
+            <Button size="sm" variant="danger" onClick={() => act("Delete", (d) => deleteSelection(d, selection))}>
+              Delete selection
+            </Button>
+          </div>
+        )}
+      </div>
+    );
+  }
+  if (wires.length === 1) {
+    const wire = doc.wires.find((w) => w.id === wires[0]);
+    if (!wire) return null;
+    return (
+      <div className="flex flex-col gap-3 text-sm">
+        <h3 className="font-medium">Wire {wire.id}</h3>
+        <p className="text-ink-soft">{wireAriaLabel(wire, doc.blocks.find((b) => b.id === wire.to))}.</p>
+        {!readOnly && (
+          <Button size="sm" variant="danger" onClick={() => act("Delete wire", (d) => deleteSelection(d, selection))}>
+            Delete wire
+          </Button>
+        )}
+      </div>
+    );
+  }
+  const block = doc.blocks.find((b) => b.id === blocks[0]);
+  if (!block) return null;
+  const hasExpr = block.type === "gain" || block.type === "transfer";
+  return (
+    <div className="flex flex-col gap-4">
+      <h3 className="text-sm font-semibold">
+        {TYPE_NAME[block.type]} <span className="font-mono">{block.id}</span>
+      </h3>
+      {hasExpr && (
+        <ExpressionField
+          key={block.id}
+          blockId={block.id}
+          expr={block.expr}
+          allowS={block.type === "transfer"}
+          parameters={doc.parameters}
+          inputRef={firstFieldRef}
+        />
+      )}
+      <div className="flex flex-col gap-1">
+        <label htmlFor={labelId} className="text-sm font-medium">
+          Label
+        </label>
+        <input
+          id={labelId}
+          ref={hasExpr ? undefined : firstFieldRef}
+          value={block.label ?? ""}
+          readOnly={readOnly}
+          placeholder={block.id}
+          maxLength={200}
+          onChange={(e) => act("Edit label", (d) => setLabel(d, block.id, e.target.value), { coalesce: `label:${block.id}` })}
+          className="rounded border border-rule-strong bg-paper-raised px-2.5 py-1.5 text-sm read-only:bg-paper-sunk"
+        />
+      </div>
+      {block.type === "sum" && <SumPorts doc={doc} block={block} />}
+      <Connections doc={doc} blockId={block.id} hasOutput={block.type !== "output"} />
+      {!readOnly && (
+        <div className="flex gap-2 border-t border-rule pt-3">
+          <Button size="sm" onClick={() => act("Duplicate", (d) => duplicate(d, selection))}>
+            Duplicate
+          </Button>
+          <Button size="sm" variant="danger" onClick={() => act("Delete block", (d) => deleteSelection(d, selection))}>
+            Delete block
+          </Button>
+        </div>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,110 @@
+import { useId } from "react";
+import { toast } from "sonner";
+import { Button } from "@/components/Button";
+import { Tex } from "@/features/editor/components/Tex";
+import { pairKey, type ResultView } from "@/features/editor/lib/resultView";
+import { resultLatex, resultPlainText, transferText } from "@/features/editor/lib/resultText";
+import type { LiveResult } from "@/features/editor/hooks/useLiveResult";
+
+interface Props {
+  live: LiveResult;
+  view: ResultView;
+  /** The outcome belongs to an older document than the one on the canvas. */
+  stale: boolean;
+  onPair: (key: string) => void;
+}
+
+const copy = (text: string, what: string) =>
+  navigator.clipboard.writeText(text).then(
+    () => toast.success(`Copied the result as ${what}.`),
+    () => toast.error("The browser refused clipboard access; select the text and copy it instead."),
+  );
+
+/** The closed-loop transfer function of the chosen pair, its characteristic polynomial and cancelled modes. */
+export function ResultsPanel({ live, view, stale, onPair }: Props) {
+  const pairId = useId();
+  const { result, transfer, transfers } = view;
+  const status = live.crash
+    ? "The engine stopped unexpectedly."
+    : stale || live.pending
+      ? "Updating…"
+      : live.ms !== null
+        ? `Computed in ${live.ms < 10 ? live.ms.toFixed(1) : Math.round(live.ms)} ms`
+        : "";
+  return (
+    <div className="flex flex-col gap-3">
+      <p className="text-xs text-ink-faint" role="status">{status}</p>
+      {live.crash && <p role="alert" className="text-sm text-fault">{live.crash}</p>}
+      {!result && !live.crash && (
+        <p className="text-sm text-ink-soft">
+          {live.outcome ? "No result while the diagram has errors: fix the problems listed." : "Working out the result…"}
+        </p>
+      )}
+      {result && transfer && (
+        <>
+          {transfers.length > 1 && (
+            <div className="flex items-center gap-2 text-sm">
+              <label htmlFor={pairId} className="text-ink-soft">Input → output</label>
+              <select id={pairId} value={pairKey(transfer)} onChange={(e) => onPair(e.target.value)} className="rounded border border-rule-strong bg-paper-raised px-2 py-1">
+                {transfers.map((t) => (
+                  <option key={pairKey(t)} value={pairKey(t)}>{t.input} → {t.output}</option>
+                ))}
+              </select>
+            </div>
+          )}
+          <section aria-label="Closed-loop transfer function" className="rounded border border-rule bg-paper px-3 py-2">
+            <p className="text-xs text-ink-soft">
+              From <span className="font-mono">{transfer.input}</span> to <span className="font-mono">{transfer.output}</span>
+            </p>
+            <div className="overflow-x-auto py-1">
+              <Tex display latex={`T(s) = ${transfer.latex}`} />
+            </div>
+            <output aria-label="Closed-loop transfer function as text" className="block font-mono text-xs break-all text-ink-soft">
+              {transferText(transfer)}
+            </output>
+          </section>
+          <section aria-label="Characteristic polynomial" className="text-sm">
+            <p className="text-xs text-ink-soft">Characteristic polynomial (all modes of the loop, nothing cancelled)</p>
+            <div className="overflow-x-auto">
+              <Tex latex={`\\Delta(s) = ${result.characteristicLatex}`} />
+            </div>
+          </section>
+          <Cancellations transfer={transfer} />
+          <div className="flex flex-wrap gap-2">
+            <Button size="sm" onClick={() => void copy(resultLatex(transfer, result.characteristicLatex), "LaTeX")}>Copy as LaTeX</Button>
+            <Button size="sm" onClick={() => void copy(resultPlainText(transfer, result.characteristic), "text")}>Copy as text</Button>
+          </div>
+        </>
+      )}
+      <p className="border-t border-rule pt-2 text-xs text-ink-soft">Results describe the linear model as drawn; validate on the plant.</p>
+    </div>
+  );
+}
+
+const rootText = ([re, im]: [number, number]) =>
+  im === 0 ? re.toPrecision(4) : `${re.toPrecision(4)} ${im < 0 ? "−" : "+"} ${Math.abs(im).toPrecision(4)}j`;
+
+/** Cancelled common factors: an unstable one is a hidden unstable mode and is shown as an alarm. */
+function Cancellations({ transfer }: { transfer: ResultView["transfer"] & object }) {
+  if (transfer.cancelled.length === 0) return null;
+  return (
+    <ul className="flex flex-col gap-1.5 text-sm">
+      {transfer.cancelled.map((c) => (
+        <li
+          key={c.factor}
+          role={c.unstable ? "alert" : undefined}
+          className={c.unstable ? "rounded border-2 border-fault bg-fault-tint px-3 py-2" : "rounded border border-rule bg-paper px-3 py-1.5"}
+        >
+          <p className={c.unstable ? "font-semibold text-fault" : "font-medium"}>
+            {c.unstable ? "Hidden unstable mode" : "Cancelled stable mode"}: <span className="font-mono">({c.factor})</span>
+          </p>
+          <p className="text-xs">
+            Cancels between numerator and denominator of {transfer.input} → {transfer.output}; root{c.roots.length === 1 ? "" : "s"} at nominal values:{" "}
+            <span className="font-mono">{c.roots.map(rootText).join(", ")}</span>.
+            {c.unstable && " The transfer function hides it, but the loop is internally unstable."}
+          </p>
+        </li>
+      ))}
+    </ul>
+  );
+}

@@ -1,0 +1,97 @@
+import type { Point } from "@/features/editor/commands/types";
+import type { Side } from "@/features/editor/geometry/sumPorts";
+
+export interface Box {
+  x: number;
+  y: number;
+  width: number;
+  height: number;
+}
+
+export interface WireEnds {
+  /** Where the wire leaves the source's output (on its right side). */
+  source: Point;
+  /** Where it enters the target's input port. */
+  target: Point;
+  /** The side of the target the port is on. */
+  side: Side;
+  sourceBox: Box;
+  targetBox: Box;
+}
+
+/** Straight run out of an output and into an input before the first bend. */
+export const STUB = 16;
+/** Clearance between a detour and the blocks it passes. */
+export const GAP = 24;
+
+const bottom = (b: Box) => b.y + b.height;
+
+/**
+ * The orthogonal polyline of a signal wire. Forward wires take one vertical jog halfway; wires that must run
+ * backwards (feedback) leave to the right, pass underneath both blocks and come back, so return paths sit
+ * below the forward path; wires into the bottom or top port of a junction arrive vertically.
+ */
+export function wireRoute({ source: s, target: t, side, sourceBox, targetBox }: WireEnds): Point[] {
+  const out = s.x + STUB;
+  if (side === "left") {
+    if (t.x - s.x >= 2 * STUB) {
+      const mx = (s.x + t.x) / 2;
+      return simplify([s, { x: mx, y: s.y }, { x: mx, y: t.y }, t]);
+    }
+    const low = Math.max(bottom(sourceBox), bottom(targetBox)) + GAP;
+    const back = t.x - STUB;
+    return simplify([s, { x: out, y: s.y }, { x: out, y: low }, { x: back, y: low }, { x: back, y: t.y }, t]);
+  }
+  if (side === "bottom") {
+    if (t.x >= out && s.y >= t.y + STUB) return simplify([s, { x: t.x, y: s.y }, t]);
+    const low = Math.max(bottom(sourceBox), bottom(targetBox), t.y) + GAP;
+    return simplify([s, { x: out, y: s.y }, { x: out, y: low }, { x: t.x, y: low }, t]);
+  }
+  if (t.x >= out && s.y <= t.y - STUB) return simplify([s, { x: t.x, y: s.y }, t]);
+  const high = Math.min(sourceBox.y, targetBox.y, t.y) - GAP;
+  return simplify([s, { x: out, y: s.y }, { x: out, y: high }, { x: t.x, y: high }, t]);
+}
+
+/** Drops repeated points and the middle of three collinear points. */
+function simplify(points: Point[]): Point[] {
+  const kept: Point[] = [];
+  for (const p of points) {
+    const last = kept[kept.length - 1];
+    if (last && last.x === p.x && last.y === p.y) continue;
+    const prev = kept[kept.length - 2];
+    if (prev && last && ((prev.x === last.x && last.x === p.x) || (prev.y === last.y && last.y === p.y))) kept.pop();
+    kept.push(p);
+  }
+  return kept;
+}
+
+/** SVG path through the points with corners rounded by at most `radius` (less on short segments). */
+export function roundedPath(points: Point[], radius = 6): string {
+  if (points.length === 0) return "";
+  let d = `M ${points[0].x} ${points[0].y}`;
+  for (let i = 1; i < points.length - 1; i += 1) {
+    const [a, b, c] = [points[i - 1], points[i], points[i + 1]];
+    const r = Math.min(radius, Math.hypot(b.x - a.x, b.y - a.y) / 2, Math.hypot(c.x - b.x, c.y - b.y) / 2);
+    const before = towards(b, a, r);
+    const after = towards(b, c, r);
+    d += ` L ${before.x} ${before.y} Q ${b.x} ${b.y} ${after.x} ${after.y}`;
+  }
+  const end = points[points.length - 1];
+  return `${d} L ${end.x} ${end.y}`;
+}
+
+function towards(from: Point, to: Point, distance: number): Point {
+  const length = Math.hypot(to.x - from.x, to.y - from.y) || 1;
+  return { x: from.x + ((to.x - from.x) / length) * distance, y: from.y + ((to.y - from.y) / length) * distance };
+}
+
+/** The point halfway along the polyline, where a wire's label sits. */
+export function routeMidpoint(points: Point[]): Point {
+  const lengths = points.slice(1).map((p, i) => Math.abs(p.x - points[i].x) + Math.abs(p.y - points[i].y));
+  let left = lengths.reduce((a, b) => a + b, 0) / 2;
+  for (let i = 0; i < lengths.length; i += 1) {
+    if (left <= lengths[i]) return towards(points[i], points[i + 1], left);
+    left -= lengths[i];
+  }
+  return points[points.length - 1] ?? { x: 0, y: 0 };
+}

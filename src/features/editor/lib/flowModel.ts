@@ -1,0 +1,106 @@
+import type { Edge, Node } from "@xyflow/react";
+import type { Block, BlockType } from "@shared/diagram/schema";
+import type { Severity } from "@shared/diagram/problems";
+import type { EditorDoc, EditorWire, Point, Selection } from "@/features/editor/commands/types";
+import { sumPortPlaces, type Side } from "@/features/editor/geometry/sumPorts";
+
+/** What a block's node draws: the block itself and how the editor marks it. No callbacks live here. */
+export interface BlockNodeData<B extends Block = Block> extends Record<string, unknown> {
+  block: B;
+  /** Consumed by the reduction step being shown. */
+  highlighted: boolean;
+  /** Worst problem the validator or engine reports on this block. */
+  problem: Severity | null;
+}
+
+export type NodeOf<T extends BlockType> = Node<BlockNodeData<Extract<Block, { type: T }>>, T>;
+export type FlowNode = { [T in BlockType]: NodeOf<T> }[BlockType];
+
+export interface SignalEdgeData extends Record<string, unknown> {
+  highlighted: boolean;
+  problem: Severity | null;
+  /** Side of the target block the wire enters. */
+  side: Side;
+}
+export type SignalEdge = Edge<SignalEdgeData, "signal">;
+
+/** Decorations the canvas layers over the document. */
+export interface Marks {
+  highlightBlocks: ReadonlySet<string>;
+  highlightWires: ReadonlySet<string>;
+  blockProblems: ReadonlyMap<string, Severity>;
+  wireProblems: ReadonlyMap<string, Severity>;
+}
+
+export const TYPE_NAME: Record<BlockType, string> = {
+  input: "Input",
+  output: "Output",
+  sum: "Summing junction",
+  gain: "Gain",
+  transfer: "Transfer function",
+  integrator: "Integrator",
+  branch: "Pickoff point",
+};
+
+export const inHandle = (port: number | undefined) => (port === undefined ? "in" : `in${port}`);
+export const OUT_HANDLE = "out";
+
+/** Where a block without a stored position is placed: a loose grid in document order. */
+export const fallbackPosition = (index: number): Point => ({ x: 48 + (index % 6) * 176, y: 48 + Math.floor(index / 6) * 128 });
+
+export const blockAriaLabel = (b: Block) => `${TYPE_NAME[b.type]} ${b.id}${b.label ? ` (${b.label})` : ""}`;
+
+export function wireAriaLabel(w: EditorWire, target: Block | undefined): string {
+  const into = target?.type === "sum" && w.port !== undefined ? ` port ${w.port} (${target.signs[w.port] === "-" ? "minus" : "plus"})` : "";
+  return `Wire ${w.id} from ${w.from} to ${w.to}${into}`;
+}
+
+interface Transient {
+  selection: Selection;
+  /** Positions of blocks being dragged, before the drop commits them. */
+  dragging: ReadonlyMap<string, Point>;
+  measured: ReadonlyMap<string, { width: number; height: number }>;
+}
+
+const stepAttrs = (on: boolean) => (on ? { "aria-current": "step" as const } : undefined);
+
+/** The canvas nodes for a document: positions from its layout, plus selection, drag state and marks. */
+export function buildNodes(doc: EditorDoc, marks: Marks, t: Transient): FlowNode[] {
+  const selected = new Set(t.selection.blocks);
+  return doc.blocks.map((block, index) => {
+    const highlighted = marks.highlightBlocks.has(block.id);
+    return {
+      id: block.id,
+      type: block.type,
+      position: t.dragging.get(block.id) ?? doc.layout?.[block.id] ?? fallbackPosition(index),
+      data: { block, highlighted, problem: marks.blockProblems.get(block.id) ?? null },
+      selected: selected.has(block.id),
+      measured: t.measured.get(block.id),
+      ariaLabel: blockAriaLabel(block),
+      domAttributes: stepAttrs(highlighted),
+    } as FlowNode;
+  });
+}
+
+/** The canvas edges for a document's wires. */
+export function buildEdges(doc: EditorDoc, marks: Marks, selection: Selection): SignalEdge[] {
+  const selected = new Set(selection.wires);
+  const blocks = new Map(doc.blocks.map((b) => [b.id, b]));
+  return doc.wires.map((w) => {
+    const target = blocks.get(w.to);
+    const side: Side = target?.type === "sum" && w.port !== undefined ? (sumPortPlaces(target.signs.length)[w.port]?.side ?? "left") : "left";
+    const highlighted = marks.highlightWires.has(w.id);
+    return {
+      id: w.id,
+      type: "signal",
+      source: w.from,
+      target: w.to,
+      sourceHandle: OUT_HANDLE,
+      targetHandle: inHandle(target?.type === "sum" ? w.port : undefined),
+      selected: selected.has(w.id),
+      data: { highlighted, problem: marks.wireProblems.get(w.id) ?? null, side },
+      ariaLabel: wireAriaLabel(w, target),
+      domAttributes: stepAttrs(highlighted),
+    };
+  });
+}

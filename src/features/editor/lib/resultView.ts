@@ -1,0 +1,27 @@
+import type { Problem } from "@shared/diagram/problems";
+import type { ReduceOutcome } from "@shared/engine/reduceDocument";
+import type { ReductionResult, ReductionStep, TransferResult } from "@shared/reduce/result";
+
+export const pairKey = (t: Pick<TransferResult, "input" | "output">) => `${t.input}→${t.output}`;
+
+export interface ResultView {
+  result: ReductionResult | null;
+  transfers: TransferResult[];
+  /** The pair the panel shows: the chosen one, else the first. */
+  transfer: TransferResult | null;
+  /** Steps of that pair's reduction (steps without a pair belong to every pair). */
+  steps: ReductionStep[];
+  problems: Problem[];
+}
+
+/** What the results panel and the canvas highlight show for an engine outcome and a chosen pair. */
+export function resultView(outcome: ReduceOutcome | null, chosen: string | null): ResultView {
+  if (!outcome) return { result: null, transfers: [], transfer: null, steps: [], problems: [] };
+  if (!outcome.ok) return { result: null, transfers: [], transfer: null, steps: [], problems: outcome.problems };
+  const { result } = outcome;
+  const transfer = result.transfers.find((t) => pairKey(t) === chosen) ?? result.transfers[0] ?? null;
+  const steps = transfer
+    ? result.steps.filter((s) => s.input === undefined || (s.input === transfer.input && s.output === transfer.output))
+    : [];
+  return { result, transfers: result.transfers, transfer, steps, problems: result.warnings };
+}

@@ -1,0 +1,123 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { CheckedResult } from "@shared/api/versions";
+import { createApp } from "@server/app";
+import { ladderDiagram } from "@server/bench/diagrams";
+import { invitationToken, PASSWORD, signedUp, startTestApp, uniqueEmail, type TestApp } from "./support/harness";
+
+// Unity negative feedback around K/(s(s+2)): T = K/(s^2 + 2s + K) (from memory: Ogata, Modern Control Engineering,
+// the standard second-order servo example).
+const servo = {
+  format: "loopwright-diagram",
+  version: 1,
+  title: "Second-order servo",
+  parameters: { K: 4 },
+  blocks: [
+    { id: "r", type: "input" },
+    { id: "e", type: "sum", signs: ["+", "-"] },
+    { id: "g", type: "transfer", expr: "K/(s*(s+2))" },
+    { id: "y", type: "output" },
+  ],
+  wires: [
+    { id: "w1", from: "r", to: "e", port: 0 },
+    { id: "w2", from: "e", to: "g" },
+    { id: "w3", from: "g", to: "y" },
+    { id: "w4", from: "g", to: "e", port: 1, note: "kept: readers keep unknown fields" },
+  ],
+};
+
+let t: TestApp;
+let owner: Awaited<ReturnType<typeof signedUp>>;
+let teamId: string;
+let diagramId: string;
+
+beforeAll(async () => {
+  t = await startTestApp();
+  owner = await signedUp(t, "vera");
+  teamId = (await owner.client.post("/api/teams").send({ name: "Calender stack" })).body.team.id;
+  diagramId = (await owner.client.post(`/api/teams/${teamId}/diagrams`).send({ title: "Nip load" })).body.diagram.id;
+});
+afterAll(() => t.close());
+
+describe("saving versions", () => {
+  it("stores version 1 with the engine's checked result and keeps unknown fields", async () => {
+    const res = await owner.client.post(`/api/diagrams/${diagramId}/versions`).send({ baseVersion: 0, message: "first", document: servo });
+    expect(res.status).toBe(201);
+    expect(res.body.version).toMatchObject({ number: 1, message: "first", createdBy: "vera" });
+    const checked = res.body.version.result as CheckedResult;
+    expect(checked.ok).toBe(true);
+    if (!checked.ok) return;
+    const pair = checked.result.transfers[0];
+    expect([pair.numerator, pair.denominator]).toEqual(["K", "s^2 + 2*s + K"]);
+    expect(res.body.version.document.wires[3].note).toBe("kept: readers keep unknown fields");
+    const detail = await owner.client.get(`/api/diagrams/${diagramId}`);
+    expect(detail.body.diagram.latestVersion).toBe(1);
+    expect(detail.body.latestVersion.number).toBe(1);
+  });
+
+  it("answers a stale base version with 409 and the version that won, overwriting nothing", async () => {
+    const base = (await owner.client.get(`/api/diagrams/${diagramId}`)).body.latestVersion.number as number;
+    const winner = await owner.client.post(`/api/diagrams/${diagramId}/versions`).send({ baseVersion: base, message: "teammate", document: servo });
+    expect(winner.status).toBe(201);
+    const loser = await owner.client.post(`/api/diagrams/${diagramId}/versions`).send({ baseVersion: base, message: "mine", document: servo });
+    expect(loser.status).toBe(409);
+    expect(loser.body.error.code).toBe("stale_version");
+    expect(loser.body.latest).toMatchObject({ number: base + 1, message: "teammate" });
+    const list = (await owner.client.get(`/api/diagrams/${diagramId}/versions`)).body.versions;
+    expect(list.map((v: { message: string }) => v.message)).not.toContain("mine");
+  });
+
+  it("lets exactly one of two simultaneous saves on the same base win", async () => {
+    const base = (await owner.client.get(`/api/diagrams/${diagramId}`)).body.latestVersion.number as number;
+    const [a, b] = await Promise.all(
+      ["left", "right"].map((message) => owner.client.post(`/api/diagrams/${diagramId}/versions`).send({ baseVersion: base, message, document: servo })),
+    );
+    expect([a.status, b.status].sort()).toEqual([201, 409]);
+  });
+
+  it("refuses a document that is not a Loopwright document with 422 and its problems", async () => {
+    const res = await owner.client.post(`/api/diagrams/${diagramId}/versions`).send({ baseVersion: 99, document: { ...servo, version: 7 } });
+    expect(res.status).toBe(422);
+    expect(res.body.error.code).toBe("invalid_document");
+    expect(res.body.problems[0].code).toBe("unsupported-version");
+  });
+
+  it("keeps an unfinished diagram, with its problems naming the block as the result", async () => {
+    const d = (await owner.client.post(`/api/teams/${teamId}/diagrams`).send({ title: "Unfinished" })).body.diagram.id;
+    const unfinished = { ...servo, wires: servo.wires.slice(0, 3) }; // the sum's minus port is unwired
+    const res = await owner.client.post(`/api/diagrams/${d}/versions`).send({ baseVersion: 0, document: unfinished });
+    expect(res.status).toBe(201);
+    const checked = res.body.version.result as CheckedResult;
+    expect(checked.ok).toBe(false);
+    if (checked.ok) return;
+    expect(checked.problems).toContainEqual(expect.objectContaining({ code: "unwired-port", blockId: "e" }));
+  });
+
+  it("refuses viewers with 403 and lets them read versions", async () => {
+    const email = uniqueEmail("viewer");
+    await owner.client.post(`/api/teams/${teamId}/invitations`).send({ email, role: "viewer" }).expect(201);
+    const viewer = t.client();
+    await viewer.post("/api/auth/sign-up").send({ name: "V", email, password: PASSWORD }).expect(201);
+    await viewer.post(`/api/invitations/${invitationToken(t.mailbox, email)}/accept`).expect(200);
+    expect((await viewer.post(`/api/diagrams/${diagramId}/versions`).send({ baseVersion: 0, document: servo })).status).toBe(403);
+    expect((await viewer.get(`/api/diagrams/${diagramId}/versions/1`)).body.version.number).toBe(1);
+    expect((await viewer.get(`/api/diagrams/${diagramId}/versions/999`)).status).toBe(404);
+  });
+
+  it("stops the engine at the server's time budget and says so", async () => {
+    const tight = createApp({ ...appDepsOf(t), engineBudget: { timeMs: 1, memoryMb: 256, concurrency: 2 } });
+    const { default: request } = await import("supertest");
+    const client = request.agent(tight).set("Origin", "http://loopwright.test");
+    await client.post("/api/auth/sign-in").send({ email: owner.user.email, password: PASSWORD }).expect(200);
+    const d = (await client.post(`/api/teams/${teamId}/diagrams`).send({ title: "Big ladder" })).body.diagram.id;
+    const res = await client.post(`/api/diagrams/${d}/versions`).send({ baseVersion: 0, document: ladderDiagram(500) });
+    expect(res.status).toBe(201);
+    const checked = res.body.version.result as CheckedResult;
+    expect(checked.ok).toBe(false);
+    if (checked.ok) return;
+    expect(checked.problems[0].message).toMatch(/time|budget|limit/i);
+  });
+});
+
+function appDepsOf(app: TestApp) {
+  return app.deps;
+}

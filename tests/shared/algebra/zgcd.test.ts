@@ -1,0 +1,43 @@
+import fc from "fast-check";
+import { describe, expect, it } from "vitest";
+import { heuristicGcd } from "@shared/algebra/heugcd";
+import { gcdModP, modPrime, remModP } from "@shared/algebra/modp";
+import { polyIsZero, polyMul } from "@shared/algebra/poly";
+import { ratFromExpr, ratNumerator } from "@shared/algebra/ratfn";
+import { zContent, zGcd } from "@shared/algebra/zgcd";
+import { zDivExact, zQuo, type ZPoly, type ZRec } from "@shared/algebra/zpoly";
+import { polyExpr } from "./support";
+
+const zOf = (e: Parameters<typeof ratFromExpr>[0]) => ratNumerator(ratFromExpr(e)).z;
+const primitive = (z: ZPoly) => zQuo(z, zContent(z));
+
+describe("gcd building blocks", () => {
+  it("Euclid over Z/p on hand-checked cases (common practice)", () => {
+    const p = 7;
+    expect(remModP([0, 0, 1], [1, 1], p)).toEqual([1]); // s^2 mod (s + 1) = 1
+    expect(gcdModP([6, 0, 1], [6, 1], p)).toEqual([6, 1]); // gcd(s^2 − 1, s − 1) = s − 1
+    expect(gcdModP([1, 1], [2, 1], p)).toEqual([1]);
+    expect(modPrime(0)).toBe(67108859);
+    expect(modPrime(1) < modPrime(0)).toBe(true);
+  });
+
+  it("the heuristic gcd recovers planted factors with parameters on its own, without the fallback (fast-check)", () => {
+    let found = 0;
+    fc.assert(
+      fc.property(polyExpr(true), polyExpr(true), polyExpr(true, 2), (a, b, c) => {
+        const [x, y] = [a, b].map((e) => polyMul(ratNumerator(ratFromExpr(e)), ratNumerator(ratFromExpr(c))));
+        fc.pre(!polyIsZero(x) && !polyIsZero(y));
+        const [px, py] = [primitive(x.z), primitive(y.z)];
+        fc.pre(typeof px !== "bigint" && typeof py !== "bigint" && px.v === "s" && py.v === "s");
+        const h = heuristicGcd(px as ZRec, py as ZRec, zGcd);
+        if (h === null) return;
+        found++;
+        expect(zDivExact(px, h) !== null && zDivExact(py, h) !== null).toBe(true);
+        const planted = primitive(zOf(c));
+        if (typeof planted !== "bigint" && planted.v === "s") expect(zDivExact(h, planted)).not.toBeNull();
+      }),
+      { numRuns: 200 },
+    );
+    expect(found).toBeGreaterThan(150);
+  });
+});
