@@ -1,10 +1,18 @@
 import tseslint from "typescript-eslint";
 
 // The one-way doors of the layout: shared/ is pure; server/ and src/ never import each other.
-const nodeBuiltins = ["node:*", "fs", "path", "http", "crypto", "child_process", "os", "url", "worker_threads"];
-const forbid = (groups, message) => ({
-  "no-restricted-imports": ["error", { patterns: [{ group: groups, message }] }],
-});
+const nodeBuiltins = ["fs", "path", "http", "https", "crypto", "child_process", "os", "url", "worker_threads", "net"];
+// Bare package names go in `paths` (exact match); folder patterns in `patterns`.
+const forbid = (groups, message) => {
+  const bare = groups.filter((g) => !g.includes("*") && !g.includes("/"));
+  const patterns = groups.filter((g) => !bare.includes(g));
+  return {
+    "no-restricted-imports": [
+      "error",
+      { paths: bare.map((name) => ({ name, message })), patterns: [{ group: [...patterns, "node:*"], message }] },
+    ],
+  };
+};
 
 export default tseslint.config(
   { ignores: ["dist/**", "node_modules/**", ".data/**", "test-results/**", "playwright-report/**"] },
@@ -17,7 +25,7 @@ export default tseslint.config(
   {
     files: ["shared/**/*.ts"],
     rules: forbid(
-      ["@/*", "@server/*", "react", "react-dom", "express", "sequelize", "pg", ...nodeBuiltins, "../src/*", "../server/*"],
+      ["@/*", "@server/*", "react", "react-dom", "express", "sequelize", "pg", ...nodeBuiltins, "**/src/*", "**/server/*"],
       "shared/ is pure TypeScript: no DOM, Node, server or client imports.",
     ),
   },
