@@ -1,5 +1,4 @@
 import { readFileSync, statSync } from "node:fs";
-import { reduceDocument } from "@shared/engine/reduceDocument";
 import type { Problem } from "@shared/diagram/problems";
 import { HELP, USAGE, parseReduceArgs } from "@server/cli/args";
 import { parseJsonText } from "@server/cli/jsonText";
@@ -54,7 +53,7 @@ function exprText(raw: unknown, p: Problem): string | undefined {
 }
 
 /** The text for stdout; every failure is thrown as an Exit carrying its code and stderr lines. */
-function run(argv: readonly string[]): string {
+async function run(argv: readonly string[]): Promise<string> {
   const parsed = parseReduceArgs(argv);
   if (parsed.kind === "help") return HELP;
   if (parsed.kind === "usage-error") throw usageError(parsed.message);
@@ -66,6 +65,8 @@ function run(argv: readonly string[]): string {
     const { line, column, message } = doc.error;
     throw new Exit(1, [`reduce: ${file}: not valid JSON at line ${line}, column ${column}: ${message}`]);
   }
+  // Loaded only now: --help and command-line mistakes answer without loading the algebra.
+  const { reduceDocument } = await import("@shared/engine/reduceDocument");
   const reduced = reduceDocument(doc.value, { input, output });
   if (!reduced.ok) {
     const pairProblems = reduced.problems.filter((p) => p.code === "unknown-pair-id");
@@ -78,9 +79,9 @@ function run(argv: readonly string[]): string {
   return json ? `${JSON.stringify(reduced.result, null, 2)}\n` : formatReport(reduced.result, reduced.doc.title);
 }
 
-function main(): void {
+async function main(): Promise<void> {
   try {
-    process.stdout.write(run(process.argv.slice(2)));
+    process.stdout.write(await run(process.argv.slice(2)));
     process.exitCode = 0;
   } catch (e) {
     if (e instanceof Exit) {
@@ -94,4 +95,4 @@ function main(): void {
   }
 }
 
-main();
+await main();

@@ -1,5 +1,6 @@
 import { ratField, type RatFn } from "@shared/algebra/ratfn";
 import type { Problem } from "@shared/diagram/problems";
+import { weighRat } from "@shared/engine/ratView";
 import { loopProblems, type FactoredLoop } from "@shared/engine/wellPosed";
 import type { Budget } from "@shared/reduce/budget";
 import type { SignalFlowGraph } from "@shared/reduce/graph";
@@ -32,7 +33,7 @@ export function checkLoops(
   const onPath = new Set(first?.pivots ? first.nodes : []);
   const inLoops = loopComponents(graph).flat();
   const apart = (ids: string[]) =>
-    loopDeterminants(graph.subgraph(ids), ratField, budget).map(({ nodes, det }) => ({ nodes, factors: [det] }));
+    loopDeterminants(graph.subgraph(ids), ratField, budget, weighRat).map(({ nodes, det }) => ({ nodes, factors: [det] }));
   const loops = apart(inLoops.filter((id) => !onPath.has(id)));
   const nodes = inLoops.filter((id) => onPath.has(id));
   let group: FactoredLoop | null = first?.pivots && nodes.length > 0 ? { nodes, factors: first.pivots } : null;

@@ -63,7 +63,8 @@ const unstableRoot = ([re, im]: [number, number]): boolean => re >= -1e-9 * Math
 /**
  * The modes a pair's transfer hides: T = P/χ and, in lowest terms, N/D; the cancelled part is χ/D, split
  * into factors where possible (parameter-free rational linear and quadratic factors, square-free parts),
- * each with its roots at the nominal parameter values and `unstable` when one has Re ≥ 0.
+ * each with its roots at the nominal parameter values and `unstable` when one has Re ≥ 0 (within 1e-9,
+ * relative, so a cancelled integrator counts). A pair whose transfer is 0 hides every mode of χ.
  * `cache` maps a quotient's text to its result, since many pairs share it.
  * Example: plant 1/(s - 1) behind a controller (s - 1)/(s + 1) → [{ factor: "s - 1", roots: [[1, 0]], unstable: true }].
  */

@@ -1,7 +1,7 @@
 import { AlgebraError, DEGREE_LIMIT } from "@shared/algebra/errors";
 import { polyDegree } from "@shared/algebra/poly";
 import { polyToLatex, polyToText } from "@shared/algebra/polytext";
-import { ratDenominator, ratField, ratNumerator, ratToLatex, ratToText, type RatFn } from "@shared/algebra/ratfn";
+import { ratDenominator, ratField, ratNumerator, ratToLatex, type RatFn } from "@shared/algebra/ratfn";
 import type { Problem } from "@shared/diagram/problems";
 import { parameterValue, type DiagramDocument } from "@shared/diagram/schema";
 import { loadDiagram, validateDiagram } from "@shared/diagram/validate";
@@ -9,10 +9,11 @@ import { blockGains } from "@shared/engine/blockGains";
 import { cancelledModes, characteristicPolynomial } from "@shared/engine/modes";
 import { selectPairs } from "@shared/engine/pairs";
 import { checkLoops } from "@shared/engine/loops";
+import { showRat, weighRat } from "@shared/engine/ratView";
 import { listBlocks } from "@shared/engine/wellPosed";
 import { buildSignalGraph } from "@shared/reduce/build";
 import { createBudget, ReductionLimitError } from "@shared/reduce/budget";
-import { SingularLoopError } from "@shared/reduce/eliminate";
+import { SingularLoopError } from "@shared/reduce/dense";
 import { reducePairs } from "@shared/reduce/reduce";
 import type { Cancellation, ReductionResult } from "@shared/reduce/result";
 
@@ -29,7 +30,6 @@ export type ReduceOutcome =
   | { ok: true; doc: DiagramDocument; result: ReductionResult }
   | { ok: false; problems: Problem[] };
 
-const showRat = (g: RatFn) => ({ expr: ratToText(g), latex: ratToLatex(g) });
 const isError = (p: Problem) => p.severity === "error";
 
 /**
@@ -37,6 +37,9 @@ const isError = (p: Problem) => p.severity === "error";
  * found), check each loop is well-posed, reduce every (input, output) pair with its trace, and form the
  * characteristic polynomial and each pair's cancelled modes. Warnings of validation and engine go into
  * `result.warnings`. Never throws for bad input: every failure is a Problem with a code.
+ * Improper blocks (deg num > deg den, e.g. a PD controller "K*(s+1)") are allowed and reduced exactly
+ * like any other; a loop whose return difference vanishes as s → ∞ is refused ("improper-loop") only
+ * when all its blocks are proper, and only warned about when it holds an improper one (see loopProblems).
  * Example: reduceDocument(spindleDoc).result.transfers[0] → { numerator: "K*s + 2*K", … }.
  */
 export function reduceDocument(raw: unknown, opts: ReduceOptions = {}): ReduceOutcome {
@@ -69,7 +72,7 @@ function reduceChecked(
   const budget = createBudget(opts.limits);
   let reduced: ReturnType<typeof reducePairs<RatFn>>;
   try {
-    reduced = reducePairs(graph, ratField, showRat, pairs, budget, true);
+    reduced = reducePairs(graph, ratField, showRat, pairs, budget, { determinant: true, weigh: weighRat });
   } catch (err) {
     // A singular loop on a pair's paths: name it through the loop-by-loop check.
     const named = err instanceof SingularLoopError ? checkLoops(graph, gains, undefined, budget).problems : [];

@@ -50,3 +50,11 @@ export function solveDense<T>(
   }
   return { det, solution: new Map(unknowns.map((id, i) => [id, x[i]])) };
 }
+
+/** The loop equations of these nodes have no unique solution. */
+export class SingularLoopError extends Error {
+  constructor(readonly nodes: string[]) {
+    super(`Algebraic loop through ${nodes.join(", ")}`);
+    this.name = "SingularLoopError";
+  }
+}

@@ -1,6 +1,6 @@
 import type { Field } from "@shared/algebra/field";
 import type { Budget } from "@shared/reduce/budget";
-import { loopDeterminant, reducePairGraph } from "@shared/reduce/eliminate";
+import { loopDeterminant, reducePairGraph, type WeighGain } from "@shared/reduce/eliminate";
 import type { SignalFlowGraph } from "@shared/reduce/graph";
 import type { ReductionStep } from "@shared/reduce/result";
 import { loopComponents, reachable } from "@shared/reduce/scc";
@@ -19,8 +19,13 @@ export interface LoopDeterminant<T> {
  * the components, so their product is det(I − A) of the whole graph, and a singular one can be named.
  * Example: loopDeterminants(graph, field, budget) → [{ nodes: ["e", "c", "p", "h"], det: 1 + c·p·h }].
  */
-export function loopDeterminants<T>(graph: SignalFlowGraph<T>, field: Field<T>, budget: Budget): LoopDeterminant<T>[] {
-  return loopComponents(graph).map((nodes) => ({ nodes, det: loopDeterminant(graph.subgraph(nodes), field, budget) }));
+export function loopDeterminants<T>(
+  graph: SignalFlowGraph<T>,
+  field: Field<T>,
+  budget: Budget,
+  weigh?: WeighGain<T>,
+): LoopDeterminant<T>[] {
+  return loopComponents(graph).map((nodes) => ({ nodes, det: loopDeterminant(graph.subgraph(nodes), field, budget, weigh) }));
 }
 
 export interface PairTransfer<T> {
@@ -40,7 +45,8 @@ export interface PairTransfer<T> {
  * reduction (tagged with the pair). Only nodes on a path from the input to the output take part: loops
  * elsewhere do not change this pair's transfer. A pair without a path has transfer 0 and no steps.
  * With `determinant`, the first pair with a path also returns the pivots of its reduction, whose product
- * is det(I − A) over its nodes: that saves a separate determinant run of the same loops.
+ * is det(I − A) over its nodes: that saves a separate determinant run of the same loops. `weigh` sizes a
+ * gain (e.g. its degree in s) to order ties between rules (see comparePlans).
  * Example: reducePairs(graph, field, show, [["r", "y"]], budget).transfers[0].gain is T(r → y).
  */
 export function reducePairs<T>(
@@ -49,7 +55,7 @@ export function reducePairs<T>(
   show: ShowGain<T>,
   pairs: readonly (readonly [string, string])[],
   budget: Budget,
-  determinant = false,
+  opts: { determinant?: boolean; weigh?: WeighGain<T> } = {},
 ): { transfers: PairTransfer<T>[]; steps: ReductionStep[] } {
   const log = new StepLog(show);
   const forward = new Map<string, Set<string>>();
@@ -58,14 +64,17 @@ export function reducePairs<T>(
     if (!cache.has(id)) cache.set(id, reachable(graph, id, dir));
     return cache.get(id)!;
   };
-  let wantDet = determinant;
+  let wantDet = opts.determinant ?? false;
   const transfers = pairs.map(([input, output]): PairTransfer<T> => {
     const from = reach(forward, input, "forward");
     if (!from.has(output)) return { input, output, gain: field.zero, final: null, nodes: [], pivots: null };
     const to = reach(backward, output, "backward");
     const nodes = [...from].filter((id) => to.has(id));
     log.beginPair(input, output);
-    const reduced = reducePairGraph(graph.subgraph(nodes), field, input, output, log, budget, wantDet);
+    const reduced = reducePairGraph(graph.subgraph(nodes), field, input, output, log, budget, {
+      determinant: wantDet,
+      weigh: opts.weigh,
+    });
     wantDet = false;
     return { input, output, ...reduced, nodes };
   });

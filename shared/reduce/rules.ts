@@ -1,5 +1,6 @@
 import type { Field } from "@shared/algebra/field";
 import { spend, type Budget } from "@shared/reduce/budget";
+import { SingularLoopError, solveDense } from "@shared/reduce/dense";
 import type { SfgEdge, SfgNode, SignalFlowGraph } from "@shared/reduce/graph";
 import { feedbackPair, type Action, type Blocked } from "@shared/reduce/plan";
 import type { ReductionRule } from "@shared/reduce/result";
@@ -232,7 +233,6 @@ function eliminate<T>(ctx: RuleContext<T>, node: SfgNode<T>): boolean {
   const { field } = ctx;
   const ins = sorted(node.ins);
   const outs = sorted(node.outs);
-  spend(ctx.budget, ins.length * outs.length);
   const hasLoop = pivot.loop !== null;
   const scaled = ins.map((i) => (hasLoop ? field.div(i.gain, pivot.value) : i.gain));
   const tail = hasLoop ? `/(${returnDifference(null, pivot.loop!)})` : "";
@@ -261,7 +261,10 @@ function drop<T>(ctx: RuleContext<T>, node: SfgNode<T>): void {
   ctx.graph.removeNode(node.id);
 }
 
-/** Applies the planned rule at a node; false when its pivot turned out to be zero (node blocked). Example: applyPlan(ctx, n, "series"). */
+/**
+ * Applies the planned rule at a node; false when its pivot turned out to be zero (the node is then blocked).
+ * Example: applyPlan(ctx, n, "series").
+ */
 export function applyPlan<T>(ctx: RuleContext<T>, node: SfgNode<T>, action: Action): boolean {
   switch (action) {
     case "tidy":
@@ -287,4 +290,25 @@ export function applyPlan<T>(ctx: RuleContext<T>, node: SfgNode<T>, action: Acti
     case "eliminate":
       return eliminate(ctx, node);
   }
+}
+
+/**
+ * The last resort: every node left is solved together in one general elimination (see solveDense), leaving
+ * the single edge input → output. Throws SingularLoopError when the remaining loops have no unique solution.
+ * Example: two junctions each feeding itself with gain exactly 1 are eliminated together.
+ */
+export function solveTogether<T>(ctx: RuleContext<T>, input: string, output: string): void {
+  const { graph, field } = ctx;
+  const inner = [...graph.nodes.values()].filter((n) => n.id !== input && n.id !== output);
+  const { solution, det } = solveDense(field, graph, input);
+  if (!solution) throw new SingularLoopError(inner.map((n) => n.id));
+  ctx.pivots?.push(det);
+  const gain = solution.get(output)!;
+  const names = inner.map((n) => n.id).join(", ");
+  const draft = produce(ctx, "eliminate-node", graph.edges(), inner.map((n) => n.own), gain, (eq) =>
+    `Eliminate ${names} together (a loop of gain exactly 1 around one of them leaves no single-node pivot): ${input} to ${output} becomes ${eq}.`,
+  );
+  for (const n of inner) graph.removeNode(n.id);
+  for (const e of [...graph.node(output).ins]) graph.removeEdge(e);
+  link(ctx, input, output, draft);
 }

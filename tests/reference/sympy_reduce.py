@@ -4,9 +4,10 @@
 Independent of the TypeScript engine: it writes one linear equation per block and solves the system
 exactly over QQ(s, parameters). Reads one JSON request on stdin, writes one JSON answer on stdout.
 
-  {"mode": "reduce", "jobs": [{"id", "doc", "ours"?: {"transfers": [...], "characteristic"}}]}
+  {"mode": "reduce", "jobs": [{"id", "doc", "ours"?: {"transfers": [{"input", "output", "numerator",
+      "denominator", "cancelled"?: [{"factor"}]}], "characteristic"}}]}
     -> {"results": [{"id", "transfers": [{"input", "output", "numerator", "denominator",
-        "agrees"?, "lowestTerms"?, "monic"?}], "characteristic", "characteristicAgrees"?, "error"?}]}
+        "agrees"?, "lowestTerms"?, "monic"?, "cancelledAgrees"?}], "characteristic", "characteristicAgrees"?, "error"?}]}
   {"mode": "bench", "doc", "input", "output"}
     -> {"seconds", "numeratorDegree", "denominatorDegree"}
 
@@ -155,6 +156,10 @@ def reduce_job(job):
                 entry["lowestTerms"] = bool(n_o == 0 or not gcd(n_o, d_o).has(S))
                 if d_o.free_symbols <= {S}:  # numeric denominators are printed monic
                     entry["monic"] = bool(sympy.Poly(d_o, S).LC() == 1)
+                if "cancelled" in mine:  # chi = D * (product of the cancelled factors) * constant
+                    hidden = sympy.Mul(*[parse(c["factor"], names) for c in mine["cancelled"]])
+                    rest = cancel(parse(ours["characteristic"], names) / (d_o * hidden))
+                    entry["cancelledAgrees"] = bool(rest != 0 and not rest.has(S))
         out["transfers"].append(entry)
     if ours is not None:
         ratio = cancel(parse(ours["characteristic"], names) / chi) if chi != 0 else sympy.zoo

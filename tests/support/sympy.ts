@@ -21,8 +21,8 @@ export interface PairText {
 export interface SympyJob {
   id: string;
   doc: unknown;
-  /** Our result to compare exactly (cross-multiplied) with sympy's. */
-  ours?: { transfers: PairText[]; characteristic: string };
+  /** Our result to compare exactly (cross-multiplied) with sympy's; `cancelled` is checked against χ/D. */
+  ours?: { transfers: (PairText & { cancelled?: { factor: string }[] })[]; characteristic: string };
 }
 
 export interface SympyTransfer extends PairText {
@@ -30,6 +30,8 @@ export interface SympyTransfer extends PairText {
   lowestTerms?: boolean;
   /** Only for denominators free of parameters: leading coefficient 1. */
   monic?: boolean;
+  /** χ = D · Π(cancelled factors) · constant. */
+  cancelledAgrees?: boolean;
 }
 
 export interface SympyResult {

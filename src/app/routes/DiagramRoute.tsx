@@ -1,6 +1,8 @@
 import { useParams } from "react-router-dom";
-import { DiagramSummaryView } from "@/features/diagrams/components/DiagramSummaryView";
+import { EditorPage } from "@/features/editor/components/EditorPage";
 
 export function DiagramRoute() {
-  return <DiagramSummaryView id={useParams().id!} />;
+  const id = useParams().id!;
+  // Keyed by id: moving to another diagram (e.g. after "save as new") starts a fresh session.
+  return <EditorPage key={id} id={id} />;
 }

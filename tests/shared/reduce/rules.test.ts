@@ -13,7 +13,7 @@ type Doc = ReturnType<typeof diagram>;
 
 function reduce(doc: Doc, gains: Record<string, Frac>, pair: [string, string] = ["r", "y"]) {
   const graph = buildSignalGraph(doc, new Map(Object.entries(gains)), f);
-  const out = reducePairs(graph, f, showFrac, [pair], createBudget(), true);
+  const out = reducePairs(graph, f, showFrac, [pair], createBudget(), { determinant: true });
   expect(traceViolations(doc, out.steps)).toEqual([]);
   return { ...out, t: out.transfers[0] };
 }
@@ -83,7 +83,7 @@ describe("textbook rules on small graphs (plain rational gains)", () => {
     g.addEdge({ from: "u", to: "n", gain: frac(2), label: "a", sign: 1, blocks: [], wires: [] });
     g.addEdge({ from: "n", to: "n", gain: frac(1, 3), label: "l", sign: 1, blocks: [], wires: [] });
     g.addEdge({ from: "n", to: "y", gain: frac(5), label: "b", sign: 1, blocks: [], wires: [] });
-    const out = reducePairs(g, f, showFrac, [["u", "y"]], createBudget(), true);
+    const out = reducePairs(g, f, showFrac, [["u", "y"]], createBudget(), { determinant: true });
     expect(fracText(out.transfers[0].gain)).toBe("15"); // 2/(1 − 1/3)·5
     expect(fracText(fieldProduct(f, out.transfers[0].pivots!))).toBe("2/3");
     expect(out.steps.map((s) => s.rule)).toEqual(["feedback", "series"]);
@@ -134,7 +134,7 @@ describe("general elimination", () => {
     edge("u", "a", frac(1), "w");
     edge("c", "y", frac(1), "z");
     edge("a", "y", frac(3), "k");
-    const out = reducePairs(g, f, showFrac, [["u", "y"]], createBudget(), true);
+    const out = reducePairs(g, f, showFrac, [["u", "y"]], createBudget(), { determinant: true });
     // By hand: a = u + b/3 + c/4, b = u + a/2, c = 2b  →  a = u + 5b/6 = 11u/6 + 5a/12  →  a = 22u/7,
     // b = 18u/7, c = 36u/7, y = c + 3a = 102u/7.
     expect(fracText(out.transfers[0].gain)).toBe("102/7");
@@ -154,7 +154,7 @@ describe("general elimination", () => {
     edge("a", "b", frac(2), "q");
     edge("b", "a", frac(3), "t");
     edge("b", "y", frac(1), "z");
-    const out = reducePairs(g, f, showFrac, [["u", "y"]], createBudget(), true);
+    const out = reducePairs(g, f, showFrac, [["u", "y"]], createBudget(), { determinant: true });
     expect(fracText(out.transfers[0].gain)).toBe("-1/3");
     expect(fracText(fieldProduct(f, out.transfers[0].pivots!))).toBe("-6");
     const last = out.steps[out.steps.length - 1];
@@ -187,7 +187,7 @@ describe("loop determinants", () => {
       [["e1", "a"], "1/2"],
       [["e2", "b"], "2/3"],
     ]);
-    const pair = reducePairs(graph, f, showFrac, [["r", "y"]], createBudget(), true).transfers[0];
+    const pair = reducePairs(graph, f, showFrac, [["r", "y"]], createBudget(), { determinant: true }).transfers[0];
     expect(fracText(fieldProduct(f, pair.pivots!))).toBe("1/3"); // 1 − 1/2 − 1/3 + 1/6
   });
 

@@ -1,8 +1,20 @@
-import type { DiagramDocument, Wire } from "@shared/diagram/schema";
+import type { Block, DiagramDocument, Wire } from "@shared/diagram/schema";
 
 /** Inside the editor every wire carries an id, so selection, undo, highlights and messages can name it. */
 export type EditorWire = Wire & { id: string };
-export type EditorDoc = Omit<DiagramDocument, "wires"> & { wires: EditorWire[] };
+
+/** A diagram document whose wires all have ids; unknown fields of the format are kept as loaded. */
+export interface EditorDoc {
+  [field: string]: unknown;
+  format: DiagramDocument["format"];
+  version: DiagramDocument["version"];
+  title?: string;
+  notes?: string;
+  parameters: DiagramDocument["parameters"];
+  blocks: Block[];
+  wires: EditorWire[];
+  layout?: DiagramDocument["layout"];
+}
 
 export interface Point {
   x: number;

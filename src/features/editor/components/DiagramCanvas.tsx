@@ -111,7 +111,7 @@ export function DiagramCanvas({ nodes, edges, onNodesChange, onEdgesChange, read
         className="bg-paper"
       >
         <Background variant={BackgroundVariant.Dots} gap={GRID} size={1.2} color="#b9b2a3" />
-        <Controls showInteractive={false} position="bottom-left" />
+        <Controls showInteractive={false} showFitView={false} position="bottom-left" />
         <MiniMap
           pannable
           zoomable

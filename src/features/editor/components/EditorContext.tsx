@@ -1,8 +1,11 @@
 import { createContext, useContext } from "react";
-import type { EditorDoc, Outcome } from "@/features/editor/commands/types";
+import type { EditorDoc, Outcome, Point } from "@/features/editor/commands/types";
 
-/** Applies a named command; a refusal is shown to the user. Returns whether the document changed. */
-export type Act = (label: string, command: (doc: EditorDoc) => Outcome, opts?: { coalesce?: string }) => boolean;
+/**
+ * Applies a named command; a refusal is shown to the user, near `at` (client coordinates) when given.
+ * Returns whether the command went through.
+ */
+export type Act = (label: string, command: (doc: EditorDoc) => Outcome, opts?: { coalesce?: string; at?: Point | null }) => boolean;
 
 export interface EditorActions {
   act: Act;

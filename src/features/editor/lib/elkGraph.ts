@@ -76,7 +76,11 @@ export function returnBlocks(doc: EditorDoc): Set<string> {
   const leadsOut = new Set(doc.blocks.filter((b) => b.type === "output").map((b) => b.id));
   const queue = [...leadsOut];
   for (let k = 0; k < queue.length; k += 1) {
-    for (const from of prev.get(queue[k]) ?? []) if (!leadsOut.has(from)) (leadsOut.add(from), queue.push(from));
+    for (const from of prev.get(queue[k]) ?? []) {
+      if (leadsOut.has(from)) continue;
+      leadsOut.add(from);
+      queue.push(from);
+    }
   }
   return new Set(doc.blocks.filter((b) => state.has(b.id) && !leadsOut.has(b.id)).map((b) => b.id));
 }

@@ -1,6 +1,7 @@
 import { useId, useMemo, type Ref } from "react";
 import { parseExpression } from "@shared/expr/parse";
 import { setExpression } from "@/features/editor/commands/blocks";
+import { parameterNameRefusal, setParameter } from "@/features/editor/commands/parameters";
 import { useEditorActions } from "@/features/editor/components/EditorContext";
 import { Tex } from "@/features/editor/components/Tex";
 import { exprLatex } from "@/features/editor/lib/exprLatex";
@@ -22,6 +23,22 @@ function Pointer({ text, position }: { text: string; position: number }) {
       <mark className="rounded-sm bg-fault px-px text-white">{text.slice(at, at + 1) || " "}</mark>
       {text.slice(at + 1)}
     </code>
+  );
+}
+
+/** One click to declare the name the parser did not know, with nominal value 1 (edit it in the table). */
+function DeclareButton({ expr, position }: { expr: string; position: number }) {
+  const { act } = useEditorActions();
+  const name = /^[A-Za-z][A-Za-z0-9_]*/.exec(expr.slice(position))?.[0];
+  if (!name || parameterNameRefusal(name)) return null;
+  return (
+    <button
+      type="button"
+      onClick={() => act("Add parameter", (d) => setParameter(d, name, { value: 1 }))}
+      className="self-start rounded border border-signal px-2 py-0.5 text-xs text-signal hover:bg-signal-tint"
+    >
+      Declare parameter {name} = 1
+    </button>
   );
 }
 
@@ -59,6 +76,7 @@ export function ExpressionField({ blockId, expr, allowS, parameters, inputRef }:
               {parsed.message} (character {parsed.position + 1})
             </p>
             <Pointer text={expr} position={parsed.position} />
+            {parsed.code === "unknown-name" && !readOnly && <DeclareButton expr={expr} position={parsed.position} />}
           </div>
         )}
       </div>

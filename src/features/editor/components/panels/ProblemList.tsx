@@ -5,7 +5,7 @@ export function ProblemList({ problems, onPick }: { problems: Problem[]; onPick:
   if (problems.length === 0) return <p className="text-sm text-steady">No problems found.</p>;
   const sorted = [...problems].sort((a, b) => (a.severity === b.severity ? 0 : a.severity === "error" ? -1 : 1));
   return (
-    <ul className="flex flex-col gap-1.5" aria-label="Problems">
+    <ul className="flex max-h-96 flex-col gap-1.5 overflow-y-auto" aria-label="Problems">
       {sorted.map((p, i) => {
         const mark = p.severity === "error" ? "border-fault bg-fault-tint" : "border-trace bg-trace-tint";
         const body = (

@@ -1,0 +1,167 @@
+import { expect, test, type Locator, type Page } from "@playwright/test";
+import { PASSWORD, createTeam, signUp, uniqueEmail } from "./helpers";
+
+// Canvas blocks and wires are found by the accessible names the editor gives them ("Transfer function G1",
+// "Wire w2 from e1 to G1"); handles are only used as drag points.
+const block = (page: Page, name: string) => page.getByRole("group", { name, exact: true });
+const wire = (page: Page, name: string) => page.getByRole("group", { name, exact: true });
+const handle = (page: Page, nodeId: string, handleId: string) =>
+  page.locator(`.react-flow__handle[data-nodeid="${nodeId}"][data-handleid="${handleId}"]`);
+const closedLoopText = (page: Page) => page.getByLabel("Closed-loop transfer function as text");
+/** The displayed result without spaces and explicit `*`, so K/(s^2 + 2*s + K) reads K/(s^2+2s+K). */
+const compact = async (page: Page) => ((await closedLoopText(page).textContent()) ?? "").replace(/[\s*]/g, "");
+
+async function drag(page: Page, from: Locator, to: Locator) {
+  const a = (await from.boundingBox())!;
+  const b = (await to.boundingBox())!;
+  await page.mouse.move(a.x + a.width / 2, a.y + a.height / 2);
+  await page.mouse.down();
+  await page.mouse.move(b.x + b.width / 2, b.y + b.height / 2, { steps: 12 });
+  await page.mouse.up();
+}
+
+async function createDiagram(page: Page, title: string) {
+  await page.getByLabel("Title").fill(title);
+  await page.getByRole("button", { name: "Create diagram" }).click();
+  await page.getByRole("table", { name: "Diagrams" }).getByRole("link", { name: title }).click();
+  await expect(page.getByRole("heading", { level: 1, name: title })).toBeVisible();
+  await expect(page.getByRole("application", { name: "Diagram canvas" })).toBeVisible();
+}
+
+async function saveVersion(page: Page, message: string) {
+  await page.getByRole("toolbar", { name: "Editor" }).getByRole("button", { name: "Save version" }).click();
+  const dialog = page.getByRole("dialog", { name: /Save version/ });
+  await dialog.getByLabel("What changed (optional)").fill(message);
+  await dialog.getByRole("button", { name: "Save version" }).click();
+}
+
+test("draws unity negative feedback around K/(s(s+2)), steps through it, saves, survives a reload and a conflict", async ({ page, browser }) => {
+  await page.setViewportSize({ width: 1400, height: 1000 });
+  const email = uniqueEmail("drafter");
+  await signUp(page, "Edda Editor", email);
+  await createTeam(page, `Boiler loop ${Date.now()}`);
+  await createDiagram(page, "Drum level");
+  const diagramUrl = page.url();
+
+  // Blocks from the keyboard: each new block lands right of the one selected before it.
+  for (const key of ["1", "2", "4", "7"]) await page.keyboard.press(key);
+  for (const name of ["Input r1", "Summing junction e1", "Transfer function G1", "Output y1"]) await expect(block(page, name)).toBeVisible();
+  await page.getByRole("button", { name: "Fit view" }).click();
+
+  // Wires with the mouse, one from the properties panel with the keyboard.
+  await drag(page, handle(page, "r1", "out"), handle(page, "e1", "in0"));
+  await drag(page, handle(page, "e1", "out"), handle(page, "G1", "in"));
+  await drag(page, handle(page, "G1", "out"), handle(page, "e1", "in1"));
+  await block(page, "Transfer function G1").click();
+  await page.getByLabel("Connect output to").selectOption({ label: "y1" });
+  await page.getByRole("button", { name: "Connect", exact: true }).click();
+  for (const name of [
+    "Wire w1 from r1 to e1 port 0 (plus)",
+    "Wire w2 from e1 to G1",
+    "Wire w3 from G1 to e1 port 1 (minus)",
+    "Wire w4 from G1 to y1",
+  ])
+    await expect(wire(page, name)).toBeAttached();
+
+  // Connections that would break the format are refused, with the reason shown on the canvas.
+  const refusal = page.getByRole("alert").filter({ hasText: "Not allowed" });
+  await drag(page, handle(page, "r1", "out"), handle(page, "G1", "in"));
+  await expect(refusal).toContainText('Block "G1" already takes its input from wire "w2"');
+  await drag(page, handle(page, "G1", "out"), block(page, "Input r1"));
+  await expect(refusal).toContainText('Input block "r1" is an external signal and takes no incoming wire');
+  await expect(page.getByRole("group", { name: /^Wire w5/ })).toHaveCount(0);
+
+  // The expression: a live parse error points at the character, then the real plant.
+  await block(page, "Transfer function G1").click();
+  const expr = page.getByLabel("Transfer function of s");
+  await expr.fill("K/(s*(s+2)");
+  await expect(expr).toHaveAttribute("aria-invalid", "true");
+  await expect(page.getByText(/closing parenthesis .* is missing \(character \d+\)/)).toBeVisible();
+  await expr.fill("K/(s*(s+2))");
+  // Now only K is wrong: it is not a declared parameter.
+  await expect(page.getByRole("button", { name: "Declare parameter K = 1" })).toBeVisible();
+  await expect(page.getByText("Used in expressions but not declared:")).toContainText("K");
+
+  // Parameter K, then the closed loop appears.
+  await page.getByLabel("New parameter name").fill("K");
+  await page.getByLabel("New parameter value").fill("4");
+  await page.getByRole("button", { name: "Add parameter" }).click();
+  await expect(page.getByLabel("Nominal value of K")).toHaveValue("4");
+  await expect(expr).not.toHaveAttribute("aria-invalid", "true");
+  // from memory: Ogata, Modern Control Engineering — unity feedback around G gives G/(1+G) = K/(s^2+2s+K).
+  await expect.poll(() => compact(page)).toBe("K/(s^2+2s+K)");
+
+  // Signs: flipping the feedback sign on the junction itself gives positive feedback, K/(s^2+2s-K).
+  await page.getByRole("button", { name: "Sign of port 1 of e1: minus. Flip it" }).click();
+  // from memory: Ogata, Modern Control Engineering — positive feedback gives G/(1−G).
+  await expect.poll(() => compact(page)).toBe("K/(s^2+2s-K)");
+  await expect(page.getByRole("button", { name: "Sign of port 1 of e1: plus. Flip it" })).toBeVisible();
+
+  // Undo and redo with the keyboard.
+  await page.keyboard.press("Control+z");
+  await expect(page.getByRole("button", { name: "Sign of port 1 of e1: minus. Flip it" })).toBeVisible();
+  await expect.poll(() => compact(page)).toBe("K/(s^2+2s+K)");
+  await page.keyboard.press("Control+Shift+z");
+  await expect(page.getByRole("button", { name: "Sign of port 1 of e1: plus. Flip it" })).toBeVisible();
+  await page.getByRole("toolbar", { name: "Editor" }).getByRole("button", { name: "Undo" }).click();
+  await expect.poll(() => compact(page)).toBe("K/(s^2+2s+K)");
+
+  // Stepping through the reduction marks what each step consumed.
+  await page.getByRole("button", { name: "Next step" }).click();
+  await expect(page.getByText("Step 1 of 1")).toBeVisible();
+  await expect(block(page, "Transfer function G1")).toHaveAttribute("aria-current", "step");
+  await expect(wire(page, "Wire w2 from e1 to G1")).toHaveAttribute("aria-current", "step");
+  await expect(wire(page, "Wire w3 from G1 to e1 port 1 (minus)")).toHaveAttribute("aria-current", "step");
+  await expect(block(page, "Input r1")).not.toHaveAttribute("aria-current", "step");
+  await expect(wire(page, "Wire w1 from r1 to e1 port 0 (plus)")).not.toHaveAttribute("aria-current", "step");
+  await expect(page.getByRole("region", { name: "Step 1" })).toContainText("Feedback loop");
+  await page.getByRole("button", { name: "Stop stepping" }).click();
+  await expect(block(page, "Transfer function G1")).not.toHaveAttribute("aria-current", "step");
+
+  // Save version 1.
+  await saveVersion(page, "Unity feedback around the drum");
+  await expect(page.getByRole("toolbar", { name: "Editor" })).toContainText("Saved as v1");
+
+  // An unsaved edit survives a reload as a draft (the browser asks first).
+  await block(page, "Transfer function G1").click();
+  await page.getByLabel("Label", { exact: true }).fill("Drum");
+  await expect(page.getByRole("toolbar", { name: "Editor" })).toContainText("Unsaved changes since v1");
+  const asked: string[] = [];
+  page.once("dialog", (d) => {
+    asked.push(d.type());
+    void d.accept();
+  });
+  await page.reload();
+  expect(asked).toEqual(["beforeunload"]);
+  const draft = page.getByRole("region", { name: "Unsaved draft" });
+  await expect(draft).toContainText("made on top of v1");
+  await draft.getByRole("button", { name: "Restore draft" }).click();
+  await expect(block(page, "Transfer function G1 (Drum)")).toBeVisible();
+
+  // Meanwhile a second browser saves v2 from v1…
+  const otherContext = await browser.newContext();
+  const other = await otherContext.newPage();
+  await other.setViewportSize({ width: 1400, height: 1000 });
+  await other.goto("/sign-in");
+  await other.getByLabel("E-mail").fill(email);
+  await other.getByLabel("Password").fill(PASSWORD);
+  await other.getByRole("button", { name: "Sign in" }).click();
+  await expect(other.getByRole("banner")).toContainText("Signed in as Edda Editor");
+  await other.goto(new URL(diagramUrl).pathname);
+  await block(other, "Transfer function G1").click();
+  await other.getByLabel("Transfer function of s").fill("2*K/(s*(s+2))");
+  await saveVersion(other, "Doubled the gain");
+  await expect(other.getByRole("toolbar", { name: "Editor" })).toContainText("Saved as v2");
+  await otherContext.close();
+
+  // …so saving here is refused with the conflict dialog; nothing is overwritten.
+  await saveVersion(page, "Named the plant");
+  const conflict = page.getByRole("dialog", { name: "A newer version was saved" });
+  await expect(conflict).toContainText("v2 by Edda Editor");
+  await expect(conflict).toContainText("Doubled the gain");
+  await conflict.getByRole("button", { name: "Load the newer version…" }).click();
+  await conflict.getByRole("button", { name: "Discard my changes and load it" }).click();
+  await expect(page.getByRole("toolbar", { name: "Editor" })).toContainText("Saved as v2");
+  await expect(block(page, "Transfer function G1")).toBeVisible();
+  await expect.poll(() => compact(page)).toBe("2K/(s^2+2s+2K)");
+});

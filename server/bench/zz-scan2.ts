@@ -1,0 +1,22 @@
+import fc from "fast-check";
+import { writeFileSync } from "node:fs";
+import { wellPosedDiagram } from "tests/support/arbitraries";
+import { mason } from "tests/support/mason";
+import { blockSolve } from "tests/support/blockSolve";
+import { documentParams } from "tests/support/signalGraph";
+const maxCore = Number(process.argv[2]);
+const samples = fc.sample(wellPosedDiagram({ maxCore }), { numRuns: Number(process.argv[3]), seed: Number(process.argv[4]) });
+let tm = 0, tb = 0;
+samples.forEach((g, i) => {
+  writeFileSync(`/tmp/scan-current.json`, JSON.stringify(g.doc));
+  const p = documentParams(g.doc);
+  let t0 = performance.now();
+  blockSolve(g.doc, { re: 0.3, im: 1 }, p);
+  tb += performance.now() - t0;
+  t0 = performance.now();
+  if (maxCore <= 9) mason(g.doc, { re: 0.3, im: 1 }, p);
+  const ms = performance.now() - t0;
+  tm += ms;
+  if (ms > 100) console.log(i, ms.toFixed(0), "ms mason", g.doc.blocks.length);
+});
+console.log("blockSolve total", tb.toFixed(0), "mason total", tm.toFixed(0));

@@ -1,0 +1,172 @@
+// One analysis of the chosen pair at given parameter values (the nominal ones by default): what the results
+// panel shows and the CLI prints. Pure and synchronous, so it runs in the Web Worker as is.
+import { polyParams } from "@shared/algebra/poly";
+import { ratDenominator, ratNumerator } from "@shared/algebra/ratfn";
+import { qToNumber, qToString } from "@shared/algebra/rational";
+import { exactFactors } from "@shared/analysis/factors";
+import { bode, frequencyRange, type BodeData } from "@shared/analysis/frequency";
+import { analyzeLoop, fractionText, zpkOf, type LoopAnalysis } from "@shared/analysis/loopAnalysis";
+import { bandwidth } from "@shared/analysis/margins";
+import { exactValues, polySubstitute, transferAt } from "@shared/analysis/nominal";
+import { dominantPoles, rootsOf, type RootInfo } from "@shared/analysis/poles";
+import type { PreparedAnalysis } from "@shared/analysis/prepare";
+import { routhArray, type RouthArray } from "@shared/analysis/routh";
+import { rootCounts, stabilityOf, type Stability } from "@shared/analysis/stability";
+import { stableSet, type StableSet } from "@shared/analysis/stableSet";
+import { steadyState, type SteadyState } from "@shared/analysis/steadyState";
+import { horizon, stepMetrics, type StepMetrics } from "@shared/analysis/stepMetrics";
+import { timeResponse, type TimeResponse } from "@shared/analysis/timeResponse";
+import { upDeg, upFromPoly, upText, upToPoly, type UPoly } from "@shared/analysis/upoly";
+
+export interface AnalyzeOptions {
+  /** Parameter values (missing ones take their nominal value). */
+  values?: Record<string, number>;
+  /** Settling band as a fraction; default 0.02. */
+  settlingBand?: number;
+  /** Stable parameter ranges and symbolic conditions (the slow part); default true. */
+  stableSets?: boolean;
+}
+
+export interface HiddenMode {
+  factor: string;
+  roots: [number, number][];
+  unstable: boolean;
+  /** "reduction": cancelled for all parameter values; "values": cancels only at these values. */
+  source: "reduction" | "values";
+}
+
+export interface Analysis {
+  input: string;
+  output: string;
+  values: Record<string, number>;
+  transfer: { numerator: string; denominator: string; latex: string };
+  poles: RootInfo[];
+  zeros: RootInfo[];
+  dominantPoles: RootInfo[];
+  stability: Stability;
+  characteristic: { polynomial: string; stability: Stability | null; sameVerdict: boolean | null };
+  hiddenModes: HiddenMode[];
+  dcGain: { value: number; exact: string } | null;
+  routh: RouthArray;
+  routhCharacteristic: RouthArray | null;
+  stableSets: StableSet[];
+  conditions: string[] | null;
+  responses: { step: TimeResponse; impulse: TimeResponse; ramp: TimeResponse };
+  step: StepMetrics;
+  plotHorizon: number;
+  bandwidth: number | null;
+  bode: BodeData;
+  loop: LoopAnalysis | null;
+  steadyState: SteadyState;
+  notes: string[];
+}
+
+/** Largest degree for which the Routh first column is shown with several symbolic parameters. */
+const CONDITIONS_DEGREE = 8;
+
+/**
+ * Every result for the prepared pair at the given values. Throws AnalysisError for a polynomial above
+ * degree 100 or a singular transfer at the values. Example: analyzeAt(prepared).stability.verdict === "stable".
+ */
+export function analyzeAt(p: PreparedAnalysis, opts: AnalyzeOptions = {}): Analysis {
+  const values = { ...p.nominal, ...(opts.values ?? {}) };
+  const notes: string[] = [];
+  const { num, den, cancelled } = transferAt(p.transfer, values);
+  const denFactors = exactFactors(den, "denominator");
+  const poles = rootsOf(den, denFactors);
+  const stability = stabilityOf(den);
+  const characteristic = characteristicAt(p, values, stability, notes);
+  const dc = den[0]?.n !== 0n ? { value: qToNumber(num[0] ?? { n: 0n, d: 1n }), exact: qToString(num[0] ?? { n: 0n, d: 1n }) } : null;
+  const responses = {
+    step: timeResponse(num, den, "step", denFactors),
+    impulse: timeResponse(num, den, "impulse", denFactors),
+    ramp: timeResponse(num, den, "ramp", denFactors),
+  };
+  if (!responses.step.exact) notes.push("Some poles are neither rational nor quadratic surds: their response terms are numeric (12 significant digits).");
+  const step = metricsOrWhy(num, den, stability, dc?.value ?? null, responses.step, opts.settlingBand ?? 0.02, notes);
+  const loopAt = p.loop ? analyzeLoop(p.loop.breakPoint, p.loop.L, values) : (p.loopNote ?? "");
+  const loop = typeof loopAt === "string" ? null : loopAt;
+  if (typeof loopAt === "string" && loopAt) notes.push(loopAt);
+  const loopNumeric = p.loop && loop ? transferAt(p.loop.L, values) : null;
+  const zpk = zpkOf(num, den);
+  const denSym = ratDenominator(p.transfer);
+  const symbolic = polyParams(denSym);
+  const wantSets = opts.stableSets ?? true;
+  return {
+    input: p.input,
+    output: p.output,
+    values,
+    transfer: fractionText(num, den),
+    poles,
+    zeros: rootsOf(num),
+    dominantPoles: dominantPoles(poles),
+    stability,
+    characteristic,
+    hiddenModes: hiddenModes(p, values, cancelled),
+    dcGain: dc,
+    routh: routhArray(upToPoly(den)),
+    routhCharacteristic: characteristic.stability ? routhArray(upToPoly(upFromPoly(polySubstitute(p.characteristic, exactValues(values))))) : null,
+    stableSets: wantSets ? symbolic.map((name) => stableSet(denSym, name, values)) : [],
+    conditions: wantSets && symbolic.length >= 2 && upDeg(den) <= CONDITIONS_DEGREE ? conditionsOf(routhArray(denSym)) : null,
+    responses,
+    step,
+    plotHorizon: plotHorizon(responses.step, stability, poles, dc?.value ?? 0),
+    bandwidth: bandwidth(num, den),
+    bode: bode(zpk, frequencyRange(zpk)),
+    loop,
+    steadyState: steadyState(num, den, stability.verdict, loopNumeric),
+    notes: [...notes, ...(loop?.notes ?? [])],
+  };
+}
+
+function characteristicAt(p: PreparedAnalysis, values: Record<string, number>, pair: Stability, notes: string[]): Analysis["characteristic"] {
+  const chi = upFromPoly(polySubstitute(p.characteristic, exactValues(values)));
+  const polynomial = upText(chi);
+  if (upDeg(chi) > 100) return { polynomial, stability: null, sameVerdict: null };
+  const stability = stabilityOf(chi);
+  const same = stability.verdict === pair.verdict;
+  if (!same) notes.push(`The diagram's characteristic polynomial (hidden modes included) is ${stability.verdict}, the transfer function is ${pair.verdict}: ${stability.reason}`);
+  return { polynomial, stability, sameVerdict: same };
+}
+
+function hiddenModes(p: PreparedAnalysis, values: Record<string, number>, atValues: UPoly): HiddenMode[] {
+  const exact = exactValues(values);
+  const mode = (u: UPoly, factor: string, source: HiddenMode["source"]): HiddenMode => {
+    const c = rootCounts(u);
+    return { factor, roots: rootsOf(u).flatMap((r) => Array.from({ length: r.multiplicity }, (): [number, number] => [r.re, r.im])), unstable: c.rhp + c.axis > 0, source };
+  };
+  const fromReduction = p.cancelled.map((c) => {
+    const poly = ratNumerator(transferOf(c.factor, p.parameters));
+    return mode(upFromPoly(polySubstitute(poly, exact)), c.factor, "reduction");
+  });
+  return upDeg(atValues) >= 1 ? [...fromReduction, mode(atValues, upText(atValues), "values")] : fromReduction;
+}
+
+function metricsOrWhy(num: UPoly, den: UPoly, st: Stability, t0: number | null, r: TimeResponse, band: number, notes: string[]): StepMetrics {
+  const empty: StepMetrics = { riseTime: null, peakTime: null, overshootPercent: null, settlingTime: null, finalValue: null, settlingBand: band };
+  let why: string | null = null;
+  if (st.verdict !== "stable") why = `Step metrics are not defined: the transfer function is ${st.verdict}.`;
+  else if (upDeg(num) > upDeg(den)) why = "Step metrics are not defined: T is improper (the step response starts with impulses).";
+  else if (!t0) why = "Step metrics are not defined: T(0) = 0, the step response returns to 0.";
+  if (why) {
+    notes.push(why);
+    return { ...empty, finalValue: st.verdict === "stable" ? t0 : null };
+  }
+  const m = stepMetrics(r, t0 as number, band);
+  if (m.peakTime === null) notes.push("No overshoot: the response never exceeds its final value, so there is no peak time.");
+  return m;
+}
+
+function plotHorizon(r: TimeResponse, st: Stability, poles: RootInfo[], t0: number): number {
+  if (st.verdict === "stable") return horizon(r, 1e-3 * Math.max(Math.abs(t0), 1e-12)) || 1;
+  const scale = Math.max(...poles.map((x) => Math.hypot(x.re, x.im)).filter((x) => x > 0), 1e-3);
+  return 10 / scale;
+}
+
+function conditionsOf(r: RouthArray): string[] {
+  const [first, ...rest] = r.firstColumn;
+  const positive = /^\d+(\/\d+)?$/.test(first);
+  return rest.map((e) => (positive ? `${e} > 0` : `sign(${e}) = sign(${first})`));
+}
+
+import { parseTransfer as transferOf } from "@shared/analysis/nominal";

@@ -1,0 +1,120 @@
+// Margins, sensitivity peak and bandwidth from exact polynomials in x = ω²: every crossover is a positive
+// root counted exactly (Sturm), so none is missed between grid points.
+import { q, qDiv, qMul, qToNumber, qZero, type Q } from "@shared/algebra/rational";
+import { ratEvalComplex } from "@shared/analysis/frequency";
+import { realRoots } from "@shared/analysis/sturm";
+import {
+  upAdd, upDeriv, upEvalFloat, upFrom, upMagnitudeSquared, upMul, upOnAxis, upScale, upSub, type UPoly,
+} from "@shared/analysis/upoly";
+
+export interface Crossover {
+  omega: number;
+  /** dB for a phase crossover, degrees for a gain crossover. */
+  margin: number;
+}
+
+export interface Margins {
+  gainMarginDb: number | null;
+  phaseMarginDeg: number | null;
+  gainCrossover: number | null;
+  phaseCrossover: number | null;
+  gainCrossovers: Crossover[];
+  phaseCrossovers: Crossover[];
+  notes: string[];
+}
+
+const ZERO: Q = qZero;
+const positiveOmegas = (px: UPoly): number[] => (px.length ? realRoots(px, ZERO).map(Math.sqrt) : []);
+
+/** Phase in (−180°, 180°] of a complex number. */
+const angleDeg = ([re, im]: [number, number]) => (Math.atan2(im, re) * 180) / Math.PI;
+/** Into (−180, 180]. */
+const wrap = (deg: number) => {
+  const r = deg - 360 * Math.floor((deg + 180) / 360);
+  return r === -180 ? 180 : r;
+};
+
+const smallest = (xs: Crossover[]): Crossover | null =>
+  xs.reduce<Crossover | null>((best, x) => (best === null || Math.abs(x.margin) < Math.abs(best.margin) ? x : best), null);
+
+/**
+ * Gain and phase margins of a loop gain L = num/den: gain crossovers |L(jω)| = 1, phase crossovers where
+ * L(jω) is real and negative, finite ω > 0; with several, the one with the smallest |margin|.
+ * Example: L = 2/(s + 1)^3 → gain margin 12.04 dB at ω = √3, phase margin 67.6° at ω = 0.766.
+ */
+export function margins(num: UPoly, den: UPoly): Margins {
+  const notes: string[] = [];
+  const L = (w: number) => ratEvalComplex(num, den, [0, w]);
+  const gainCrossovers = positiveOmegas(upSub(upMagnitudeSquared(num), upMagnitudeSquared(den))).map((omega) => ({
+    omega,
+    margin: wrap(180 + angleDeg(L(omega))),
+  }));
+  const n = upOnAxis(num);
+  const d = upOnAxis(den);
+  const imag = upSub(upMul(n.im, d.re), upMul(n.re, d.im)); // Im(N·conj D): odd in ω
+  const real = upAdd(upMul(n.re, d.re), upMul(n.im, d.im));
+  const oddToX = upFrom(imag.filter((_, i) => i % 2 === 1));
+  if (!imag.length && num.length) notes.push("L(jω) is real at every frequency: no isolated phase crossover.");
+  const phaseCrossovers = positiveOmegas(oddToX)
+    .filter((w) => {
+      const re = upEvalFloat(real, w);
+      const scale = Math.hypot(...L(w));
+      return re < 0 && Number.isFinite(scale) && scale > 0;
+    })
+    .map((omega) => ({ omega, margin: -20 * Math.log10(Math.hypot(...L(omega))) }));
+  const gm = smallest(phaseCrossovers);
+  const pm = smallest(gainCrossovers);
+  if (!gm) notes.push("No phase crossover (L(jω) never real and negative at a finite ω > 0): the gain margin is infinite.");
+  if (!pm) notes.push("No gain crossover (|L(jω)| never equals 1 at a finite ω > 0): the phase margin is infinite.");
+  return {
+    gainMarginDb: gm?.margin ?? null,
+    phaseMarginDeg: pm?.margin ?? null,
+    gainCrossover: pm?.omega ?? null,
+    phaseCrossover: gm?.omega ?? null,
+    gainCrossovers,
+    phaseCrossovers,
+    notes,
+  };
+}
+
+/**
+ * Smallest extra loop delay that makes a gain crossover reach −180°: min over crossovers of
+ * (phase margin in [0°, 360°) in rad)/ω. Null without a gain crossover. Example: L = 1/s → π/2 s.
+ */
+export function delayMargin(crossovers: Crossover[]): number | null {
+  if (!crossovers.length) return null;
+  return Math.min(...crossovers.map(({ omega, margin }) => ((((margin % 360) + 360) % 360) * Math.PI) / 180 / omega));
+}
+
+/** Largest value over x ≥ 0 of a(x)/b(x) (b > 0 there), and where; null when b has a root x ≥ 0. */
+function peakOfRatio(a: UPoly, b: UPoly): { value: number; x: number } | null {
+  if (!b.length || b[0].n === 0n || realRoots(b, ZERO).length) return null;
+  const f = (x: number) => upEvalFloat(a, x) / upEvalFloat(b, x);
+  const candidates = [0, ...realRoots(upSub(upMul(upDeriv(a), b), upMul(a, upDeriv(b))), ZERO)];
+  let best = { value: f(0), x: 0 };
+  for (const x of candidates) if (f(x) > best.value) best = { value: f(x), x };
+  const atInfinity = a.length === b.length ? qToNumber(a[a.length - 1]) / qToNumber(b[b.length - 1]) : a.length > b.length ? Infinity : 0;
+  if (atInfinity > best.value) best = { value: atInfinity, x: Infinity };
+  return best;
+}
+
+/**
+ * Ms = max over ω of |1/(1 + L(jω))| = |den/(den + num)|, with the frequency; null when the closed loop
+ * has a pole on the imaginary axis (Ms infinite). Example: L = 1/s → Ms = 1 (at ω → ∞).
+ */
+export function sensitivityPeak(num: UPoly, den: UPoly): { value: number; omega: number } | null {
+  const peak = peakOfRatio(upMagnitudeSquared(den), upMagnitudeSquared(upAdd(den, num)));
+  return peak && Number.isFinite(peak.value) ? { value: Math.sqrt(peak.value), omega: Math.sqrt(peak.x) } : null;
+}
+
+/**
+ * Closed-loop bandwidth: the first ω > 0 where |T(jω)| falls to |T(0)|/√2; null when T(0) is 0 or infinite
+ * or |T| never falls that far. Example: 1/(s + 1) → 1 rad/s.
+ */
+export function bandwidth(num: UPoly, den: UPoly): number | null {
+  if (!num.length || !den.length || den[0].n === 0n || num[0].n === 0n) return null;
+  const t0 = qDiv(num[0], den[0]);
+  const half = qMul(qMul(t0, t0), q(1, 2));
+  const roots = positiveOmegas(upSub(upMagnitudeSquared(num), upScale(upMagnitudeSquared(den), half)));
+  return roots.length ? roots[0] : null;
+}

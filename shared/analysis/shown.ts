@@ -1,0 +1,51 @@
+// Numbers of a closed-form response as they are printed: exact a + b·√r, or a float to 12 significant digits.
+import { q, qAdd, qIsZero, qNeg, qToNumber, qToString, type Q } from "@shared/algebra/rational";
+import { surdLatex, surdText } from "@shared/analysis/surd";
+
+/** a + b·√rad (rad a square-free integer ≥ 1; b = 0 for a rational), or a float. */
+export type Shown = { readonly a: Q; readonly b: Q; readonly rad: bigint } | number;
+
+/** An exact rational. Example: shownQ(q(1, 2)) prints "1/2". */
+export const shownQ = (a: Q): Shown => ({ a, b: q(0), rad: 1n });
+
+/** Value as a double. Example: shownValue({ a: 0, b: 1/2, rad: 3 }) ≈ 0.866. */
+export const shownValue = (x: Shown): number =>
+  typeof x === "number" ? x : qToNumber(x.a) + qToNumber(x.b) * Math.sqrt(Number(x.rad));
+
+/** Negation. Example: shownNeg(shownQ(q(1))) prints "-1". */
+export const shownNeg = (x: Shown): Shown => (typeof x === "number" ? -x : { a: qNeg(x.a), b: qNeg(x.b), rad: x.rad });
+
+const isExactZero = (x: Shown) => typeof x !== "number" && qIsZero(x.a) && qIsZero(x.b);
+
+/** One product term, so it needs no parentheses after a sign or before a factor. */
+export const shownAtomic = (x: Shown): boolean => typeof x === "number" || qIsZero(x.a) || qIsZero(x.b) || x.rad === 1n;
+
+/** 12 significant digits, no trailing zeros. Example: floatText(1/3) === "0.333333333333". */
+export const floatText = (x: number): string => String(Number(x.toPrecision(12)));
+
+function floatLatex(x: number): string {
+  const [m, e] = floatText(x).split("e");
+  return e === undefined ? m : `${m} \\cdot 10^{${Number(e)}}`;
+}
+
+/** Plain text. Example: shownText({ a: 1, b: -1, rad: 2 }) === "1 - sqrt(2)". */
+export function shownText(x: Shown): string {
+  if (typeof x === "number") return floatText(x);
+  if (qIsZero(x.b) || x.rad === 1n) return qToString(x.rad === 1n ? qAdd(x.a, x.b) : x.a);
+  const s = surdText(x.b, x.rad);
+  if (qIsZero(x.a)) return s;
+  return `${qToString(x.a)} ${s.startsWith("-") ? `- ${s.slice(1)}` : `+ ${s}`}`;
+}
+
+/** LaTeX. Example: shownLatex({ a: 0, b: 1/2, rad: 3 }) === "\\frac{\\sqrt{3}}{2}". */
+export function shownLatex(x: Shown): string {
+  if (typeof x === "number") return floatLatex(x);
+  const rational = (r: Q) => (r.d === 1n ? r.n.toString() : `${r.n < 0n ? "-" : ""}\\frac{${r.n < 0n ? -r.n : r.n}}{${r.d}}`);
+  if (qIsZero(x.b) || x.rad === 1n) return rational(x.rad === 1n ? qAdd(x.a, x.b) : x.a);
+  const s = surdLatex(x.b, x.rad);
+  if (qIsZero(x.a)) return s;
+  return `${rational(x.a)} ${s.startsWith("-") ? `- ${s.slice(1)}` : `+ ${s}`}`;
+}
+
+/** True for an exact or float zero. Example: shownIsZero(0) === true. */
+export const shownIsZero = (x: Shown): boolean => (typeof x === "number" ? x === 0 : isExactZero(x));

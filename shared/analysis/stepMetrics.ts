@@ -1,0 +1,114 @@
+// Step metrics read off the closed-form response: an adaptive grid finds each event, bisection on the
+// closed form pins it down; the horizon comes from an envelope bound, so nothing after it can matter.
+import { responseAt, responseSlopeAt, type TimeResponse } from "@shared/analysis/timeResponse";
+
+export interface StepMetrics {
+  riseTime: number | null;
+  peakTime: number | null;
+  overshootPercent: number | null;
+  settlingTime: number | null;
+  finalValue: number | null;
+  /** The settling band used, as a fraction (0.02 = ±2 %). */
+  settlingBand: number;
+}
+
+/** Overshoot below this fraction of the final value is rounding, not overshoot. */
+const OVERSHOOT_FLOOR = 1e-9;
+
+/** Σ |c|·t^k·e^{−σt} over the decaying terms: a bound on |y(t) − y(∞)|. */
+function envelope(r: TimeResponse, t: number): number {
+  let e = 0;
+  for (const x of r.terms) if (x.decay > 0) e += Math.abs(x.coefficient) * t ** x.power * Math.exp(-x.decay * t);
+  return e;
+}
+
+/**
+ * A time after which |y(t) − y(∞)| stays below tol (the envelope decreases for t > k/σ).
+ * Example: horizon(step of 1/(s + 1), 1e-6) ≈ 13.8.
+ */
+export function horizon(r: TimeResponse, tol: number): number {
+  const decaying = r.terms.filter((x) => x.decay > 0);
+  if (!decaying.length) return 1;
+  let t = Math.max(...decaying.map((x) => (x.power + 1) / x.decay));
+  for (let i = 0; i < 200 && envelope(r, t) >= tol; i++) t *= 1.25;
+  return t;
+}
+
+/** Grid from 0 to tEnd whose step follows the fastest term still alive (1/20 of its time scale). */
+function grid(r: TimeResponse, tEnd: number, scale: number): number[] {
+  const ts = [0];
+  const maxStep = tEnd / 400;
+  while (ts[ts.length - 1] < tEnd) {
+    const t = ts[ts.length - 1];
+    let rate = 0;
+    for (const x of r.terms) {
+      if (x.decay > 0 && Math.abs(x.coefficient) * (t + 1) ** x.power * Math.exp(-x.decay * t) < 1e-12 * scale) continue;
+      rate = Math.max(rate, Math.hypot(x.decay, x.frequency));
+    }
+    ts.push(Math.min(tEnd, t + Math.min(maxStep, rate > 0 ? 1 / (20 * rate) : maxStep)));
+  }
+  return ts;
+}
+
+/** Root of f in [a, b] where f(a), f(b) differ in sign (bisection to full double precision). */
+function bisect(f: (t: number) => number, a: number, b: number): number {
+  let fa = f(a);
+  for (let i = 0; i < 200 && b - a > 1e-15 * Math.max(1, Math.abs(b)); i++) {
+    const m = (a + b) / 2;
+    const fm = f(m);
+    if (fm === 0) return m;
+    if (fm > 0 === fa > 0) [a, fa] = [m, fm];
+    else b = m;
+  }
+  return (a + b) / 2;
+}
+
+/**
+ * Rise time (10–90 %), peak time, percent overshoot, settling time (last exit from the ±band) and final
+ * value of a step response whose final value is finalValue ≠ 0 (metrics on y/finalValue). Call only for
+ * stable systems. Example: for 1/(s^2 + s + 1) the overshoot is 16.30 % (= 100·exp(−ζπ/√(1−ζ²)), ζ = 1/2).
+ */
+export function stepMetrics(r: TimeResponse, finalValue: number, band = 0.02): StepMetrics {
+  const g = (t: number) => responseAt(r, t) / finalValue;
+  const scale = Math.abs(finalValue);
+  const tEnd = horizon(r, 1e-7 * scale);
+  const ts = grid(r, tEnd, scale);
+  const ys = ts.map(g);
+  const firstReach = (level: number): number | null => {
+    if (ys[0] >= level) return 0;
+    const i = ys.findIndex((y) => y >= level);
+    return i < 0 ? null : bisect((t) => g(t) - level, ts[i - 1], ts[i]);
+  };
+  const t10 = firstReach(0.1);
+  const t90 = firstReach(0.9);
+  let iMax = 0;
+  for (let i = 1; i < ys.length; i++) if (ys[i] > ys[iMax]) iMax = i;
+  let peakTime: number | null = null;
+  let overshoot = 0;
+  if (ys[iMax] - 1 > OVERSHOOT_FLOOR) {
+    const [a, b] = [ts[Math.max(0, iMax - 1)], ts[Math.min(ts.length - 1, iMax + 1)]];
+    const slope = (t: number) => responseSlopeAt(r, t) / finalValue;
+    peakTime = slope(a) > 0 && slope(b) < 0 ? bisect(slope, a, b) : ts[iMax];
+    overshoot = 100 * (Math.max(g(peakTime), ys[iMax]) - 1);
+  }
+  const outside = (t: number) => Math.abs(g(t) - 1) - band;
+  let last = ys.length - 1;
+  while (last >= 0 && Math.abs(ys[last] - 1) <= band) last--;
+  const settlingTime = last < 0 ? 0 : last === ts.length - 1 ? tEnd : bisect(outside, ts[last], ts[last + 1]);
+  return {
+    riseTime: t10 !== null && t90 !== null ? t90 - t10 : null,
+    peakTime,
+    overshootPercent: overshoot,
+    settlingTime,
+    finalValue,
+    settlingBand: band,
+  };
+}
+
+/** n + 1 evenly spaced samples [t, y(t)] on [0, tEnd] (y(0) as the limit t → 0+). Example: for plotting. */
+export function sampleResponse(r: TimeResponse, tEnd: number, n = 400): [number, number][] {
+  return Array.from({ length: n + 1 }, (_, i) => {
+    const t = (tEnd * i) / n;
+    return [t, responseAt(r, t)];
+  });
+}

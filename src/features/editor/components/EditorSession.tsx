@@ -1,0 +1,239 @@
+import { useCallback, useMemo, useRef, useState } from "react";
+import { useReactFlow } from "@xyflow/react";
+import type { DiagramDetail, DiagramVersionView } from "@shared/api/diagrams";
+import type { Problem } from "@shared/diagram/problems";
+import { Panel } from "@/components/Panel";
+import type { EditorDoc, Point, Selection } from "@/features/editor/commands/types";
+import { done } from "@/features/editor/commands/types";
+import { moveBlocks } from "@/features/editor/commands/blocks";
+import { EditorContext, type Act } from "@/features/editor/components/EditorContext";
+import { CanvasNotice, type Notice } from "@/features/editor/components/CanvasNotice";
+import { DiagramCanvas } from "@/features/editor/components/DiagramCanvas";
+import { BlockRail } from "@/features/editor/components/BlockRail";
+import { EditorToolbar } from "@/features/editor/components/EditorToolbar";
+import { SessionBanners } from "@/features/editor/components/SessionBanners";
+import { SessionDialogs } from "@/features/editor/components/SessionDialogs";
+import { StepBadge } from "@/features/editor/components/StepBadge";
+import { ParameterTable } from "@/features/editor/components/panels/ParameterTable";
+import { ProblemList } from "@/features/editor/components/panels/ProblemList";
+import { PropertiesPanel } from "@/features/editor/components/panels/PropertiesPanel";
+import { ResultsPanel } from "@/features/editor/components/panels/ResultsPanel";
+import { StepThrough } from "@/features/editor/components/panels/StepThrough";
+import { useCanvasCommands } from "@/features/editor/hooks/useCanvasCommands";
+import { useDraft } from "@/features/editor/hooks/useDraft";
+import { useEditorHistory } from "@/features/editor/hooks/useEditorHistory";
+import { useFlowState } from "@/features/editor/hooks/useFlowState";
+import { useLiveResult } from "@/features/editor/hooks/useLiveResult";
+import { useSaveFlow } from "@/features/editor/hooks/useSaveFlow";
+import { useUnsavedGuard } from "@/features/editor/hooks/useUnsavedGuard";
+import { problemMarks } from "@/features/editor/lib/marks";
+import { resultView } from "@/features/editor/lib/resultView";
+
+interface Props {
+  diagram: DiagramDetail["diagram"];
+  initialDoc: EditorDoc;
+  baseVersion: number;
+  /** The latest version the server knows now (refetched in the background). */
+  latestNow: DiagramVersionView | null;
+  onReload: () => Promise<void>;
+}
+
+/** One editing session on one version: document + history, canvas, panels, live result, saving. */
+export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onReload }: Props) {
+  const readOnly = diagram.role === "viewer";
+  const history = useEditorHistory(initialDoc);
+  const { doc, run } = history;
+  const [savedDoc, setSavedDoc] = useState(initialDoc);
+  const [base, setBase] = useState(baseVersion);
+  const dirty = doc !== savedDoc;
+  const draft = useDraft(diagram.id, base, doc, dirty && !readOnly, initialDoc);
+  const guard = useUnsavedGuard(dirty && !readOnly);
+  const flow = useReactFlow();
+
+  const [notice, setNotice] = useState<Notice | null>(null);
+  const pointer = useRef<Point | null>(null);
+  const clearNotice = useCallback(() => setNotice(null), []);
+
+  const live = useLiveResult(doc);
+  const [pair, setPair] = useState<string | null>(null);
+  const view = useMemo(() => resultView(live.outcome, pair), [live.outcome, pair]);
+  const [stepAt, setStepAt] = useState<number | null>(null);
+  const step = stepAt === null ? null : (view.steps[stepAt] ?? null);
+  const marks = useMemo(() => problemMarks(view.problems, step), [view.problems, step]);
+
+  const selectRef = useRef<(s: Selection) => void>(() => {});
+  const act = useCallback<Act>(
+    (label, command, opts) => {
+      if (readOnly) return false;
+      const outcome = run(label, command, opts);
+      if (outcome.ok) {
+        if (outcome.select) selectRef.current(outcome.select);
+        return true;
+      }
+      setNotice({ message: outcome.reason, at: opts?.at ?? null, key: Date.now() });
+      return false;
+    },
+    [readOnly, run],
+  );
+  const onMoved = useCallback(
+    (moves: Record<string, Point>) =>
+      act("Move", (d) => moveBlocks(d, moves), { coalesce: `move:${Object.keys(moves).sort().join(",")}` }),
+    [act],
+  );
+  const canvasState = useFlowState(doc, marks, onMoved);
+  selectRef.current = canvasState.setSelection;
+  const { selection, setSelection } = canvasState;
+
+  const save = useSaveFlow({
+    diagram,
+    doc,
+    baseVersion: base,
+    onSaved: (v, sent) => {
+      setBase(v.number);
+      setSavedDoc(sent);
+      draft.clear();
+    },
+    onLeaving: () => {
+      draft.clear();
+      guard.allowLeave();
+    },
+  });
+  const [help, setHelp] = useState(false);
+  const firstField = useRef<HTMLInputElement>(null);
+  const canvasBox = useRef<HTMLDivElement>(null);
+
+  const commands = useCanvasCommands({
+    doc,
+    act,
+    readOnly,
+    selection,
+    setSelection,
+    measured: canvasState.measured,
+    canvasBox,
+    pointer,
+    undo: history.undo,
+    redo: history.redo,
+    onSave: save.open,
+    onHelp: () => setHelp(true),
+    focusProperties: () => firstField.current?.focus(),
+    steps: { count: view.steps.length, at: stepAt, go: setStepAt },
+  });
+
+  const pickProblem = (p: Problem) => {
+    const wire = p.wireId ? doc.wires.find((w) => w.id === p.wireId) : undefined;
+    const sel: Selection = p.blockId ? { blocks: [p.blockId], wires: [] } : wire ? { blocks: [], wires: [wire.id] } : { blocks: [], wires: [] };
+    setSelection(sel);
+    const around = p.blockId ? [p.blockId] : wire ? [wire.from, wire.to] : [];
+    if (around.length) void flow.fitView({ nodes: around.map((id) => ({ id })), duration: 250, maxZoom: 1.3, padding: 0.6 });
+    if (p.field === "expr") window.setTimeout(() => firstField.current?.focus(), 50);
+  };
+
+  const restoreDraft = () => {
+    const offered = draft.offer;
+    if (!offered) return;
+    // Undoable like any edit; the draft's own base version is kept so a save after someone else's reports the conflict.
+    run("Restore draft", () => done(offered.doc));
+    setBase(offered.baseVersion);
+    draft.closeOffer();
+  };
+
+  const status = readOnly
+    ? "Read only: you are a viewer of this team"
+    : dirty
+      ? `Unsaved changes${base ? ` since v${base}` : ""}${draft.failed ? " (this browser refused to keep a draft)" : " · draft kept in this browser"}`
+      : base
+        ? `Saved as v${base}`
+        : "Nothing saved yet";
+
+  return (
+    <EditorContext.Provider value={useMemo(() => ({ act, readOnly }), [act, readOnly])}>
+      <SessionBanners
+        diagram={diagram}
+        readOnly={readOnly}
+        base={base}
+        latestNow={latestNow}
+        draft={draft.offer}
+        onRestore={restoreDraft}
+        onDiscardDraft={() => {
+          draft.clear();
+          draft.closeOffer();
+        }}
+        onReload={() => void onReload()}
+      />
+      <EditorToolbar
+        readOnly={readOnly}
+        undoLabel={history.undoLabel}
+        redoLabel={history.redoLabel}
+        onUndo={history.undo}
+        onRedo={history.redo}
+        onLayout={commands.layout}
+        layingOut={commands.layingOut}
+        onFit={commands.fit}
+        onHelp={() => setHelp(true)}
+        onSave={save.open}
+        status={status}
+      />
+      <div className={`grid h-[64vh] min-h-[480px] overflow-hidden rounded-b-md border border-rule ${readOnly ? "grid-cols-[1fr_20rem]" : "grid-cols-[auto_1fr_20rem]"}`}>
+        {!readOnly && <BlockRail onAdd={commands.addFromRail} />}
+        <div ref={canvasBox} className="relative min-w-0">
+          <DiagramCanvas
+            nodes={canvasState.nodes}
+            edges={canvasState.edges}
+            onNodesChange={canvasState.onNodesChange}
+            onEdgesChange={canvasState.onEdgesChange}
+            readOnly={readOnly}
+            pointer={pointer}
+            onConnectWire={commands.connectWire}
+            onDropBlock={commands.dropBlock}
+          >
+            {step && <StepBadge step={step} nodes={canvasState.nodes} />}
+          </DiagramCanvas>
+          {doc.blocks.length === 0 && (
+            <p className="pointer-events-none absolute inset-x-0 top-1/3 mx-auto max-w-sm text-center text-sm text-ink-soft">
+              {readOnly
+                ? "This diagram is empty."
+                : "An empty sheet. Add an input, a summing junction, a transfer function and an output from the rail (keys 1, 2, 4, 7), then wire them."}
+            </p>
+          )}
+          <CanvasNotice notice={notice} onDone={clearNotice} />
+        </div>
+        <aside aria-label="Properties" className="overflow-y-auto border-l border-rule bg-paper-raised p-4">
+          <PropertiesPanel doc={doc} selection={selection} firstFieldRef={firstField} />
+        </aside>
+      </div>
+      <div className="mt-4 grid gap-4 lg:grid-cols-3">
+        <Panel title="Closed-loop result">
+          <ResultsPanel live={live} view={view} stale={live.doc !== doc} onPair={setPair} />
+        </Panel>
+        <Panel title="Reduction steps">
+          <StepThrough steps={view.steps} current={step ? stepAt : null} onChange={setStepAt} />
+        </Panel>
+        <Panel title={`Problems${view.problems.length ? ` (${view.problems.length})` : ""}`}>
+          {live.outcome ? (
+            <ProblemList problems={view.problems} onPick={pickProblem} />
+          ) : (
+            <p className="text-sm text-ink-soft">Checking the diagram…</p>
+          )}
+        </Panel>
+      </div>
+      <div className="mt-4">
+        <Panel title="Parameters">
+          <ParameterTable doc={doc} />
+        </Panel>
+      </div>
+      <SessionDialogs
+        diagram={diagram}
+        base={base}
+        save={save}
+        help={help}
+        readOnly={readOnly}
+        onCloseHelp={() => setHelp(false)}
+        blocker={guard.blocker}
+        onReload={async () => {
+          draft.clear();
+          await onReload();
+        }}
+      />
+    </EditorContext.Provider>
+  );
+}

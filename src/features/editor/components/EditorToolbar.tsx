@@ -1,0 +1,55 @@
+import { Keyboard, LayoutGrid, Maximize, Redo2, Save, Undo2 } from "lucide-react";
+import type { ReactNode } from "react";
+import { Button } from "@/components/Button";
+
+interface Props {
+  readOnly: boolean;
+  undoLabel?: string;
+  redoLabel?: string;
+  onUndo: () => void;
+  onRedo: () => void;
+  onLayout: () => void;
+  layingOut: boolean;
+  onFit: () => void;
+  onHelp: () => void;
+  onSave: () => void;
+  status: ReactNode;
+}
+
+const tool = "inline-flex items-center gap-1.5 rounded px-2 py-1.5 text-sm text-ink hover:bg-paper-sunk disabled:cursor-not-allowed disabled:opacity-40";
+
+/** The commands above the canvas; every one also has a key (see the shortcuts dialog). */
+export function EditorToolbar({ readOnly, undoLabel, redoLabel, onUndo, onRedo, onLayout, layingOut, onFit, onHelp, onSave, status }: Props) {
+  return (
+    <div role="toolbar" aria-label="Editor" className="flex flex-wrap items-center gap-1 rounded-t-md border border-b-0 border-rule bg-paper-raised px-2 py-1.5">
+      {!readOnly && (
+        <>
+          <button type="button" className={tool} onClick={onUndo} disabled={!undoLabel} aria-keyshortcuts="Control+Z" title={undoLabel ? `Undo: ${undoLabel}` : "Nothing to undo"}>
+            <Undo2 className="size-4" aria-hidden /> Undo
+          </button>
+          <button type="button" className={tool} onClick={onRedo} disabled={!redoLabel} aria-keyshortcuts="Control+Shift+Z" title={redoLabel ? `Redo: ${redoLabel}` : "Nothing to redo"}>
+            <Redo2 className="size-4" aria-hidden /> Redo
+          </button>
+          <span aria-hidden className="mx-1 h-5 w-px bg-rule" />
+          <button type="button" className={tool} onClick={onLayout} disabled={layingOut} aria-keyshortcuts="L">
+            <LayoutGrid className="size-4" aria-hidden /> {layingOut ? "Laying out…" : "Auto layout"}
+          </button>
+        </>
+      )}
+      <button type="button" className={tool} onClick={onFit} aria-keyshortcuts="F">
+        <Maximize className="size-4" aria-hidden /> Fit view
+      </button>
+      <button type="button" className={tool} onClick={onHelp} aria-keyshortcuts="Shift+?">
+        <Keyboard className="size-4" aria-hidden /> Shortcuts
+      </button>
+      <div className="ml-auto flex items-center gap-3">
+        <span className="text-xs text-ink-soft" role="status">{status}</span>
+        {!readOnly && (
+          <Button variant="primary" size="sm" onClick={onSave} aria-keyshortcuts="Control+S">
+            <Save className="size-4" aria-hidden /> Save version
+          </Button>
+        )}
+      </div>
+    </div>
+  );
+}

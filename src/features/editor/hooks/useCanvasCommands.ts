@@ -1,0 +1,151 @@
+import { useRef, useState, type RefObject } from "react";
+import { useReactFlow } from "@xyflow/react";
+import { toast } from "sonner";
+import type { BlockType } from "@shared/diagram/schema";
+import { addBlock, GRID, moveBlocks } from "@/features/editor/commands/blocks";
+import { copySelection, deleteSelection, duplicate, paste, PASTE_OFFSET, selectAll, type Fragment } from "@/features/editor/commands/selection";
+import { connect, type ConnectArgs } from "@/features/editor/commands/wires";
+import type { EditorDoc, Point, Selection } from "@/features/editor/commands/types";
+import type { Act } from "@/features/editor/components/EditorContext";
+import { useShortcuts } from "@/features/editor/hooks/useShortcuts";
+import { autoLayout } from "@/features/editor/lib/autoLayout";
+import { fallbackPosition, TYPE_NAME } from "@/features/editor/lib/flowModel";
+import { errorMessage } from "@/lib/apiClient";
+
+interface Args {
+  doc: EditorDoc;
+  act: Act;
+  readOnly: boolean;
+  selection: Selection;
+  setSelection: (s: Selection) => void;
+  measured: ReadonlyMap<string, { width: number; height: number }>;
+  canvasBox: RefObject<HTMLDivElement | null>;
+  pointer: RefObject<Point | null>;
+  undo: () => void;
+  redo: () => void;
+  onSave: () => void;
+  onHelp: () => void;
+  focusProperties: () => void;
+  steps: { count: number; at: number | null; go: (i: number | null) => void };
+}
+
+const FIT = { padding: 0.25, maxZoom: 1.2, duration: 200 } as const;
+
+/** The editor's verbs, shared by the toolbar, the rail, the canvas and the keyboard. */
+export function useCanvasCommands(a: Args) {
+  const flow = useReactFlow();
+  const clipboard = useRef<{ fragment: Fragment; pastes: number } | null>(null);
+  const [layingOut, setLayingOut] = useState(false);
+  const { doc, act, selection } = a;
+
+  const positionOf = (id: string) => doc.layout?.[id] ?? fallbackPosition(doc.blocks.findIndex((b) => b.id === id));
+
+  /** Right of the one selected block (so keyboard drawing flows left to right), else the middle of the view. */
+  const placeFor = (): Point => {
+    if (selection.blocks.length === 1) {
+      const p = positionOf(selection.blocks[0]);
+      const width = a.measured.get(selection.blocks[0])?.width ?? 64;
+      return { x: p.x + width + 5 * GRID, y: p.y };
+    }
+    const rect = a.canvasBox.current?.getBoundingClientRect();
+    const centre = rect ? flow.screenToFlowPosition({ x: rect.left + rect.width / 2, y: rect.top + rect.height / 2 }) : { x: 0, y: 0 };
+    // Step aside from blocks already there, so repeated clicks do not stack blocks on one spot.
+    const at = { x: centre.x - 40, y: centre.y - 24 };
+    const taken = doc.blocks.map((b) => positionOf(b.id));
+    while (taken.some((p) => Math.abs(p.x - at.x) < 48 && Math.abs(p.y - at.y) < 40)) at.y += 4 * GRID;
+    return at;
+  };
+
+  /** Pans (never zooms) so a block just placed off-screen comes into view. */
+  const reveal = (at: Point) => {
+    const rect = a.canvasBox.current?.getBoundingClientRect();
+    if (!rect) return;
+    const p = flow.flowToScreenPosition(at);
+    const inside = p.x > rect.left && p.x < rect.right - 120 && p.y > rect.top && p.y < rect.bottom - 80;
+    if (!inside) void flow.setCenter(at.x + 40, at.y + 24, { zoom: flow.getZoom(), duration: 200 });
+  };
+  const add = (type: BlockType, at: Point = placeFor()) => {
+    const added = act(`Add ${TYPE_NAME[type].toLowerCase()}`, (d) => addBlock(d, type, at));
+    if (added) reveal(at);
+    return added;
+  };
+  const nudge = (dx: number, dy: number) => (shift: boolean) => {
+    if (selection.blocks.length === 0) return;
+    const k = shift ? 4 * GRID : GRID;
+    const moves = Object.fromEntries(selection.blocks.map((id) => [id, { x: positionOf(id).x + dx * k, y: positionOf(id).y + dy * k }]));
+    act("Move", (d) => moveBlocks(d, moves), { coalesce: `move:${[...selection.blocks].sort().join(",")}` });
+  };
+  const copy = () => {
+    if (selection.blocks.length === 0) return false;
+    clipboard.current = { fragment: copySelection(doc, selection), pastes: 0 };
+    return true;
+  };
+  const fit = () => void flow.fitView(FIT);
+
+  const layout = async () => {
+    if (doc.blocks.length === 0) return;
+    setLayingOut(true);
+    try {
+      const positions = await autoLayout(doc, a.measured);
+      if (act("Auto layout", (d) => moveBlocks(d, positions))) window.requestAnimationFrame(fit);
+    } catch (e) {
+      toast.error(`Auto layout failed: ${errorMessage(e)}`);
+    } finally {
+      setLayingOut(false);
+    }
+  };
+
+  const step = (delta: number) => {
+    const { count, at, go } = a.steps;
+    if (count === 0) return;
+    go(at === null ? (delta > 0 ? 0 : count - 1) : Math.min(count - 1, Math.max(0, at + delta)));
+  };
+
+  useShortcuts(
+    {
+      undo: a.undo,
+      redo: a.redo,
+      delete: () => act("Delete", (d) => deleteSelection(d, selection)),
+      copy: () => void copy(),
+      cut: () => copy() && act("Cut", (d) => deleteSelection(d, selection)),
+      paste: () => {
+        const clip = clipboard.current;
+        if (!clip) return void act("Paste", (d) => paste(d, { blocks: [], wires: [], layout: {} }));
+        clip.pastes += 1;
+        act("Paste", (d) => paste(d, clip.fragment, { x: PASTE_OFFSET.x * clip.pastes, y: PASTE_OFFSET.y * clip.pastes }));
+      },
+      duplicate: () => act("Duplicate", (d) => duplicate(d, selection)),
+      selectAll: () => a.setSelection(selectAll(doc)),
+      clearSelection: () => a.setSelection({ blocks: [], wires: [] }),
+      nudgeLeft: nudge(-1, 0),
+      nudgeRight: nudge(1, 0),
+      nudgeUp: nudge(0, -1),
+      nudgeDown: nudge(0, 1),
+      "add:input": () => add("input"),
+      "add:output": () => add("output"),
+      "add:sum": () => add("sum"),
+      "add:gain": () => add("gain"),
+      "add:transfer": () => add("transfer"),
+      "add:integrator": () => add("integrator"),
+      "add:branch": () => add("branch"),
+      editProperties: a.focusProperties,
+      layout: () => void layout(),
+      fitView: fit,
+      previousStep: () => step(-1),
+      nextStep: () => step(1),
+      save: a.onSave,
+      help: a.onHelp,
+    },
+    a.readOnly,
+  );
+
+  return {
+    layout: () => void layout(),
+    layingOut,
+    fit,
+    addFromRail: (type: BlockType) => void add(type),
+    /** A rail block dropped at a canvas point: centred on the pointer. */
+    dropBlock: (type: BlockType, at: Point) => void add(type, { x: at.x - 40, y: at.y - 24 }),
+    connectWire: (args: ConnectArgs) => void act("Connect", (d) => connect(d, args), { at: a.pointer.current }),
+  };
+}
