@@ -36,6 +36,7 @@ async function saveVersion(page: Page, message: string) {
 }
 
 test("draws unity negative feedback around K/(s(s+2)), steps through it, saves, survives a reload and a conflict", async ({ page, browser }) => {
+  test.setTimeout(180_000);
   await page.setViewportSize({ width: 1400, height: 1000 });
   const email = uniqueEmail("drafter");
   await signUp(page, "Edda Editor", email);
@@ -164,4 +165,78 @@ test("draws unity negative feedback around K/(s(s+2)), steps through it, saves, 
   await expect(page.getByRole("toolbar", { name: "Editor" })).toContainText("Saved as v2");
   await expect(block(page, "Transfer function G1")).toBeVisible();
   await expect.poll(() => compact(page)).toBe("2K/(s^2+2s+2K)");
+});
+
+test("a viewer sees the same diagram and its result but cannot change it", async ({ page, browser }) => {
+  test.setTimeout(180_000);
+  await page.setViewportSize({ width: 1400, height: 1000 });
+  const teamName = `Kiln loop ${Date.now()}`;
+  await signUp(page, "Olga Owner", uniqueEmail("owner"));
+  const teamId = await createTeam(page, teamName);
+  await createDiagram(page, "Zone temperature");
+  const diagramPath = new URL(page.url()).pathname;
+
+  // A straight line r1 → G1 → y1 with the plant 1/(s+1), wired from the keyboard-friendly panel.
+  for (const key of ["1", "4", "7"]) await page.keyboard.press(key);
+  await block(page, "Input r1").click();
+  await page.getByLabel("Connect output to").selectOption({ label: "G1" });
+  await page.getByRole("button", { name: "Connect", exact: true }).click();
+  await block(page, "Transfer function G1").click();
+  await page.getByLabel("Connect output to").selectOption({ label: "y1" });
+  await page.getByRole("button", { name: "Connect", exact: true }).click();
+  await expect.poll(() => compact(page)).toBe("1/(s+1)");
+  await saveVersion(page, "Open-loop plant");
+  await expect(page.getByRole("toolbar", { name: "Editor" })).toContainText("Saved as v1");
+
+  // Invite a viewer; the invitation arrives in the dev mailbox.
+  const viewerEmail = uniqueEmail("viewer");
+  await page.goto(`/teams/${teamId}/members`);
+  await page.getByLabel("Colleague's e-mail").fill(viewerEmail);
+  await page.getByLabel("Role", { exact: true }).selectOption("viewer");
+  await page.getByRole("button", { name: "Send invitation" }).click();
+  await expect(page.getByRole("table", { name: "Open invitations" })).toContainText(viewerEmail);
+  await page.goto("/dev/mailbox");
+  const link = await page.getByRole("article").filter({ hasText: `To ${viewerEmail}` }).getByRole("link", { name: /\/invite\// }).getAttribute("href");
+
+  const viewerContext = await browser.newContext();
+  const viewer = await viewerContext.newPage();
+  await viewer.setViewportSize({ width: 1400, height: 1000 });
+  await viewer.goto(new URL(link!).pathname);
+  await viewer.getByLabel("Name").fill("Vik Viewer");
+  await viewer.getByLabel("Password").fill(PASSWORD);
+  await viewer.getByRole("button", { name: `Create account and join ${teamName}` }).click();
+  await expect(viewer.getByRole("heading", { level: 1, name: teamName })).toBeVisible();
+
+  await viewer.goto(diagramPath);
+  await expect(block(viewer, "Transfer function G1")).toBeVisible();
+  await expect(viewer.getByRole("toolbar", { name: "Editor" })).toContainText("Read only");
+  // Results are there…
+  await expect.poll(() => compact(viewer)).toBe("1/(s+1)");
+  // …the editing tools are not.
+  await expect(viewer.getByRole("navigation", { name: "Blocks" })).toHaveCount(0);
+  await expect(viewer.getByRole("button", { name: "Save version" })).toHaveCount(0);
+  await expect(viewer.getByRole("button", { name: "Undo" })).toHaveCount(0);
+  await expect(viewer.getByRole("button", { name: "Add parameter" })).toHaveCount(0);
+  await block(viewer, "Transfer function G1").click();
+  await expect(viewer.getByLabel("Transfer function of s")).not.toBeEditable();
+  await expect(viewer.getByRole("button", { name: "Delete block" })).toHaveCount(0);
+  // Shortcuts that edit do nothing; dragging a block does not move it.
+  await viewer.keyboard.press("2");
+  await viewer.keyboard.press("Delete");
+  await expect(viewer.getByRole("group", { name: /^Summing junction/ })).toHaveCount(0);
+  await expect(block(viewer, "Transfer function G1")).toBeVisible();
+  const before = await block(viewer, "Transfer function G1").boundingBox();
+  await drag(viewer, block(viewer, "Transfer function G1"), block(viewer, "Output y1"));
+  expect(await block(viewer, "Transfer function G1").boundingBox()).toEqual(before);
+  // And the server would refuse a save anyway.
+  const status = await viewer.evaluate(async (path) => {
+    const res = await fetch(`/api${path}/versions`, {
+      method: "POST",
+      headers: { "content-type": "application/json" },
+      body: JSON.stringify({ baseVersion: 1, message: "", document: { format: "loopwright-diagram", version: 1, blocks: [], wires: [] } }),
+    });
+    return res.status;
+  }, diagramPath);
+  expect(status).toBe(403);
+  await viewerContext.close();
 });

@@ -7,7 +7,7 @@ import type { ReductionResult, TransferResult } from "@shared/reduce/result";
 export function formatProblem(p: Problem): string {
   const where = [
     p.blockId !== undefined && `block ${p.blockId}`,
-    p.wireId !== undefined && `wire ${p.wireId}`,
+    p.wireId !== undefined && (p.wireId.startsWith("wire #") ? p.wireId : `wire ${p.wireId}`), // unnamed: already "wire #i (a → b)"
     p.field !== undefined && `field ${p.field}`,
     p.position !== undefined && `position ${p.position}`,
   ].filter(Boolean);

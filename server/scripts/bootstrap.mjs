@@ -236,7 +236,8 @@ async function main() {
     migrate(databaseUrl, { seed: true });
     if (mode === "start") buildClient("dist/client");
     const port = Number(process.env.PORT ?? PORTS.app);
-    step(`Ready in ${((Date.now() - started) / 1000).toFixed(1)} s — serving http://localhost:${port} (Ctrl-C stops)`);
+    const url = mode === "dev" ? `http://localhost:${PORTS.vite} (API on :${port})` : `http://localhost:${port}`;
+    step(`Ready in ${((Date.now() - started) / 1000).toFixed(1)} s — serving ${url} (Ctrl-C stops)`);
     const env = { DATABASE_URL: databaseUrl, NODE_ENV: process.env.NODE_ENV ?? (mode === "dev" ? "development" : "production") };
     if (mode === "start") return serve(join(ROOT, "node_modules", ".bin", "tsx"), ["server/main.ts"], env, pg);
     return serve(join(ROOT, "node_modules", ".bin", "tsx"), ["server/scripts/dev.ts"], env, pg);

@@ -2,12 +2,12 @@
 // panel shows and the CLI prints. Pure and synchronous, so it runs in the Web Worker as is.
 import { polyParams } from "@shared/algebra/poly";
 import { ratDenominator, ratNumerator } from "@shared/algebra/ratfn";
-import { qToNumber, qToString } from "@shared/algebra/rational";
+import { qDiv, qToNumber, qToString, qZero } from "@shared/algebra/rational";
 import { exactFactors } from "@shared/analysis/factors";
 import { bode, frequencyRange, type BodeData } from "@shared/analysis/frequency";
 import { analyzeLoop, fractionText, zpkOf, type LoopAnalysis } from "@shared/analysis/loopAnalysis";
 import { bandwidth } from "@shared/analysis/margins";
-import { exactValues, polySubstitute, transferAt } from "@shared/analysis/nominal";
+import { exactValues, parseTransfer, polySubstitute, transferAt } from "@shared/analysis/nominal";
 import { dominantPoles, rootsOf, type RootInfo } from "@shared/analysis/poles";
 import type { PreparedAnalysis } from "@shared/analysis/prepare";
 import { routhArray, type RouthArray } from "@shared/analysis/routh";
@@ -75,8 +75,10 @@ export function analyzeAt(p: PreparedAnalysis, opts: AnalyzeOptions = {}): Analy
   const denFactors = exactFactors(den, "denominator");
   const poles = rootsOf(den, denFactors);
   const stability = stabilityOf(den);
-  const characteristic = characteristicAt(p, values, stability, notes);
-  const dc = den[0]?.n !== 0n ? { value: qToNumber(num[0] ?? { n: 0n, d: 1n }), exact: qToString(num[0] ?? { n: 0n, d: 1n }) } : null;
+  const chi = upFromPoly(polySubstitute(p.characteristic, exactValues(values)));
+  const characteristic = characteristicAt(chi, stability, notes);
+  const t0 = den[0].n !== 0n ? qDiv(num[0] ?? qZero, den[0]) : null; // T(0) unless s = 0 is a pole
+  const dc = t0 && { value: qToNumber(t0), exact: qToString(t0) };
   const responses = {
     step: timeResponse(num, den, "step", denFactors),
     impulse: timeResponse(num, den, "impulse", denFactors),
@@ -105,7 +107,7 @@ export function analyzeAt(p: PreparedAnalysis, opts: AnalyzeOptions = {}): Analy
     hiddenModes: hiddenModes(p, values, cancelled),
     dcGain: dc,
     routh: routhArray(upToPoly(den)),
-    routhCharacteristic: characteristic.stability ? routhArray(upToPoly(upFromPoly(polySubstitute(p.characteristic, exactValues(values))))) : null,
+    routhCharacteristic: characteristic.stability ? routhArray(upToPoly(chi)) : null,
     stableSets: wantSets ? symbolic.map((name) => stableSet(denSym, name, values)) : [],
     conditions: wantSets && symbolic.length >= 2 && upDeg(den) <= CONDITIONS_DEGREE ? conditionsOf(routhArray(denSym)) : null,
     responses,
@@ -119,8 +121,7 @@ export function analyzeAt(p: PreparedAnalysis, opts: AnalyzeOptions = {}): Analy
   };
 }
 
-function characteristicAt(p: PreparedAnalysis, values: Record<string, number>, pair: Stability, notes: string[]): Analysis["characteristic"] {
-  const chi = upFromPoly(polySubstitute(p.characteristic, exactValues(values)));
+function characteristicAt(chi: UPoly, pair: Stability, notes: string[]): Analysis["characteristic"] {
   const polynomial = upText(chi);
   if (upDeg(chi) > 100) return { polynomial, stability: null, sameVerdict: null };
   const stability = stabilityOf(chi);
@@ -136,7 +137,7 @@ function hiddenModes(p: PreparedAnalysis, values: Record<string, number>, atValu
     return { factor, roots: rootsOf(u).flatMap((r) => Array.from({ length: r.multiplicity }, (): [number, number] => [r.re, r.im])), unstable: c.rhp + c.axis > 0, source };
   };
   const fromReduction = p.cancelled.map((c) => {
-    const poly = ratNumerator(transferOf(c.factor, p.parameters));
+    const poly = ratNumerator(parseTransfer(c.factor, "1", p.parameters));
     return mode(upFromPoly(polySubstitute(poly, exact)), c.factor, "reduction");
   });
   return upDeg(atValues) >= 1 ? [...fromReduction, mode(atValues, upText(atValues), "values")] : fromReduction;
@@ -168,5 +169,3 @@ function conditionsOf(r: RouthArray): string[] {
   const positive = /^\d+(\/\d+)?$/.test(first);
   return rest.map((e) => (positive ? `${e} > 0` : `sign(${e}) = sign(${first})`));
 }
-
-import { parseTransfer as transferOf } from "@shared/analysis/nominal";

@@ -1,10 +1,12 @@
 // Margins, sensitivity peak and bandwidth from exact polynomials in x = ω²: every crossover is a positive
 // root counted exactly (Sturm), so none is missed between grid points.
 import { q, qDiv, qMul, qToNumber, qZero, type Q } from "@shared/algebra/rational";
-import { ratEvalComplex } from "@shared/analysis/frequency";
+import { polyRoots } from "@shared/algebra/roots";
+import { ratEvalComplex, upEvalComplex } from "@shared/analysis/frequency";
+import { rootCounts } from "@shared/analysis/stability";
 import { realRoots } from "@shared/analysis/sturm";
 import {
-  upAdd, upDeriv, upEvalFloat, upFrom, upMagnitudeSquared, upMul, upOnAxis, upScale, upSub, type UPoly,
+  upAdd, upEvalFloat, upFloatsDesc, upFrom, upLead, upMagnitudeSquared, upMul, upOnAxis, upScale, upSub, type UPoly,
 } from "@shared/analysis/upoly";
 
 export interface Crossover {
@@ -86,25 +88,51 @@ export function delayMargin(crossovers: Crossover[]): number | null {
   return Math.min(...crossovers.map(({ omega, margin }) => ((((margin % 360) + 360) % 360) * Math.PI) / 180 / omega));
 }
 
-/** Largest value over x ≥ 0 of a(x)/b(x) (b > 0 there), and where; null when b has a root x ≥ 0. */
-function peakOfRatio(a: UPoly, b: UPoly): { value: number; x: number } | null {
-  if (!b.length || b[0].n === 0n || realRoots(b, ZERO).length) return null;
-  const f = (x: number) => upEvalFloat(a, x) / upEvalFloat(b, x);
-  const candidates = [0, ...realRoots(upSub(upMul(upDeriv(a), b), upMul(a, upDeriv(b))), ZERO)];
-  let best = { value: f(0), x: 0 };
-  for (const x of candidates) if (f(x) > best.value) best = { value: f(x), x };
-  const atInfinity = a.length === b.length ? qToNumber(a[a.length - 1]) / qToNumber(b[b.length - 1]) : a.length > b.length ? Infinity : 0;
-  if (atInfinity > best.value) best = { value: atInfinity, x: Infinity };
-  return best;
+/** Golden-section search for the maximum of f on [a, b] (f unimodal there). */
+function goldenMax(f: (x: number) => number, a: number, b: number): number {
+  const g = (Math.sqrt(5) - 1) / 2;
+  let [c, d] = [b - g * (b - a), a + g * (b - a)];
+  let [fc, fd] = [f(c), f(d)];
+  for (let i = 0; i < 100 && b - a > 1e-12 * Math.max(1, Math.abs(b)); i++) {
+    if (fc > fd) {
+      [b, d, fd] = [d, c, fc];
+      c = b - g * (b - a);
+      fc = f(c);
+    } else {
+      [a, c, fc] = [c, d, fd];
+      d = a + g * (b - a);
+      fd = f(d);
+    }
+  }
+  return (a + b) / 2;
 }
 
 /**
  * Ms = max over ω of |1/(1 + L(jω))| = |den/(den + num)|, with the frequency; null when the closed loop
- * has a pole on the imaginary axis (Ms infinite). Example: L = 1/s → Ms = 1 (at ω → ∞).
+ * has a pole on the imaginary axis (Ms infinite). A log grid is searched together with the closed-loop
+ * poles' frequencies (where resonance peaks sit) and the best point refined by golden section.
+ * Example: L = 1/s → Ms = 1 (approached as ω → ∞).
  */
 export function sensitivityPeak(num: UPoly, den: UPoly): { value: number; omega: number } | null {
-  const peak = peakOfRatio(upMagnitudeSquared(den), upMagnitudeSquared(upAdd(den, num)));
-  return peak && Number.isFinite(peak.value) ? { value: Math.sqrt(peak.value), omega: Math.sqrt(peak.x) } : null;
+  const closed = upAdd(den, num);
+  if (rootCounts(closed).axis > 0) return null;
+  const S = (w: number) => Math.hypot(...upEvalComplex(den, [0, w])) / Math.hypot(...upEvalComplex(closed, [0, w]));
+  const roots = polyRoots(upFloatsDesc(closed)).concat(polyRoots(upFloatsDesc(den)));
+  const mags = roots.map(([re, im]) => Math.hypot(re, im)).filter((m) => m > 0);
+  const lo = Math.log10(Math.min(1, ...mags)) - 2;
+  const hi = Math.log10(Math.max(1, ...mags)) + 2;
+  const grid = Array.from({ length: 401 }, (_, i) => 10 ** (lo + ((hi - lo) * i) / 400));
+  const candidates = [...grid, ...roots.map(([, im]) => Math.abs(im)).filter((w) => w > 0)].sort((a, b) => a - b);
+  let best = { value: S(0), omega: 0 };
+  candidates.forEach((w, i) => {
+    if (S(w) <= best.value) return;
+    const [a, b] = [candidates[Math.max(0, i - 1)], candidates[Math.min(candidates.length - 1, i + 1)]];
+    const refined = goldenMax(S, a, b);
+    const at = S(refined) > S(w) ? refined : w;
+    best = { value: S(at), omega: at };
+  });
+  const atInfinity = closed.length === den.length ? Math.abs(qToNumber(upLead(den)) / qToNumber(upLead(closed))) : 0;
+  return atInfinity > best.value * (1 + 1e-12) ? { value: atInfinity, omega: Infinity } : best;
 }
 
 /**

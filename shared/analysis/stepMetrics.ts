@@ -71,7 +71,7 @@ function bisect(f: (t: number) => number, a: number, b: number): number {
 export function stepMetrics(r: TimeResponse, finalValue: number, band = 0.02): StepMetrics {
   const g = (t: number) => responseAt(r, t) / finalValue;
   const scale = Math.abs(finalValue);
-  const tEnd = horizon(r, 1e-7 * scale);
+  const tEnd = horizon(r, 1e-6 * scale);
   const ts = grid(r, tEnd, scale);
   const ys = ts.map(g);
   const firstReach = (level: number): number | null => {

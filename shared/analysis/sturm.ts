@@ -1,34 +1,77 @@
 // Exact real-root counting (Sturm) so crossovers, axis roots and stability endpoints are never missed or
 // invented by a float tolerance; the roots themselves are then located numerically and polished.
-import { q, qDiv, qNeg, qSign, qToNumber, type Q } from "@shared/algebra/rational";
+import { bigGcd, q, qNeg, qToNumber, type Q } from "@shared/algebra/rational";
 import { polyRoots } from "@shared/algebra/roots";
 import {
-  upDeg, upDeriv, upDivMod, upEval, upEvalFloat, upFloatsDesc, upFrom, upGcd, upLead, upScale, type UPoly,
+  upDeg, upDeriv, upDivMod, upEval, upEvalFloat, upFloatsDesc, upFrom, upGcd, type UPoly,
 } from "@shared/analysis/upoly";
 
 /** A point of the extended real line. */
 export type Point = Q | "-inf" | "+inf";
 
-/** The Sturm sequence p, p', −rem, … (each scaled positively to keep numbers small). Example: of s^2 − 1. */
-export function sturmSequence(p: UPoly): UPoly[] {
-  const seq = [p, upDeriv(p)];
+/** Integer coefficients (ascending) of a positive multiple of p. */
+function toIntegers(p: UPoly): bigint[] {
+  const l = p.reduce((acc, c) => (acc * c.d) / bigGcd(acc, c.d), 1n);
+  return p.map((c) => (c.n * l) / c.d);
+}
+
+const trimInts = (a: bigint[]): bigint[] => {
+  let n = a.length;
+  while (n > 0 && a[n - 1] === 0n) n--;
+  return a.slice(0, n);
+};
+
+/** a divided by the (positive) gcd of its coefficients. */
+function primitive(a: bigint[]): bigint[] {
+  const g = a.reduce((acc, x) => bigGcd(acc, x), 0n);
+  return g > 1n ? a.map((x) => x / g) : a;
+}
+
+/** Pseudo-remainder lc(b)^(deg a − deg b + 1)·a mod b, in integers. */
+function pseudoRemainder(a: bigint[], b: bigint[]): bigint[] {
+  const r = a.slice();
+  const db = b.length - 1;
+  const lb = b[db];
+  for (let k = r.length - 1; k >= db; k--) {
+    const top = r[k];
+    for (let i = 0; i < r.length; i++) r[i] *= lb;
+    if (top !== 0n) for (let j = 0; j <= db; j++) r[k - db + j] -= top * b[j];
+  }
+  return trimInts(r.slice(0, db));
+}
+
+/**
+ * The Sturm sequence p, p', −rem, … with each member replaced by a positive multiple (primitive integer
+ * pseudo-remainders), which keeps every sign and the numbers small. Example: of s^2 − 1: s^2 − 1, s, 1.
+ */
+export function sturmSequence(p: UPoly): bigint[][] {
+  const seq = [primitive(toIntegers(p)), primitive(toIntegers(upDeriv(p)))];
   while (seq[seq.length - 1].length > 1) {
-    const r = upDivMod(seq[seq.length - 2], seq[seq.length - 1]).rem;
+    const [a, b] = [seq[seq.length - 2], seq[seq.length - 1]];
+    const r = pseudoRemainder(a, b);
     if (!r.length) break;
-    const lead = upLead(r);
-    seq.push(upScale(r, qDiv(q(-1), lead.n < 0n ? qNeg(lead) : lead))); // −r / |lead|: same signs, small numbers
+    // prem = lc(b)^(δ+1)·rem; the next member is −rem up to a positive factor
+    const flip = b[b.length - 1] < 0n && (a.length - b.length + 1) % 2 === 1 ? 1n : -1n;
+    seq.push(primitive(r.map((x) => x * flip)));
   }
   return seq;
 }
 
-function signAt(u: UPoly, x: Point): number {
+function signAt(u: bigint[], x: Point): number {
   if (!u.length) return 0;
-  if (x === "+inf") return qSign(upLead(u));
-  if (x === "-inf") return qSign(upLead(u)) * (upDeg(u) % 2 ? -1 : 1);
-  return qSign(upEval(u, x));
+  const lead = u[u.length - 1] > 0n ? 1 : -1;
+  if (x === "+inf") return lead;
+  if (x === "-inf") return lead * ((u.length - 1) % 2 ? -1 : 1);
+  let acc = 0n; // Σ u_i n^i d^(deg − i): the value times d^deg > 0
+  let dPow = 1n;
+  for (let i = u.length - 1; i >= 0; i--) {
+    acc = acc * x.n + u[i] * dPow;
+    dPow *= x.d;
+  }
+  return acc > 0n ? 1 : acc < 0n ? -1 : 0;
 }
 
-function variations(seq: readonly UPoly[], x: Point): number {
+function variations(seq: readonly bigint[][], x: Point): number {
   let count = 0;
   let last = 0;
   for (const u of seq) {

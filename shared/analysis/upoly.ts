@@ -1,9 +1,9 @@
 // Dense univariate polynomials over Q: the analysis divides with remainder, takes gcds, Sturm sequences and
 // Taylor shifts on numeric (parameter-free) polynomials, which the multivariate Poly type does not offer.
-import { polyFromCoeffs, polyParams, type Poly } from "@shared/algebra/poly";
+import { polyFromZ, polyGcd, polyParams, type Poly } from "@shared/algebra/poly";
 import { polyToLatex, polyToText } from "@shared/algebra/polytext";
-import { q, qAdd, qDiv, qMul, qNeg, qOne, qSub, qToNumber, qZero, type Q } from "@shared/algebra/rational";
-import { zCoeffsS } from "@shared/algebra/zpoly";
+import { bigGcd, q, qAdd, qDiv, qMul, qNeg, qOne, qSub, qToNumber, qZero, type Q } from "@shared/algebra/rational";
+import { S, zCoeffsS, zMake } from "@shared/algebra/zpoly";
 
 /** ASCENDING exact coefficients without trailing zeros; the zero polynomial is []. Build with upFrom. */
 export type UPoly = readonly Q[] & { readonly __ascending: true };
@@ -26,7 +26,11 @@ export function upFromPoly(p: Poly): UPoly {
 }
 
 /** Back to the shared Poly type. Example: upToPoly(upInts([1, 1])) is s + 1. */
-export const upToPoly = (u: UPoly): Poly => polyFromCoeffs([...u].reverse());
+export function upToPoly(u: UPoly): Poly {
+  if (!u.length) return polyFromZ(qOne, 0n);
+  const l = u.reduce((acc, c) => (acc * c.d) / bigGcd(acc, c.d), 1n); // common denominator
+  return polyFromZ(q(1n, l), zMake(S, u.map((c) => (c.n * l) / c.d)));
+}
 
 /** Plain text in variable v. Example: upText(upInts([-2, 0, 1]), "K") === "K^2 - 2". */
 export const upText = (u: UPoly, v = "s"): string => polyToText(upToPoly(u)).replace(/\bs\b/g, v);
@@ -81,11 +85,11 @@ export function upDivMod(a: UPoly, b: UPoly): { quo: UPoly; rem: UPoly } {
 /** Monic multiple (zero stays zero). Example: upMonic(2s + 1) is s + 1/2. */
 export const upMonic = (a: UPoly): UPoly => (a.length ? upScale(a, qDiv(qOne, upLead(a))) : a);
 
-/** Monic greatest common divisor (Euclid over Q). Example: upGcd(s^2 - 1, s^2 + 2s + 1) is s + 1. */
+/** Monic greatest common divisor (the engine's modular gcd). Example: upGcd(s^2 - 1, s^2 + 2s + 1) is s + 1. */
 export function upGcd(a: UPoly, b: UPoly): UPoly {
-  let [x, y] = [upMonic(a), upMonic(b)];
-  while (y.length) [x, y] = [y, upMonic(upDivMod(x, y).rem)];
-  return x;
+  if (!a.length) return upMonic(b);
+  if (!b.length) return upMonic(a);
+  return upFromPoly(polyGcd(upToPoly(a), upToPoly(b)));
 }
 
 /** Derivative. Example: upDeriv(s^3) is 3s^2. */

@@ -3,10 +3,11 @@ import type { SfgEdge, SfgNode, SignalFlowGraph } from "@shared/reduce/graph";
 /**
  * Which rule applies at a node, and how urgent it is. The reducer always applies the most urgent plan
  * first — wire tidying, then parallel, series and feedback (the textbook rules), then moving a junction
- * or pickoff point, then general node elimination — ties broken by the size of the gains involved (so
- * partial results grow in balanced merges rather than in one sweep that reprints an ever longer
- * expression), then by fill-in (new edges), then by the node's position in the document: the same
- * document always gives the same steps.
+ * or pickoff point or general node elimination (one class: a move is an elimination with one edge on
+ * one side) — ties broken by the size of the gains involved, then by fill-in (new edges), then by the
+ * node's position in the document, so the same document always gives the same steps. Smallest gains
+ * first makes partial results grow in balanced merges instead of one sweep that reprints an ever longer
+ * expression at every step (on a 500-block ladder about 4× less work than moves strictly first).
  * Example: a node with one labelled edge in and one out plans { action: "series", urgency: 2 }.
  */
 export type Action =
@@ -78,7 +79,7 @@ export function planNode<T>(
   const loop = node.loops.size > 0 ? only(node.loops) : null;
   if (loop && blocked.pivot.get(node.id) === loop.seq) return null;
   if (ins === 0 || outs === 0) return plan("drop", 0);
-  if (loop) return ins === 1 || outs === 1 ? plan("feedback-self", 3, 1) : plan("eliminate", 5, ins * outs);
+  if (loop) return ins === 1 || outs === 1 ? plan("feedback-self", 3, 1) : plan("eliminate", 4, ins * outs);
   if (ins === 1 && outs === 1) {
     const bare = only(node.ins).label === null || only(node.outs).label === null;
     return bare ? plan("tidy", 0) : plan("series", 2, 1);
@@ -87,7 +88,7 @@ export function planNode<T>(
   if (pair && blocked.pair.get(node.id) !== `${pair.forward.seq}:${pair.back.seq}`) return plan("feedback-pair", 3, 1);
   if (outs === 1) return only(node.outs).label === null ? plan("tidy", 0) : plan("move-sum", 4, ins);
   if (ins === 1) return only(node.ins).label === null ? plan("tidy", 0) : plan("move-pickoff", 4, outs);
-  return plan("eliminate", 5, ins * outs);
+  return plan("eliminate", 4, ins * outs);
 }
 
 type Ranked = Plan & { size: number; order: number };

@@ -4,7 +4,7 @@ import { SingularLoopError, solveDense } from "@shared/reduce/dense";
 import type { SfgEdge, SfgNode, SignalFlowGraph } from "@shared/reduce/graph";
 import { feedbackPair, type Action, type Blocked } from "@shared/reduce/plan";
 import type { ReductionRule } from "@shared/reduce/result";
-import { edgeName, type StepLog } from "@shared/reduce/trace";
+import { edgeName, times, type StepLog } from "@shared/reduce/trace";
 
 /**
  * The reduction rules on the signal-flow graph. Each is an exact elimination: a node goes away (or a
@@ -50,8 +50,8 @@ const signed = <T>(field: Field<T>, sign: 1 | -1, gain: T): T => (sign > 0 ? gai
 
 /** "1 − F·H" with the feedback edge's sign folded in: "1 + F·h" for negative feedback, "1 + F" for a bare wire. */
 function returnDifference<T>(forward: string | null, back: SfgEdge<T>): string {
-  const loop = [forward, back.label].filter((x) => x !== null).join("·") || "1";
-  return `1 ${back.sign < 0 ? "+" : "−"} ${loop}`;
+  const loop = times(...(forward === null ? [] : [forward]), edgeName(back));
+  return loop.startsWith("−") ? `1 + ${loop.slice(1)}` : `1 − ${loop}`;
 }
 
 const sorted = <T>(edges: Iterable<SfgEdge<T>>): SfgEdge<T>[] => [...edges].sort((a, b) => a.seq - b.seq);
@@ -136,7 +136,7 @@ function series<T>(ctx: RuleContext<T>, node: SfgNode<T>): void {
   const [b] = node.outs;
   const gain = ctx.field.mul(a.gain, b.gain);
   const [x, y] = [edgeName(a), edgeName(b)];
-  const draft = produce(ctx, "series", [a, b], [node.own], gain, (eq) => `Series: ${x} then ${y} become ${eq} = ${x}·${y}.`);
+  const draft = produce(ctx, "series", [a, b], [node.own], gain, (eq) => `Series: ${x} then ${y} become ${eq} = ${times(x, y)}.`);
   ctx.graph.removeNode(node.id);
   link(ctx, a.from, b.to, draft);
 }
@@ -215,7 +215,7 @@ function move<T>(ctx: RuleContext<T>, node: SfgNode<T>, rule: "move-sum" | "move
     const consumed = last && !heir ? [e, block] : [e];
     // A bare wire gets a copy of the block itself (with the wire's sign), not a product.
     const x = e.label === null ? `the wire ${isSum ? `from ${e.from}` : `to ${e.to}`}` : edgeName(e);
-    const value = e.label === null ? `${e.sign < 0 ? "−" : ""}${G}` : isSum ? `${x}·${G}` : `${G}·${x}`;
+    const value = e.label === null ? times(e.sign < 0 ? "−" : "", G) : isSum ? times(x, G) : times(G, x);
     const draft = produce(ctx, rule, consumed, last ? [node.own] : [], gain, (eq) =>
       isSum
         ? `Move junction ${node.id} past ${G}: ${x} becomes ${eq} = ${value}.`
@@ -245,7 +245,7 @@ function eliminate<T>(ctx: RuleContext<T>, node: SfgNode<T>): boolean {
       const gain = field.mul(scaled[a], o.gain);
       const [x, y] = [edgeName(i), edgeName(o)];
       const draft = produce(ctx, "eliminate-node", consumed, lastIn && lastOut ? [node.own] : [], gain, (eq) =>
-        `Eliminate ${node.id}: ${x} then ${y} become ${eq} = ${x}·${y}${tail}.`,
+        `Eliminate ${node.id}: ${x} then ${y} become ${eq} = ${times(x, y)}${tail}.`,
       );
       link(ctx, i.from, o.to, draft);
     }),

@@ -9,6 +9,16 @@ export const edgeName = <T>(e: SfgEdge<T>): string =>
   e.label === null ? (e.sign < 0 ? "−1" : "1") : e.sign < 0 ? `−${e.label}` : e.label;
 
 /**
+ * "a·b" with the signs of the names pulled to the front and unit factors ("1", a bare "−") left out.
+ * Example: times("eq3", "−k2") === "−eq3·k2"; times("−1", "g") === "−g".
+ */
+export function times(...names: string[]): string {
+  const negative = names.filter((n) => n.startsWith("−")).length % 2 === 1;
+  const body = names.map((n) => n.replace(/^−/, "")).filter((n) => n !== "" && n !== "1");
+  return `${negative ? "−" : ""}${body.join("·") || "1"}`;
+}
+
+/**
  * The reduction trace: numbers equivalent blocks eq1, eq2, … across all pairs of one document and
  * records what each step consumed. Example: log.record("series", [ec, cp], [], g, (eq) => `… ${eq} …`) → "eq1".
  */

@@ -193,6 +193,34 @@ describe("refusals", () => {
     expect(out.ok).toBe(false);
   });
 
+  test("a result above degree 1000 in s is refused with degree-limit", () => {
+    // 21 blocks of order 50 in cascade: order 1050
+    const blocks: [string, string, string?][] = [["r", "input"]];
+    const wires: string[] = [];
+    for (let i = 0; i < 21; i++) {
+      blocks.push([`g${i}`, "transfer", "1/(s+1)^50"]);
+      wires.push(`${i === 0 ? "r" : `g${i - 1}`}>g${i}`);
+    }
+    blocks.push(["y", "output"]);
+    wires.push("g20>y");
+    const out = reduceDocument(diagram(blocks, wires));
+    expect(out.ok).toBe(false);
+    if (!out.ok) expect(out.problems.map((p) => p.code)).toContain("degree-limit");
+  });
+
+  test("too many input/output pairs: asks for one input or output", () => {
+    // 40 inputs each wired to its own output: 1,600 pairs
+    const ids = Array.from({ length: 40 }, (_, i) => i);
+    const doc = diagram(
+      ids.flatMap((i): [string, string][] => [[`u${i}`, "input"], [`y${i}`, "output"]]),
+      ids.map((i) => `u${i}>y${i}`),
+    );
+    const out = reduceDocument(doc);
+    expect(out.ok).toBe(false);
+    if (!out.ok) expect(out.problems.map((p) => p.code)).toEqual(["too-many-pairs"]);
+    expect(reduceDocument(doc, { output: "y3" }).ok).toBe(true);
+  });
+
   test("a work limit is a clear problem, not a hang", () => {
     const out = reduceDocument(spindle, { limits: { maxEdges: 1 } });
     expect(out.ok).toBe(false);

@@ -1,13 +1,15 @@
 import type { TransferResult } from "@shared/reduce/result";
 
-/** True when a polynomial written in the expression syntax needs parentheses to be a factor. */
-const compound = (poly: string) => /[+\-*/ ]/.test(poly.replace(/^-/, "").trim());
+/** A numerator needs parentheses only around a sum: `2*K/(…)` already reads as (2*K)/(…). */
+const isSum = (poly: string) => /[+-]/.test(poly.trim().replace(/^-/, ""));
+/** A denominator needs them around anything but a single power: `K/2*s` would read as (K/2)*s. */
+const isCompound = (poly: string) => /[+\-*/]/.test(poly.trim().replace(/^-/, ""));
 
 /** One fraction in the diagram expression syntax. Example: numerator "K", denominator "s^2 + 2*s + K" → "K/(s^2 + 2*s + K)". */
 export function transferText(t: Pick<TransferResult, "numerator" | "denominator">): string {
   if (t.denominator.trim() === "1") return t.numerator;
-  const num = compound(t.numerator) ? `(${t.numerator})` : t.numerator;
-  const den = compound(t.denominator) ? `(${t.denominator})` : t.denominator;
+  const num = isSum(t.numerator) ? `(${t.numerator})` : t.numerator;
+  const den = isCompound(t.denominator) ? `(${t.denominator})` : t.denominator;
   return `${num}/${den}`;
 }
 

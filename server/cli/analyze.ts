@@ -1,0 +1,156 @@
+import { readFileSync, statSync } from "node:fs";
+import type { Problem } from "@shared/diagram/problems";
+import { analyzeDocument } from "@shared/analysis/analyzeDocument";
+import type { AnalysisResult } from "@shared/analysis/schema";
+import { parseReduceArgs } from "@server/cli/args";
+import { parseJsonText } from "@server/cli/jsonText";
+import { formatProblem } from "@server/cli/report";
+
+/**
+ * `analyze FILE.json [--json] [--input ID] [--output ID] [--break WIRE]` — public contract, called from teams' CI.
+ * Exit 0 success, 1 bad file content, 2 bad command line (unknown --break too), 3 internal error; never a stack trace.
+ */
+const USAGE = "usage: analyze FILE.json [--json] [--input ID] [--output ID] [--break WIRE]   (analyze --help for details)";
+const MAX_FILE_BYTES = 16 * 1024 * 1024;
+
+const HELP = `analyze — stability, Routh array, step response, margins and steady state of a Loopwright diagram
+
+${USAGE}
+
+  FILE.json     a Loopwright diagram document (format "loopwright-diagram", version 1)
+  --json        print one JSON object (shared/schemas/analysis-result.schema.json): poles, zeros, stable,
+                dcGain, step, margins, routh, steadyState, sensitivityPeak, delayMargin, nyquist, notes, …
+  --input ID    the pair's input block (default: the first input block in the document)
+  --output ID   the pair's output block (default: the first output block in the document)
+  --break WIRE  the wire where the loop gain L = −w/u is taken for margins and the Nyquist plot: a wire id
+                or its 0-based index in "wires" (default: the wire into the minus port of the first
+                summing junction with a minus sign that the input reaches)
+  -h, --help    this text
+
+Parameters take their nominal values. A quantity that does not exist (no overshoot, an infinite margin,
+an unstable system) is null, with the reason in "notes".
+These results describe the linear model as drawn; actuator limits, saturation, delays and nonlinearity are
+not in it. Validate on the plant and follow your functional-safety process and local codes.
+
+Exit status:
+  0  analysed; the result is on stdout (warnings included)
+  1  the file's content is wrong (not JSON, not a valid or reducible diagram, a polynomial above degree 100);
+     the problems are on stderr
+  2  the command line is wrong: unknown option, missing or unreadable file, unknown --input/--output id or
+     --break wire
+  3  internal error (please report it with the diagram file)
+`;
+
+class Exit extends Error {
+  constructor(
+    readonly code: number,
+    readonly lines: string[],
+  ) {
+    super(lines.join("\n"));
+  }
+}
+
+const usageError = (message: string) => new Exit(2, [`analyze: ${message}`, USAGE]);
+
+/** Takes `--break WIRE` / `--break=WIRE` out of argv; the rest is the reduce command line. */
+function splitBreak(argv: readonly string[]): { rest: string[]; wire?: string } {
+  const rest: string[] = [];
+  let wire: string | undefined;
+  for (let i = 0; i < argv.length; i++) {
+    const m = /^--break(?:=(.*))?$/.exec(argv[i]);
+    if (!m || argv.slice(0, i).includes("--")) {
+      rest.push(argv[i]);
+      continue;
+    }
+    const value = m[1] ?? argv[++i];
+    if (value === undefined || value === "" || (m[1] === undefined && value.startsWith("--"))) throw usageError("--break needs a wire id or index, e.g. --break w6");
+    if (wire !== undefined) throw usageError("--break is given twice");
+    wire = value;
+  }
+  return { rest, wire };
+}
+
+// Same checks and messages as the reduce command's file reader (that one is private to reduce.ts).
+function readDiagramFile(file: string): string {
+  let size: number;
+  try {
+    const st = statSync(file);
+    if (st.isDirectory()) throw usageError(`cannot read "${file}": it is a directory`);
+    size = st.size;
+  } catch (e) {
+    if (e instanceof Exit) throw e;
+    const code = (e as NodeJS.ErrnoException).code;
+    throw usageError(code === "ENOENT" ? `no such file "${file}"` : `cannot read "${file}" (${code ?? "error"})`);
+  }
+  if (size > MAX_FILE_BYTES) throw new Exit(1, [`analyze: ${file}: the file is ${(size / 1048576).toFixed(1)} MB; the limit is ${MAX_FILE_BYTES / 1048576} MB`]);
+  try {
+    return readFileSync(file, "utf8");
+  } catch (e) {
+    throw usageError(`cannot read "${file}" (${(e as NodeJS.ErrnoException).code ?? "error"})`);
+  }
+}
+
+const USAGE_CODES = new Set(["unknown-pair-id", "unknown-break-wire"]);
+const fmt = (x: number | null) => (x === null ? "none" : String(Number(x.toPrecision(6))));
+
+/** The readable report (without --json). */
+function report(r: AnalysisResult, title: string | undefined): string {
+  const lines = [
+    ...(title ? [title, ""] : []),
+    `${r.input} → ${r.output}:  T(s) = (${r.transfer.numerator})/(${r.transfer.denominator})`,
+    `Stability: ${r.stable} — ${r.stabilityReason}`,
+    `Poles: ${r.poleDetails.map((p) => `${p.exact ?? `${fmt(p.re)}${p.im ? ` ${p.im < 0 ? "-" : "+"} ${fmt(Math.abs(p.im))}j` : ""}`}${p.multiplicity > 1 ? ` (×${p.multiplicity})` : ""}`).join(", ") || "none"}`,
+    `Routh: first column ${r.routh.firstColumn.join(", ")} — ${r.routh.conclusion}`,
+    ...r.routh.stableSets.map((s) => `Stable for ${s.text} (others nominal)`),
+    `DC gain: ${fmt(r.dcGain)}`,
+    `Step: rise ${fmt(r.step.riseTime)}, peak ${fmt(r.step.peakTime)}, overshoot ${fmt(r.step.overshootPercent)} %, settling ${fmt(r.step.settlingTime)}, final ${fmt(r.step.finalValue)}`,
+    `y_step(t) = ${r.responses.step.formula}${r.responses.step.exact ? "" : "   (numeric, 12 significant digits)"}`,
+    r.break
+      ? `Break at ${r.break.wire}: L(s) = (${r.loopGain?.numerator})/(${r.loopGain?.denominator}); gain margin ${fmt(r.margins.gainMarginDb)} dB at ${fmt(r.margins.phaseCrossover)} rad/s, phase margin ${fmt(r.margins.phaseMarginDeg)}° at ${fmt(r.margins.gainCrossover)} rad/s, Ms ${fmt(r.sensitivityPeak)}, delay margin ${fmt(r.delayMargin)} s`
+      : "No break point: margins not computed.",
+    ...(r.nyquist ? [`Nyquist: ${r.nyquist.verdict} — ${r.nyquist.reason}`] : []),
+    ...(r.notes.length ? ["", "Notes:", ...r.notes.map((n) => `  ${n}`)] : []),
+    ...(r.warnings.length ? ["", "Warnings:", ...r.warnings.map((w) => `  ${formatProblem(w)}`)] : []),
+  ];
+  return `${lines.join("\n")}\n`;
+}
+
+function run(argv: readonly string[]): string {
+  const { rest, wire } = splitBreak(argv);
+  const parsed = parseReduceArgs(rest);
+  if (parsed.kind === "help") return HELP;
+  if (parsed.kind === "usage-error") throw usageError(parsed.message);
+  const { file, json, input, output } = parsed.args;
+  const text = readDiagramFile(file);
+  const doc = parseJsonText(text);
+  if (!doc.ok) {
+    const { line, column, message } = doc.error;
+    throw new Exit(1, [`analyze: ${file}: not valid JSON at line ${line}, column ${column}: ${message}`]);
+  }
+  const out = analyzeDocument(doc.value, { input, output, break: wire });
+  if (!out.ok) {
+    const usage = out.problems.filter((p: Problem) => USAGE_CODES.has(p.code));
+    if (usage.length) throw new Exit(2, [...usage.map((p) => `analyze: ${p.message}`), USAGE]);
+    const errors = out.problems.filter((p) => p.severity === "error").length;
+    throw new Exit(1, [`analyze: ${file}: ${errors} problem${errors === 1 ? "" : "s"} prevent analysis`, ...out.problems.map(formatProblem)]);
+  }
+  return json ? `${JSON.stringify(out.result, null, 2)}\n` : report(out.result, out.prepared.doc.title);
+}
+
+function main(): void {
+  try {
+    process.stdout.write(run(process.argv.slice(2)));
+    process.exitCode = 0;
+  } catch (e) {
+    if (e instanceof Exit) {
+      process.stderr.write(`${e.lines.join("\n")}\n`);
+      process.exitCode = e.code;
+    } else {
+      const message = e instanceof Error ? e.message : String(e);
+      process.stderr.write(`analyze: internal error: ${message}\nPlease report it together with the diagram file.\n`);
+      process.exitCode = 3;
+    }
+  }
+}
+
+main();
