@@ -178,6 +178,7 @@ test("a viewer sees the same diagram and its result but cannot change it", async
 
   // A straight line r1 → G1 → y1 with the plant 1/(s+1), wired from the keyboard-friendly panel.
   for (const key of ["1", "4", "7"]) await page.keyboard.press(key);
+  await page.keyboard.press("f");
   await block(page, "Input r1").click();
   await page.getByLabel("Connect output to").selectOption({ label: "G1" });
   await page.getByRole("button", { name: "Connect", exact: true }).click();

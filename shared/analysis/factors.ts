@@ -6,6 +6,7 @@ import { q, qOne, qToNumber } from "@shared/algebra/rational";
 import { polyRoots } from "@shared/algebra/roots";
 import { allInt, zContentInt, zDivExact, zEquals, zMake, zNormSign, zQuo, S, type ZPoly } from "@shared/algebra/zpoly";
 import { AnalysisError, ROOT_DEGREE_LIMIT } from "@shared/analysis/errors";
+import { memoByPoly } from "@shared/analysis/memo";
 import { upDeg, upFromPoly, upMonic, upToPoly, type UPoly } from "@shared/analysis/upoly";
 
 /** A monic factor and how often it divides. */
@@ -23,12 +24,16 @@ const PAIRING_LIMIT = 30;
  * Example: exactFactors(2(s + 1)^2(s^2 − 2)) is [{ s + 1, 2 }, { s^2 − 2, 1 }].
  */
 export function exactFactors(u: UPoly, what = "polynomial"): Factor[] {
-  if (upDeg(u) > ROOT_DEGREE_LIMIT) {
-    throw new AnalysisError(
-      "degree-limit",
-      `The ${what} has degree ${upDeg(u)}; roots are computed up to degree ${ROOT_DEGREE_LIMIT}. Simplify the diagram.`,
-    );
-  }
+  if (upDeg(u) <= ROOT_DEGREE_LIMIT) return cachedFactors(u);
+  throw new AnalysisError(
+    "degree-limit",
+    `The ${what} has degree ${upDeg(u)}; roots are computed up to degree ${ROOT_DEGREE_LIMIT}. Simplify the diagram.`,
+  );
+}
+
+const cachedFactors = memoByPoly(factorsOf);
+
+function factorsOf(u: UPoly): Factor[] {
   if (upDeg(u) < 1) return [];
   const out: { z: ZPoly; multiplicity: number }[] = [];
   for (const f of zSplitFactors(upToPoly(u).z).flatMap(splitRealPairs)) {

@@ -1,6 +1,7 @@
 // The stability verdict decided exactly: square-free factors over Q, imaginary-axis roots by Sturm on
 // gcd(Re p(jω), Im p(jω)), right-half-plane roots by the Routh array of the part without mirrored roots.
 import { exactFactors } from "@shared/analysis/factors";
+import { memoByPoly } from "@shared/analysis/memo";
 import { routhRows, signAsEpsilonVanishes } from "@shared/analysis/routh";
 import { countRealRoots, realRoots } from "@shared/analysis/sturm";
 import {
@@ -39,7 +40,9 @@ function rhpByRouth(h: UPoly): number {
  * Exact root counts (multiplicity included) in the open right half-plane, on the imaginary axis and in the
  * open left half-plane. Example: rootCounts((s + 1)(s^2 + 4)^2) has rhp 0, axis 4, lhp 1, repeatedAxis true.
  */
-export function rootCounts(u: UPoly): RootCounts {
+export const rootCounts = memoByPoly(countRoots);
+
+function countRoots(u: UPoly): RootCounts {
   const counts: RootCounts = { rhp: 0, axis: 0, lhp: 0, repeatedAxis: false, atOrigin: upZeroOrder(u), axisFrequencies: [] };
   for (const { poly: f, multiplicity: m } of exactFactors(u)) {
     const { re, im } = upOnAxis(f);

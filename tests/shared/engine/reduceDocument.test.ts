@@ -188,6 +188,13 @@ describe("refusals", () => {
     if (!out.ok) expect(out.problems.some((p) => p.blockId === "c" && p.severity === "error")).toBe(true);
   });
 
+  test("an expression that divides by something identically zero names its block", () => {
+    const doc = diagram([["r", "input"], ["g", "transfer", "1/(s - s)"], ["y", "output"]], ["r>g", "g>y"]);
+    const out = reduceDocument(doc);
+    expect(out.ok).toBe(false);
+    if (!out.ok) expect(out.problems.map((p) => [p.code, p.blockId, p.field])).toEqual([["division-by-zero", "g", "expr"]]);
+  });
+
   test("not a document", () => {
     const out = reduceDocument("hello");
     expect(out.ok).toBe(false);

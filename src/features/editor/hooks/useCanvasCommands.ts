@@ -56,13 +56,17 @@ export function useCanvasCommands(a: Args) {
     return at;
   };
 
-  /** Pans (never zooms) so a block just placed off-screen comes into view. */
+  /** Pans (never zooms) just far enough that a block placed off-screen comes into view. */
   const reveal = (at: Point) => {
     const rect = a.canvasBox.current?.getBoundingClientRect();
     if (!rect) return;
     const p = flow.flowToScreenPosition(at);
-    const inside = p.x > rect.left && p.x < rect.right - 120 && p.y > rect.top && p.y < rect.bottom - 80;
-    if (!inside) void flow.setCenter(at.x + 40, at.y + 24, { zoom: flow.getZoom(), duration: 200 });
+    const margin = { x: 160, y: 96 };
+    const dx = p.x > rect.right - margin.x ? rect.right - margin.x - p.x : p.x < rect.left + 24 ? rect.left + 24 - p.x : 0;
+    const dy = p.y > rect.bottom - margin.y ? rect.bottom - margin.y - p.y : p.y < rect.top + 24 ? rect.top + 24 - p.y : 0;
+    if (dx === 0 && dy === 0) return;
+    const v = flow.getViewport();
+    void flow.setViewport({ x: v.x + dx, y: v.y + dy, zoom: v.zoom }, { duration: 200 });
   };
   const add = (type: BlockType, at: Point = placeFor()) => {
     const added = act(`Add ${TYPE_NAME[type].toLowerCase()}`, (d) => addBlock(d, type, at));
