@@ -4,11 +4,13 @@ import { fileURLToPath } from "node:url";
 import { reduceDocument } from "@shared/engine/reduceDocument";
 import { benchDiagram, type BenchFamily } from "@server/bench/diagrams";
 // The sympy reference lives with the tests (tests/reference); resolved through the tsconfig baseUrl.
-import { sympyBench, SympyTimeout } from "tests/support/sympy";
+import { sympyBench, SympyTimeout, type SympyMethod } from "tests/support/sympy";
 
 /**
- * Reduction benchmark: generated ladders and nested-loop chains, our engine against sympy's exact
- * sparse linear solve of the same block equations. Prints figures and targets; asserts nothing.
+ * Reduction benchmark: generated ladders and nested-loop chains, our engine against sympy solving the
+ * same block equations exactly two ways — `linsolve` (its plain public API) and a sparse Gauss-Jordan
+ * with DomainMatrix over QQ(s, params) (the fastest sympy route found). Prints figures and targets;
+ * asserts nothing.
  * Each case of ours runs in a child process (its own peak RSS, killable at the time limit).
  * Run: npx tsx server/bench/reduce.bench.ts
  */
@@ -88,9 +90,11 @@ function runOurs(c: Case): Promise<OursFigures | "timeout" | string> {
   });
 }
 
-async function runSympy(c: Case): Promise<{ seconds: number; degree: number } | "timeout" | string> {
+type SympyOutcome = { seconds: number; degree: number } | "timeout" | string;
+
+async function runSympy(c: Case, method: SympyMethod): Promise<SympyOutcome> {
   try {
-    const r = await sympyBench(docOf(c), "r", "y", LIMIT_MS);
+    const r = await sympyBench(docOf(c), "r", "y", LIMIT_MS, method);
     return { seconds: r.seconds, degree: r.denominatorDegree };
   } catch (e) {
     return e instanceof SympyTimeout ? "timeout" : `failed: ${(e as Error).message}`;
@@ -111,32 +115,38 @@ function powerLawExponent(points: { blocks: number; ms: number }[]): number {
   return sxy / sxx;
 }
 
+const cell = (o: SympyOutcome) => (o === "timeout" ? "> limit" : typeof o === "object" ? o.seconds.toFixed(3) : "error");
+const seconds = (o: SympyOutcome) => (typeof o === "object" ? o.seconds : null);
+const ratioCell = (sympyS: number | null, ours: OursFigures | null) =>
+  sympyS !== null && ours ? `${((sympyS * 1000) / ours.medianMs).toFixed(1)}×` : "-";
+
 async function main(): Promise<void> {
   console.log(`Reduction benchmark — node ${process.version}, ${cpus().length} cores, per-case limit ${LIMIT_MS / 1000} s`);
-  console.log("ours: median of warm runs of reduceDocument (parse, validate, reduce, every output string);");
-  console.log("sympy: exact sparse Gauss-Jordan of the block equations over QQ(s, params), python start-up excluded\n");
-  const header = ["case", "blocks", "deg", "ours ms", "runs", "RSS start MB", "peak MB", "sympy s", "deg", "sympy/ours"];
-  const widths = [18, 6, 5, 9, 5, 13, 8, 9, 5, 11];
+  console.log("ours: median of warm runs of reduceDocument (parse, validate, reduce, every output string, all modes)");
+  console.log("sympy: one pair, parsing included, python start-up excluded — linsolve (plain API) and sparse rref\n");
+  const header = ["case", "blocks", "deg", "ours ms", "runs", "RSS start MB", "peak MB", "linsolve s", "rref s", "deg", "linsolve/ours", "rref/ours"];
+  const widths = [18, 6, 5, 9, 5, 13, 8, 11, 9, 5, 14, 10];
   console.log(header.map((h, i) => pad(h, widths[i])).join(" "));
-  const rows: { c: Case; ours: OursFigures | null; sympyS: number | null }[] = [];
+  const rows: { c: Case; ours: OursFigures | null; linsolveS: number | null; rrefS: number | null }[] = [];
   for (const c of CASES) {
     const ours = await runOurs(c);
-    const sym = await runSympy(c);
+    const lin = await runSympy(c, "linsolve");
+    const rref = await runSympy(c, "rref");
     const o = typeof ours === "object" && !ours.error ? ours : null;
-    const s = typeof sym === "object" ? sym : null;
-    const oursCell = ours === "timeout" ? "> limit" : o ? fmtMs(o.medianMs) : "error";
-    const sympyCell = sym === "timeout" ? "> limit" : s ? s.seconds.toFixed(3) : "error";
-    const ratio = o && s ? `${(s.seconds * 1000 / o.medianMs).toFixed(1)}×` : "-";
+    const degree = typeof rref === "object" ? rref.degree : typeof lin === "object" ? lin.degree : null;
     const cells = [
-      `${c.family}${c.symbolic ? " (K,a,tau)" : ""}`, String(c.blocks), o ? String(o.degree) : "-", oursCell,
-      o ? String(o.runs) : "-", o ? o.startRssMB.toFixed(0) : "-", o ? o.peakRssMB.toFixed(0) : "-",
-      sympyCell, s ? String(s.degree) : "-", ratio,
+      `${c.family}${c.symbolic ? " (K,a,tau)" : ""}`, String(c.blocks), o ? String(o.degree) : "-",
+      ours === "timeout" ? "> limit" : o ? fmtMs(o.medianMs) : "error", o ? String(o.runs) : "-",
+      o ? o.startRssMB.toFixed(0) : "-", o ? o.peakRssMB.toFixed(0) : "-", cell(lin), cell(rref),
+      degree === null ? "-" : String(degree), ratioCell(seconds(lin), o), ratioCell(seconds(rref), o),
     ];
     console.log(cells.map((v, i) => pad(v, widths[i])).join(" "));
-    if (typeof ours === "string") console.log(`    ours: ${ours}`);
-    else if (ours.error) console.log(`    ours refused the diagram: ${ours.error}`);
-    if (typeof sym === "string" && sym !== "timeout") console.log(`    sympy: ${sym}`);
-    rows.push({ c, ours: o, sympyS: s?.seconds ?? null });
+    if (typeof ours === "string" && ours !== "timeout") console.log(`    ours: ${ours}`);
+    else if (typeof ours === "object" && ours.error) console.log(`    ours refused the diagram: ${ours.error}`);
+    for (const [name, r] of [["linsolve", lin], ["rref", rref]] as const) {
+      if (typeof r === "string" && r !== "timeout") console.log(`    sympy ${name}: ${r}`);
+    }
+    rows.push({ c, ours: o, linsolveS: seconds(lin), rrefS: seconds(rref) });
   }
 
   const find = (family: BenchFamily, blocks: number, symbolic: boolean) =>
@@ -155,18 +165,19 @@ async function main(): Promise<void> {
   const growth = Math.max(...measured.map((r) => r.ours!.peakRssMB - r.ours!.startRssMB));
   const start = Math.min(...measured.map((r) => r.ours!.startRssMB));
 
-  console.log("\nTargets");
+  console.log("\nTargets (sympy = linsolve, its plain API; the sparse-rref ratio in brackets)");
   const l = ladder150?.ours;
-  const speedup = l && ladder150?.sympyS ? (ladder150.sympyS * 1000) / l.medianMs : null;
+  const speedup = l && ladder150?.linsolveS ? (ladder150.linsolveS * 1000) / l.medianMs : null;
   console.log(
     `  150-block numeric ladder < 100 ms and ≥ 20× faster than sympy: ${l ? fmtMs(l.medianMs) : "-"} ms, ` +
-      `${speedup ? speedup.toFixed(1) : "-"}× → ${verdict(l && speedup ? l.medianMs < 100 && speedup >= 20 : null)}`,
+      `${speedup ? speedup.toFixed(1) : "-"}× [${ratioCell(ladder150?.rrefS ?? null, l ?? null)}] → ` +
+      verdict(l && speedup ? l.medianMs < 100 && speedup >= 20 : null),
   );
   for (const r of sym30) {
-    const ok = r.ours && r.sympyS ? r.ours.medianMs < 300 && r.ours.medianMs < r.sympyS * 1000 : null;
+    const ok = r.ours && r.linsolveS ? r.ours.medianMs < 300 && r.ours.medianMs < r.linsolveS * 1000 : null;
     console.log(
       `  30-block ${r.c.family}, 3 parameters < 300 ms and faster than sympy: ${r.ours ? fmtMs(r.ours.medianMs) : "-"} ms vs ` +
-        `${r.sympyS !== null ? (r.sympyS * 1000).toFixed(0) : "-"} ms → ${verdict(ok)}`,
+        `${r.linsolveS !== null ? (r.linsolveS * 1000).toFixed(0) : "-"} ms [rref ${r.rrefS !== null ? (r.rrefS * 1000).toFixed(0) : "-"} ms] → ${verdict(ok)}`,
     );
   }
   console.log(

@@ -1,26 +1,55 @@
 // Own printing of exact polynomials: the canonical text is what results, tests and reviews compare.
 import type { Poly } from "@shared/algebra/poly";
-import { q, qMul, qNeg, qToString, type Q } from "@shared/algebra/rational";
+import { qMul, type Q } from "@shared/algebra/rational";
 import { zCoeffsS, type ZPoly } from "@shared/algebra/zpoly";
 
 type Mono = [name: string, exp: number][];
+/** A monomial with its coefficient's digits converted once for both styles (BigInt printing is costly). */
 interface Term {
-  c: Q;
+  neg: boolean;
+  num: string; // |numerator|
+  den: string; // "" when the denominator is 1
+  unit: boolean; // |coefficient| = 1
   mono: Mono; // parameter powers, alphabetical
 }
+/** One power of s with its non-zero parameter terms, in printing order. */
+interface Row {
+  k: number;
+  terms: Term[];
+}
 
-/** Monomials of a polynomial in the parameters, in printing order. */
-function paramTerms(z: ZPoly, k: Q): Term[] {
-  const out: Term[] = [];
-  const walk = (a: ZPoly, mono: Mono): void => {
-    if (typeof a === "bigint") {
-      if (a !== 0n) out.push({ c: qMul(k, q(a)), mono });
-      return;
-    }
-    a.c.forEach((x, i) => walk(x, i === 0 ? mono : [...mono, [a.v, i]]));
-  };
-  walk(z, []);
-  return out.sort(termOrder);
+const NO_FACTORS: Mono = [];
+
+/**
+ * The term list both printings share, highest power of s first. Built once per polynomial: the coefficient
+ * products (and their gcds) are the costly part of printing. Module-level helpers, not closures, on this hot path.
+ */
+function rowsOf(p: Poly): Row[] {
+  if (p.q.n === 0n) return [];
+  const coeffs = zCoeffsS(p.z);
+  const rows: Row[] = [];
+  for (let k = coeffs.length - 1; k >= 0; k--) {
+    const terms: Term[] = [];
+    collectTerms(coeffs[k], p.q, NO_FACTORS, terms);
+    if (terms.length > 1) terms.sort(termOrder);
+    if (terms.length) rows.push({ k, terms });
+  }
+  return rows;
+}
+
+/** Monomials of a polynomial in the parameters, times k, appended to out. */
+function collectTerms(a: ZPoly, k: Q, mono: Mono, out: Term[]): void {
+  if (typeof a === "bigint") {
+    if (a !== 0n) out.push(termOf(qMul(k, { n: a, d: 1n }), mono));
+    return;
+  }
+  for (let i = 0; i < a.c.length; i++) collectTerms(a.c[i], k, i === 0 ? mono : [...mono, [a.v, i]], out);
+}
+
+function termOf(c: Q, mono: Mono): Term {
+  const neg = c.n < 0n;
+  const abs = neg ? -c.n : c.n;
+  return { neg, num: abs.toString(), den: c.d === 1n ? "" : c.d.toString(), unit: abs === 1n && c.d === 1n, mono };
 }
 
 const totalDegree = (m: Mono): number => m.reduce((t, [, e]) => t + e, 0);
@@ -39,7 +68,7 @@ function termOrder(a: Term, b: Term): number {
 }
 
 interface Style {
-  num(c: Q): string; // positive rational
+  num(n: string, d: string): string; // positive rational from its digits, d "" for an integer
   power(base: string, e: number): string;
   name(n: string): string;
   times: string;
@@ -47,7 +76,7 @@ interface Style {
 }
 
 const textStyle: Style = {
-  num: qToString,
+  num: (n, d) => (d ? `${n}/${d}` : n),
   power: (b, e) => (e === 1 ? b : `${b}^${e}`),
   name: (n) => n,
   times: "*",
@@ -55,7 +84,7 @@ const textStyle: Style = {
 };
 
 const latexStyle: Style = {
-  num: (c) => (c.d === 1n ? c.n.toString() : `\\frac{${c.n}}{${c.d}}`),
+  num: (n, d) => (d ? `\\frac{${n}}{${d}}` : n),
   power: (b, e) => (e === 1 ? b : `${b}^{${e}}`),
   name: latexName,
   times: " ",
@@ -76,43 +105,37 @@ function latexName(n: string): string {
   return b + sub;
 }
 
-interface Signed {
-  neg: boolean;
-  body: string;
+/** The parameter factors of a term, then the power of s (may be ""), joined by the style's product sign. */
+function factorText(mono: Mono, sPart: string, st: Style): string {
+  let f = "";
+  for (const [n, e] of mono) f += (f ? st.times : "") + st.power(st.name(n), e);
+  return sPart ? (f ? f + st.times + sPart : sPart) : f;
 }
 
 /** One monomial without its sign: |c| (omitted when 1 and there are factors) times its factors. */
-function monoBody(c: Q, factors: string[], st: Style): string {
-  const abs = c.n < 0n ? qNeg(c) : c;
-  if (!factors.length) return st.num(abs);
-  const f = factors.join(st.times);
-  return abs.n === 1n && abs.d === 1n ? f : `${st.num(abs)}${st.times}${f}`;
+function monoBody(t: Term, factors: string, st: Style): string {
+  if (!factors) return st.num(t.num, t.den);
+  return t.unit ? factors : `${st.num(t.num, t.den)}${st.times}${factors}`;
 }
 
-function render(p: Poly, st: Style): string {
-  if (p.q.n === 0n) return "0";
-  const coeffs = zCoeffsS(p.z);
-  const parts: Signed[] = [];
-  for (let k = coeffs.length - 1; k >= 0; k--) {
-    const terms = paramTerms(coeffs[k], p.q);
-    if (!terms.length) continue;
-    const sPart = k === 0 ? [] : [st.power("s", k)];
-    const factorsOf = (t: Term): string[] => t.mono.map(([n, e]) => st.power(st.name(n), e));
+/** The sign joining a part: a bare leading "-" first, " - " / " + " after. */
+const joiner = (neg: boolean, first: boolean): string => (first ? (neg ? "-" : "") : neg ? " - " : " + ");
+
+function render(rows: readonly Row[], st: Style): string {
+  if (!rows.length) return "0";
+  let out = "";
+  for (const { k, terms } of rows) {
+    const sPart = k === 0 ? "" : st.power("s", k);
     if (terms.length === 1 || k === 0) {
-      for (const t of terms) parts.push({ neg: t.c.n < 0n, body: monoBody(t.c, [...factorsOf(t), ...sPart], st) });
+      for (const t of terms) out += joiner(t.neg, !out) + monoBody(t, factorText(t.mono, sPart, st), st);
       continue;
     }
-    const flip = terms[0].c.n < 0n; // pull a leading minus out of the group: -(K - 3/2)*s
-    const inner = joinSigned(
-      terms.map((t) => ({ neg: (t.c.n < 0n) !== flip, body: monoBody(t.c, factorsOf(t), st) })),
-    );
-    parts.push({ neg: flip, body: [st.group(inner), ...sPart].join(st.times) });
+    const flip = terms[0].neg; // pull a leading minus out of the group: -(K - 3/2)*s
+    let inner = "";
+    for (const t of terms) inner += joiner(t.neg !== flip, !inner) + monoBody(t, factorText(t.mono, "", st), st);
+    out += joiner(flip, !out) + st.group(inner) + st.times + sPart;
   }
-  return joinSigned(parts);
-}
-
-function joinSigned(parts: Signed[]): string {
-  return parts.map((t, i) => (i === 0 ? (t.neg ? "-" : "") : t.neg ? " - " : " + ") + t.body).join("");
+  return out;
 }
 
 /**
@@ -121,7 +144,13 @@ function joinSigned(parts: Signed[]): string {
  * parentheses; parameter terms run by total degree, then alphabetically. "0" for zero.
  * Example: "(2*K + 1)*s^2 + 3/2*s - K + 4", "s^2 - (K - 3/2)*s + 1".
  */
-export const polyToText = (p: Poly): string => render(p, textStyle);
+export const polyToText = (p: Poly): string => render(rowsOf(p), textStyle);
 
 /** LaTeX with the same layout: \frac{p}{q} numbers, s^{2}, \tau, k_{p}. Example: "\frac{3}{2} K s^{2} + 1". */
-export const polyToLatex = (p: Poly): string => render(p, latexStyle);
+export const polyToLatex = (p: Poly): string => render(rowsOf(p), latexStyle);
+
+/** Both printings from one term list (half the work of calling the two). Example: polyToTextAndLatex(s^2).latex === "s^{2}". */
+export function polyToTextAndLatex(p: Poly): { text: string; latex: string } {
+  const rows = rowsOf(p);
+  return { text: render(rows, textStyle), latex: render(rows, latexStyle) };
+}

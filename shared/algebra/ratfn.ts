@@ -3,7 +3,7 @@ import { AlgebraError, DEGREE_LIMIT } from "@shared/algebra/errors";
 import type { Field } from "@shared/algebra/field";
 import { zSplitFactors } from "@shared/algebra/factor";
 import { polyFromZ, polyMonic, polyZero, type Poly } from "@shared/algebra/poly";
-import { polyToLatex, polyToText } from "@shared/algebra/polytext";
+import { polyToLatex, polyToText, polyToTextAndLatex } from "@shared/algebra/polytext";
 import { q, qDiv, qEquals, qInv, qIsOne, qMul, qOne, qPow, qZero, type Q } from "@shared/algebra/rational";
 import { zGcd, zUnitContent } from "@shared/algebra/zgcd";
 import {
@@ -186,17 +186,25 @@ export function ratReduceTracked(num: Poly, den: Poly): { value: RatFn; cancelle
 }
 
 const bare = (t: string): boolean => /^[A-Za-z0-9_^]+$/.test(t);
+const textOver = (n: string, d: string): string => `${bare(n) ? n : `(${n})`}/${bare(d) ? d : `(${d})`}`;
+const latexOver = (n: string, d: string): string => `\\frac{${n}}{${d}}`;
 
 /** Plain text in the expression syntax. Example: ratToText of 1/(s + 1) is "1/(s + 1)". */
 export function ratToText(r: RatFn): string {
   const n = polyToText(ratNumerator(r));
-  if (r.d === 1n) return n;
-  const d = polyToText(ratDenominator(r));
-  return `${bare(n) ? n : `(${n})`}/${bare(d) ? d : `(${d})`}`;
+  return r.d === 1n ? n : textOver(n, polyToText(ratDenominator(r)));
 }
 
 /** LaTeX: \frac{num}{den}, or the numerator alone over 1. Example: "\frac{1}{s + 1}". */
 export function ratToLatex(r: RatFn): string {
   const n = polyToLatex(ratNumerator(r));
-  return r.d === 1n ? n : `\\frac{${n}}{${polyToLatex(ratDenominator(r))}}`;
+  return r.d === 1n ? n : latexOver(n, polyToLatex(ratDenominator(r)));
+}
+
+/** ratToText and ratToLatex from one pass over each polynomial. Example: ratToTextAndLatex(1/s).latex === "\\frac{1}{s}". */
+export function ratToTextAndLatex(r: RatFn): { text: string; latex: string } {
+  const n = polyToTextAndLatex(ratNumerator(r));
+  if (r.d === 1n) return n;
+  const d = polyToTextAndLatex(ratDenominator(r));
+  return { text: textOver(n.text, d.text), latex: latexOver(n.latex, d.latex) };
 }

@@ -53,10 +53,12 @@ export function qSub(a: Q, b: Q): Q {
 
 /** Product. Example: qMul(q(2,3), q(3,4)) is 1/2. */
 export function qMul(a: Q, b: Q): Q {
-  if (a.d === 1n && b.d === 1n) return { n: a.n * b.n, d: 1n };
-  const g1 = bigGcd(a.n, b.d);
-  const g2 = bigGcd(b.n, a.d);
-  return { n: (a.n / g1) * (b.n / g2), d: (a.d / g2) * (b.d / g1) };
+  // Cross gcds only: a.n/a.d and b.n/b.d are already in lowest terms, and a denominator 1 needs none.
+  const g1 = b.d === 1n ? 1n : bigGcd(a.n, b.d);
+  const g2 = a.d === 1n ? 1n : bigGcd(b.n, a.d);
+  const n = (g1 === 1n ? a.n : a.n / g1) * (g2 === 1n ? b.n : b.n / g2);
+  const d = (g2 === 1n ? a.d : a.d / g2) * (g1 === 1n ? b.d : b.d / g1);
+  return { n, d };
 }
 
 /** Quotient; throws AlgebraError "division-by-zero" for b = 0. Example: qDiv(q(1), q(2)) is 1/2. */

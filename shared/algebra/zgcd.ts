@@ -20,11 +20,29 @@ export function zGcd(a: ZPoly, b: ZPoly): ZPoly {
   if (typeof b === "bigint") return bigGcd(b, zContentInt(a));
   if (a.v !== b.v) return varOuter(a.v, b.v) ? zGcd(zContent(a), b) : zGcd(a, zContent(b));
   if (zEquals(a, b)) return zNormSign(a); // common in feedback: the loop's denominator meets itself
+  // Probe before taking contents (each a gcd over every coefficient): most pairs a reduction meets are coprime
+  // in the main variable, or one divides the other, and then the full contents are never needed.
+  const [hi, lo] = deg(a) < deg(b) ? [b, a] : [a, b];
+  const bound = probeDegree(hi, lo);
+  if (bound === 0) return commonContent(a, b);
+  if (bound === deg(lo) && zDivExact(hi, lo) !== null) return zNormSign(lo);
   const ca = zContent(a);
   const cb = zContent(b);
   const c = zGcd(ca, cb);
-  const g = gcdPrimitive(zQuo(a, ca) as ZRec, zQuo(b, cb) as ZRec);
+  const g = gcdPrimitive(zQuo(a, ca) as ZRec, zQuo(b, cb) as ZRec, bound);
   return zNormSign(zMul(c, g));
+}
+
+/** gcd of all coefficients of a and b together (their gcd when it has degree 0 in the main variable). */
+function commonContent(a: ZRec, b: ZRec): ZPoly {
+  let g: ZPoly = 0n;
+  for (const c of [a.c, b.c]) {
+    for (const x of c) {
+      g = zGcd(g, x);
+      if (g === 1n) return 1n;
+    }
+  }
+  return g;
 }
 
 /** Content in the main variable: gcd of the coefficients (sign-normalised). Example: zContent(K*s + K) is K. */
@@ -46,9 +64,10 @@ export function zPrimitive(a: ZPoly): ZPoly {
 
 const deg = (a: ZRec): number => a.c.length - 1;
 
-function gcdPrimitive(a: ZRec, b: ZRec): ZPoly {
+/** gcd of primitive a, b; `known` is a degree bound already probed on their multiples (-1: probe here). */
+function gcdPrimitive(a: ZRec, b: ZRec, known: number): ZPoly {
   if (deg(a) < deg(b)) [a, b] = [b, a];
-  const bound = probeDegree(a, b);
+  const bound = known >= 0 ? known : probeDegree(a, b);
   if (bound === 0) return 1n;
   if (bound === deg(b) && zDivExact(a, b) !== null) return b;
   if (allInt(a.c) && allInt(b.c)) return modularGcd(a.v, a.c, b.c);

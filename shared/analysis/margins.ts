@@ -123,13 +123,14 @@ export function sensitivityPeak(num: UPoly, den: UPoly): { value: number; omega:
   const hi = Math.log10(Math.max(1, ...mags)) + 2;
   const grid = Array.from({ length: 401 }, (_, i) => 10 ** (lo + ((hi - lo) * i) / 400));
   const candidates = [...grid, ...roots.map(([, im]) => Math.abs(im)).filter((w) => w > 0)].sort((a, b) => a - b);
+  const values = candidates.map(S);
   let best = { value: S(0), omega: 0 };
-  candidates.forEach((w, i) => {
-    if (S(w) <= best.value) return;
-    const [a, b] = [candidates[Math.max(0, i - 1)], candidates[Math.min(candidates.length - 1, i + 1)]];
-    const refined = goldenMax(S, a, b);
-    const at = S(refined) > S(w) ? refined : w;
-    best = { value: S(at), omega: at };
+  // Refine every local maximum of the sampled values on its bracketing neighbours.
+  values.forEach((v, i) => {
+    if (v < (values[i - 1] ?? -Infinity) || v < (values[i + 1] ?? -Infinity)) return;
+    const w = goldenMax(S, candidates[Math.max(0, i - 1)], candidates[Math.min(candidates.length - 1, i + 1)]);
+    const at = S(w) > v ? w : candidates[i];
+    if (S(at) > best.value) best = { value: S(at), omega: at };
   });
   const atInfinity = closed.length === den.length ? Math.abs(qToNumber(upLead(den)) / qToNumber(upLead(closed))) : 0;
   return atInfinity > best.value * (1 + 1e-12) ? { value: atInfinity, omega: Infinity } : best;

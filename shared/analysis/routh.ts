@@ -9,7 +9,7 @@ import { polyToText } from "@shared/algebra/polytext";
 import type { ZPoly } from "@shared/algebra/zpoly";
 
 /** The small positive number that replaces a zero first element; signs are read as ε → 0+. */
-export const EPSILON = "ε";
+const EPSILON = "ε";
 const eps: RatFn = ratFromExpr({ kind: "param", name: EPSILON });
 
 export interface RouthRow {

@@ -50,7 +50,7 @@ export function rootLocus(p: PreparedAnalysis, name: string, range: [number, num
   const den = ratDenominator(p.transfer);
   const values = sweepValues(range, n);
   const branches: ([number, number] | null)[][] = [];
-  let last: [number, number][] = []; // last known position of each branch
+  const last: [number, number][] = []; // last known position of each branch
   values.forEach((v, i) => {
     const slots = match(last, polyRoots(polyEvaluateAt(den, { ...base, [name]: v })));
     slots.forEach((r, b) => {

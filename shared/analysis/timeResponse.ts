@@ -69,6 +69,8 @@ export function timeResponse(num: UPoly, den: UPoly, input: InputKind, denFactor
       terms.push(...numericTerms(rem, cofactor, f));
     }
   }
+  // Slowest modes first (growing ones before them), then by frequency, power and cos before sin.
+  terms.sort((x, y) => x.decay - y.decay || x.frequency - y.frequency || x.power - y.power || (x.kind < y.kind ? -1 : x.kind > y.kind ? 1 : 0));
   const all = [...impulses.map((i) => ({ text: i.text, latex: i.latex })), ...terms];
   return {
     input,

@@ -40,7 +40,6 @@ export const upLatex = (u: UPoly, v = "s"): string => polyToLatex(upToPoly(u)).r
 
 export const upDeg = (u: UPoly): number => u.length - 1;
 export const upLead = (u: UPoly): Q => u[u.length - 1] ?? qZero;
-export const upIsZero = (u: UPoly): boolean => u.length === 0;
 
 function zip(a: UPoly, b: UPoly, f: (x: Q, y: Q) => Q): UPoly {
   const out: Q[] = [];
@@ -65,8 +64,6 @@ export function upMul(a: UPoly, b: UPoly): UPoly {
   return upFrom(out);
 }
 
-/** Times s^k. Example: upShift(1, 2) is s^2. */
-export const upShift = (a: UPoly, k: number): UPoly => (a.length ? upFrom([...new Array(k).fill(qZero), ...a]) : a);
 
 /** Quotient and remainder; throws for b = 0. Example: upDivMod(s^2 + 1, s + 1) is { quo: s - 1, rem: 2 }. */
 export function upDivMod(a: UPoly, b: UPoly): { quo: UPoly; rem: UPoly } {

@@ -1,7 +1,13 @@
-import { ratDegrees, ratToLatex, ratToText, type RatFn } from "@shared/algebra/ratfn";
+import { ratDegrees, ratToTextAndLatex, type RatFn } from "@shared/algebra/ratfn";
 
 /** How a step shows an exact gain: expression syntax and LaTeX. Example: showRat(1/(s+1)).expr === "1/(s + 1)". */
-export const showRat = (g: RatFn) => ({ expr: ratToText(g), latex: ratToLatex(g) });
+export function showRat(g: RatFn): { expr: string; latex: string } {
+  const { text, latex } = ratToTextAndLatex(g);
+  return { expr: text, latex };
+}
 
 /** Size of an exact gain for ordering ties: degree of numerator plus denominator in s. Example: weighRat(1/(s+1)) === 1. */
-export const weighRat = (g: RatFn): number => ratDegrees(g).num + ratDegrees(g).den;
+export function weighRat(g: RatFn): number {
+  const { num, den } = ratDegrees(g);
+  return num + den;
+}

@@ -116,8 +116,8 @@ function onCycle(id: string, wires: Wire[]): boolean {
   return false;
 }
 
-/** Deterministic assembly of a spec into a document (exported so tests can build from fixed specs). */
-export function assembleDiagram(spec: DiagramSpec): GeneratedDiagram {
+/** Deterministic assembly of a spec into a document: shrinking a spec shrinks the diagram. */
+function assembleDiagram(spec: DiagramSpec): GeneratedDiagram {
   const inputs = Array.from({ length: spec.inputs }, (_, i) => `u${i + 1}`);
   const outputs = Array.from({ length: spec.outputs }, (_, i) => `y${i + 1}`);
   const core = spec.core.map((c: CoreSpec, i) => {

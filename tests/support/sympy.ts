@@ -88,7 +88,18 @@ export async function sympyReduce(jobs: SympyJob[], timeoutMs = 120_000): Promis
   return answer.results;
 }
 
-/** Time sympy's exact linear solve of one pair of a document (python start-up excluded). */
-export function sympyBench(doc: unknown, input: string, output: string, timeoutMs: number): Promise<SympyBench> {
-  return runSympy<SympyBench>({ mode: "bench", doc, input, output }, timeoutMs);
+/**
+ * Time sympy's exact solve of one pair of a document (python start-up excluded): "rref" is a sparse
+ * Gauss-Jordan over QQ(s, params) with DomainMatrix (the fastest route found), "linsolve" sympy's plain API.
+ */
+export type SympyMethod = "rref" | "linsolve";
+
+export function sympyBench(
+  doc: unknown,
+  input: string,
+  output: string,
+  timeoutMs: number,
+  method: SympyMethod = "rref",
+): Promise<SympyBench> {
+  return runSympy<SympyBench>({ mode: "bench", doc, input, output, method }, timeoutMs);
 }

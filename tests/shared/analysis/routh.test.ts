@@ -1,13 +1,12 @@
 import { describe, expect, it } from "vitest";
 import { routhArray } from "@shared/analysis/routh";
-import { rootCounts, stabilityOf } from "@shared/analysis/stability";
-import { upFromPoly, upInts, upMul, upToPoly, type UPoly } from "@shared/analysis/upoly";
+import { stabilityOf } from "@shared/analysis/stability";
+import { upInts, upToPoly, type UPoly } from "@shared/analysis/upoly";
 import { parseTransfer } from "@shared/analysis/nominal";
 import { ratDenominator } from "@shared/algebra/ratfn";
 
 /** Ascending integer coefficients from descending ones, as textbooks print them. */
 const descending = (...c: number[]): UPoly => upInts(c.slice().reverse());
-const product = (...ps: number[][]): UPoly => ps.map((p) => upInts(p)).reduce(upMul);
 
 describe("Routh array: textbook worked examples", () => {
   it("regular case, two sign changes (from memory: Nise, Control Systems Engineering, Example 6.1: 1000/((s+2)(s+3)(s+5)) in unity feedback)", () => {

@@ -149,6 +149,15 @@ describe("against scipy.signal and numpy (python3-scipy, python3-numpy)", { time
     });
   });
 
+  it("degree 100: roots of a polynomial with pseudo-random integer coefficients match numpy.roots to 1e-9 relative", async () => {
+    let seed = 12345;
+    const next = () => ((seed = (seed * 1103515245 + 12345) % 2147483648) % 201) - 100;
+    const den = upInts([...Array.from({ length: 100 }, next), 1]);
+    const [ref] = (await runScipy([{ id: "deg100", num: [1], den: desc(den), t: [], w: [], rootsOnly: true }])).results;
+    expect(ref.denRoots).toHaveLength(100);
+    expect(sameRoots(flatRoots(rootsOf(den)), ref.denRoots, 1e-9)).toBe(true);
+  });
+
   it("without scipy the script fails with an install hint, not a silent pass", () => {
     // -S drops site-packages, which is where Debian installs python3-scipy and python3-numpy
     const run = spawnSync(SYSTEM_PYTHON, ["-S", SCIPY_SCRIPT], { input: '{"systems": []}', encoding: "utf8" });

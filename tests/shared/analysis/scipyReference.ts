@@ -16,6 +16,8 @@ export interface ScipySystem {
   den: number[];
   t: number[];
   w: number[];
+  /** Only numpy.roots, no simulation. */
+  rootsOnly?: boolean;
 }
 
 export interface ScipyAnswer {

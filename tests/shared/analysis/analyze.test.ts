@@ -1,0 +1,96 @@
+import { describe, expect, it } from "vitest";
+import { analyzeAt } from "@shared/analysis/analyze";
+import { analyzeDocument } from "@shared/analysis/analyzeDocument";
+import { prepareAnalysis } from "@shared/analysis/prepare";
+import { analysisResultSchema } from "@shared/analysis/schema";
+import { makeDoc } from "../../support/docBuilder";
+
+/** Unity negative feedback around a transfer expression. */
+const feedback = (g: string, parameters: Record<string, number> = {}) =>
+  makeDoc(
+    [
+      { id: "r", type: "input" },
+      { id: "e", type: "sum", signs: ["+", "-"] },
+      { id: "g", type: "transfer", expr: g },
+      { id: "b", type: "branch" },
+      { id: "y", type: "output" },
+    ],
+    ["r->e:0", "e->g", "g->b", "b->y", "b->e:1"],
+    parameters,
+  );
+
+const prepared = (doc: unknown) => {
+  const p = prepareAnalysis(doc);
+  if (!p.ok) throw new Error(p.problems.map((x) => x.message).join("; "));
+  return p.prepared;
+};
+
+describe("analysis of a document", () => {
+  it("K/(s(s+7)(s+11)) with K = 100: stable, stable range 0 < K < 1386, type 1 with Kv = K/77 (from memory: Nise, Examples 6.9 and 7.x)", () => {
+    const a = analyzeAt(prepared(feedback("K/(s*(s + 7)*(s + 11))", { K: 100 })));
+    expect(a.stability.verdict).toBe("stable");
+    expect(a.stableSets.map((s) => s.text)).toEqual(["0 < K < 1386"]);
+    expect(a.steadyState.systemType).toBe(1);
+    expect(a.steadyState.constants?.Kv.exact).toBe("100/77");
+    expect(a.steadyState.errors.ramp.exact).toBe("77/100");
+    expect(a.dcGain).toEqual({ value: 1, exact: "1" });
+    expect(a.loop?.breakPoint).toMatchObject({ label: "w5", chosen: "default" });
+    expect(a.loop?.nyquist.verdict).toBe("stable");
+  });
+
+  it("K beyond the range: the slider value K = 2000 gives an unstable loop, null step metrics and negative margins (Nise, Example 6.9)", () => {
+    const p = prepared(feedback("K/(s*(s + 7)*(s + 11))", { K: 100 }));
+    const a = analyzeAt(p, { values: { K: 2000 }, stableSets: false });
+    expect(a.stability.verdict).toBe("unstable");
+    expect(a.step.overshootPercent).toBeNull();
+    expect(a.notes.join(" ")).toMatch(/Step metrics are not defined: the transfer function is unstable/);
+    expect(a.loop?.margins.gainMarginDb).toBeLessThan(0);
+    expect(a.loop?.nyquist.closedLoopRhpPoles).toBe(2);
+  });
+
+  it("a hidden unstable mode is reported, not shown as a pole, and the characteristic verdict differs (common practice: unstable pole-zero cancellation)", () => {
+    const doc = makeDoc(
+      [
+        { id: "r", type: "input" },
+        { id: "e", type: "sum", signs: ["+", "-"] },
+        { id: "c", type: "transfer", expr: "(s - 1)/(s + 2)" },
+        { id: "g", type: "transfer", expr: "1/(s - 1)" },
+        { id: "b", type: "branch" },
+        { id: "y", type: "output" },
+      ],
+      ["r->e:0", "e->c", "c->g", "g->b", "b->y", "b->e:1"],
+    );
+    const a = analyzeAt(prepared(doc));
+    expect(a.poles.map((p) => p.re)).toEqual([-3]);
+    expect(a.stability.verdict).toBe("stable");
+    expect(a.hiddenModes).toEqual([expect.objectContaining({ factor: "s - 1", unstable: true, source: "reduction" })]);
+    expect(a.characteristic.stability?.verdict).toBe("unstable");
+    expect(a.characteristic.sameVerdict).toBe(false);
+    expect(a.notes.join(" ")).toMatch(/characteristic polynomial .* is unstable/);
+  });
+
+  it("improper T: metrics null with the reason, impulse terms in the response", () => {
+    const doc = makeDoc([{ id: "r", type: "input" }, { id: "g", type: "transfer", expr: "(s^2 + 1)/(s + 1)" }, { id: "y", type: "output" }], ["r->g", "g->y"]);
+    const a = analyzeAt(prepared(doc));
+    expect(a.step.riseTime).toBeNull();
+    expect(a.notes.join(" ")).toMatch(/T is improper/);
+    expect(a.responses.step.impulses.length).toBeGreaterThan(0);
+    expect(a.loop).toBeNull();
+    expect(a.notes.join(" ")).toMatch(/No break point/);
+  });
+
+  it("T(0) = 0: metrics null and said so", () => {
+    const a = analyzeAt(prepared(feedback("s/((s + 1)*(s + 2))")));
+    expect(a.step.settlingTime).toBeNull();
+    expect(a.notes.join(" ")).toMatch(/T\(0\) = 0/);
+  });
+
+  it("analyzeDocument: the result parses with the published schema; an unknown break is a problem with its code", () => {
+    const out = analyzeDocument(feedback("4/((s + 1)*(s + 2))"));
+    if (!out.ok) throw new Error("expected success");
+    expect(analysisResultSchema.parse(out.result).stable).toBe("stable");
+    const bad = analyzeDocument(feedback("4/((s + 1)*(s + 2))"), { break: "nope" });
+    expect(bad.ok).toBe(false);
+    if (!bad.ok) expect(bad.problems[0]).toMatchObject({ code: "unknown-break-wire", field: "break" });
+  });
+});

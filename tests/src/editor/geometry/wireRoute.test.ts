@@ -1,0 +1,88 @@
+import fc from "fast-check";
+import { describe, expect, it } from "vitest";
+import type { Point } from "@/features/editor/commands/types";
+import { sumDiameter, sumPortPlaces, type Side } from "@/features/editor/geometry/sumPorts";
+import { GAP, roundedPath, routeMidpoint, wireRoute, type Box } from "@/features/editor/geometry/wireRoute";
+
+const box = (x: number, y: number, width = 80, height = 48): Box => ({ x, y, width, height });
+/** Output on the right edge, middle height. */
+const outOf = (b: Box): Point => ({ x: b.x + b.width, y: b.y + b.height / 2 });
+const inOf = (b: Box, side: Side): Point =>
+  side === "left" ? { x: b.x, y: b.y + b.height / 2 } : side === "top" ? { x: b.x + b.width / 2, y: b.y } : { x: b.x + b.width / 2, y: b.y + b.height };
+
+const coord = fc.integer({ min: -600, max: 600 });
+
+describe("wire routing (common practice for block diagrams: orthogonal wires, feedback drawn underneath)", () => {
+  it("every route is orthogonal, starts at the output, ends at the input and arrives from the port's side (property)", () => {
+    fc.assert(
+      fc.property(coord, coord, coord, coord, fc.constantFrom<Side>("left", "top", "bottom"), (sx, sy, tx, ty, side) => {
+        const sourceBox = box(sx, sy);
+        const targetBox = box(tx, ty);
+        const s = outOf(sourceBox);
+        const t = inOf(targetBox, side);
+        const pts = wireRoute({ source: s, target: t, side, sourceBox, targetBox });
+        expect(pts[0]).toEqual(s);
+        expect(pts[pts.length - 1]).toEqual(t);
+        for (let i = 1; i < pts.length; i += 1) expect(pts[i].x === pts[i - 1].x || pts[i].y === pts[i - 1].y).toBe(true);
+        if (pts.length < 2) return;
+        const [a, b] = [pts[pts.length - 2], pts[pts.length - 1]];
+        if (side === "left") expect(a.y === b.y && a.x < b.x).toBe(true);
+        if (side === "bottom") expect(a.x === b.x && a.y > b.y).toBe(true);
+        if (side === "top") expect(a.x === b.x && a.y < b.y).toBe(true);
+        // The first segment leaves the output to the right.
+        expect(pts[1].y === pts[0].y && pts[1].x > pts[0].x).toBe(true);
+      }),
+      { numRuns: 500 },
+    );
+  });
+
+  it("a forward wire is a single jog halfway between the blocks", () => {
+    const a = box(0, 0);
+    const b = box(200, 40);
+    expect(wireRoute({ source: outOf(a), target: inOf(b, "left"), side: "left", sourceBox: a, targetBox: b })).toEqual([
+      { x: 80, y: 24 },
+      { x: 140, y: 24 },
+      { x: 140, y: 64 },
+      { x: 200, y: 64 },
+    ]);
+  });
+
+  it("unity feedback from the plant's output into the junction's bottom port runs below both blocks", () => {
+    const junction = box(100, 0, 48, 48);
+    const plant = box(240, 0, 96, 48);
+    const pts = wireRoute({ source: outOf(plant), target: inOf(junction, "bottom"), side: "bottom", sourceBox: plant, targetBox: junction });
+    const lowest = Math.max(...pts.map((p) => p.y));
+    expect(lowest).toBe(48 + GAP);
+    expect(pts.map((p) => p.x).every((x) => x >= junction.x)).toBe(true);
+  });
+
+  it("a backward wire into a left port also passes underneath", () => {
+    const later = box(400, 0);
+    const earlier = box(0, 0);
+    const pts = wireRoute({ source: outOf(later), target: inOf(earlier, "left"), side: "left", sourceBox: later, targetBox: earlier });
+    expect(Math.max(...pts.map((p) => p.y))).toBe(48 + GAP);
+    expect(pts).toHaveLength(6);
+  });
+
+  it("the SVG path visits the polyline and the midpoint lies halfway along it", () => {
+    const pts = [{ x: 0, y: 0 }, { x: 100, y: 0 }, { x: 100, y: 50 }];
+    expect(roundedPath(pts)).toBe("M 0 0 L 94 0 Q 100 0 100 6 L 100 50");
+    expect(routeMidpoint(pts)).toEqual({ x: 75, y: 0 });
+  });
+});
+
+describe("summing junction ports", () => {
+  it("keep ports 0, 1 and 2 on the left, bottom and top as ports are added (no wire moves when a port is added)", () => {
+    for (let n = 3; n <= 16; n += 1) {
+      const places = sumPortPlaces(n);
+      expect(places.slice(0, 3).map((p) => p.side)).toEqual(["left", "bottom", "top"]);
+      expect(places).toHaveLength(n);
+      const left = places.filter((p) => p.side === "left").map((p) => p.fraction);
+      expect(new Set(left).size).toBe(left.length);
+      expect(left.every((f) => f > 0 && f < 1)).toBe(true);
+    }
+    expect(sumPortPlaces(2).map((p) => p.side)).toEqual(["left", "bottom"]);
+    expect(sumDiameter(2)).toBe(48);
+    expect(sumDiameter(16)).toBeGreaterThan(sumDiameter(8));
+  });
+});

@@ -1,0 +1,42 @@
+import { describe, expect, it } from "vitest";
+import { buildEdges, buildNodes, fallbackPosition } from "@/features/editor/lib/flowModel";
+import { problemMarks } from "@/features/editor/lib/marks";
+import { unityLoop } from "../support";
+
+const none = problemMarks([], null);
+
+describe("canvas model of a document", () => {
+  it("wires into a junction's bottom port enter from below and name their sign; others enter from the left", () => {
+    const edges = buildEdges(unityLoop(), none, { blocks: [], wires: ["w4"] });
+    expect(edges.map((e) => [e.id, e.targetHandle, e.data?.side, e.selected])).toEqual([
+      ["w1", "in0", "left", false],
+      ["w2", "in", "left", false],
+      ["w3", "in", "left", false],
+      ["w4", "in1", "bottom", true],
+    ]);
+    expect(edges[3].ariaLabel).toBe("Wire w4 from G to e port 1 (minus)");
+  });
+
+  it("marks what a reduction step consumed with aria-current=step, and problems by worst severity", () => {
+    const step = { index: 0, rule: "feedback" as const, description: "", consumedBlocks: ["G"], consumedWires: ["w2", "w4"], produced: "eq1", expr: "", latex: "" };
+    const marks = problemMarks(
+      [
+        { severity: "warning", code: "x", message: "", blockId: "e" },
+        { severity: "error", code: "y", message: "", blockId: "e", related: ["G"] },
+      ],
+      step,
+    );
+    const doc = { ...unityLoop(), layout: { r: { x: 5, y: 7 } } };
+    const nodes = buildNodes(doc, marks, { selection: { blocks: ["r"], wires: [] }, dragging: new Map([["y", { x: 1, y: 2 }]]), measured: new Map() });
+    expect(nodes.map((n) => [n.id, n.domAttributes?.["aria-current"], n.data.problem])).toEqual([
+      ["r", undefined, null],
+      ["e", undefined, "error"],
+      ["G", "step", "error"],
+      ["y", undefined, null],
+    ]);
+    expect(nodes[0]).toMatchObject({ position: { x: 5, y: 7 }, selected: true, ariaLabel: "Input r" });
+    expect(nodes[1].position).toEqual(fallbackPosition(1));
+    expect(nodes[3].position).toEqual({ x: 1, y: 2 });
+    expect(buildEdges(doc, marks, { blocks: [], wires: [] }).filter((e) => e.domAttributes).map((e) => e.id)).toEqual(["w2", "w4"]);
+  });
+});
