@@ -9,7 +9,7 @@ const forbid = (groups, message) => {
   return {
     "no-restricted-imports": [
       "error",
-      { paths: bare.map((name) => ({ name, message })), patterns: [{ group: [...patterns, "node:*"], message }] },
+      { paths: bare.map((name) => ({ name, message })), patterns: [{ group: patterns, message }] },
     ],
   };
 };
@@ -25,13 +25,13 @@ export default tseslint.config(
   {
     files: ["shared/**/*.ts"],
     rules: forbid(
-      ["@/*", "@server/*", "react", "react-dom", "express", "sequelize", "pg", ...nodeBuiltins, "**/src/*", "**/server/*"],
+      ["@/*", "@server/*", "react", "react-dom", "express", "sequelize", "pg", ...nodeBuiltins, "node:*", "**/src/*", "**/server/*"],
       "shared/ is pure TypeScript: no DOM, Node, server or client imports.",
     ),
   },
   {
     files: ["src/**/*.ts", "src/**/*.tsx"],
-    rules: forbid(["@server/*", "**/server/*", ...nodeBuiltins], "The client depends on shared/, never on server/."),
+    rules: forbid(["@server/*", "**/server/*", ...nodeBuiltins, "node:*"], "The client depends on shared/, never on server/."),
   },
   {
     files: ["server/**/*.ts"],

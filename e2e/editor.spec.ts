@@ -85,7 +85,7 @@ test("draws unity negative feedback around K/(s(s+2)), steps through it, saves, 
   const expr = page.getByLabel("Transfer function of s");
   await expr.fill("K/(s*(s+2)");
   await expect(expr).toHaveAttribute("aria-invalid", "true");
-  await expect(page.getByText(/closing parenthesis .* is missing \(character \d+\)/)).toBeVisible();
+  await expect(expr).toHaveAccessibleDescription(/Syntax error at position 10: a closing parenthesis .* is missing/);
   await expr.fill("K/(s*(s+2))");
   // Now only K is wrong: it is not a declared parameter.
   await expect(page.getByRole("button", { name: "Declare parameter K = 1" })).toBeVisible();
@@ -174,6 +174,32 @@ test("draws unity negative feedback around K/(s(s+2)), steps through it, saves, 
   await expect(page.getByRole("toolbar", { name: "Editor" })).toContainText("Saved as v2");
   await expect(block(page, "Transfer function G1")).toBeVisible();
   await expect.poll(() => compact(page)).toBe("2K/(s^2+2s+2K)");
+
+  // Another conflict, this time kept as a new diagram: v3 arrives from elsewhere (a direct API save) while
+  // this page edits v2; the work lands in a new diagram and v3 stays as it was.
+  await block(page, "Transfer function G1").click();
+  await page.getByLabel("Label", { exact: true }).fill("Drum, tuned");
+  const v3 = await page.evaluate(async (path) => {
+    const detail = await (await fetch(`/api${path}`)).json();
+    const res = await fetch(`/api${path}/versions`, {
+      method: "POST",
+      headers: { "content-type": "application/json" },
+      body: JSON.stringify({ baseVersion: 2, message: "From the bench", document: detail.latestVersion.document }),
+    });
+    return res.status;
+  }, new URL(diagramUrl).pathname);
+  expect(v3).toBe(201);
+  await saveVersion(page, "Tuned label");
+  await expect(conflict).toContainText("v3 by Edda Editor");
+  await conflict.getByRole("button", { name: "Save mine as a new diagram…" }).click();
+  await conflict.getByLabel("Title of the new diagram").fill("Drum level, tuned copy");
+  await conflict.getByRole("button", { name: "Create diagram and save" }).click();
+  await expect(page.getByRole("heading", { level: 1, name: "Drum level, tuned copy" })).toBeVisible(COLD_LOAD);
+  await expect(page.getByRole("toolbar", { name: "Editor" })).toContainText("Saved as v1");
+  await expect(block(page, "Transfer function G1 (Drum, tuned)")).toBeVisible();
+  await openEditor(page, new URL(diagramUrl).pathname);
+  await expect(page.getByRole("toolbar", { name: "Editor" })).toContainText("Saved as v3");
+  await expect(block(page, "Transfer function G1")).toBeVisible();
 });
 
 test("a viewer sees the same diagram and its result but cannot change it", async ({ page, browser }) => {

@@ -1,9 +1,8 @@
-import { readFileSync, statSync } from "node:fs";
 import type { Problem } from "@shared/diagram/problems";
 import { analyzeDocument } from "@shared/analysis/analyzeDocument";
 import type { AnalysisResult } from "@shared/analysis/schema";
 import { parseReduceArgs } from "@server/cli/args";
-import { parseJsonText } from "@server/cli/jsonText";
+import { CliExit, readJsonFile, runCommand, usageError as cliUsageError } from "@server/cli/command";
 import { formatProblem } from "@server/cli/report";
 
 /**
@@ -11,7 +10,6 @@ import { formatProblem } from "@server/cli/report";
  * Exit 0 success, 1 bad file content, 2 bad command line (unknown --break too), 3 internal error; never a stack trace.
  */
 const USAGE = "usage: analyze FILE.json [--json] [--input ID] [--output ID] [--break WIRE]   (analyze --help for details)";
-const MAX_FILE_BYTES = 16 * 1024 * 1024;
 
 const HELP = `analyze — stability, Routh array, step response, margins and steady state of a Loopwright diagram
 
@@ -41,16 +39,7 @@ Exit status:
   3  internal error (please report it with the diagram file)
 `;
 
-class Exit extends Error {
-  constructor(
-    readonly code: number,
-    readonly lines: string[],
-  ) {
-    super(lines.join("\n"));
-  }
-}
-
-const usageError = (message: string) => new Exit(2, [`analyze: ${message}`, USAGE]);
+const usageError = (message: string) => cliUsageError("analyze", USAGE, message);
 
 /** Takes `--break WIRE` / `--break=WIRE` out of argv; the rest is the reduce command line. */
 function splitBreak(argv: readonly string[]): { rest: string[]; wire?: string } {
@@ -68,26 +57,6 @@ function splitBreak(argv: readonly string[]): { rest: string[]; wire?: string } 
     wire = value;
   }
   return { rest, wire };
-}
-
-// Same checks and messages as the reduce command's file reader (that one is private to reduce.ts).
-function readDiagramFile(file: string): string {
-  let size: number;
-  try {
-    const st = statSync(file);
-    if (st.isDirectory()) throw usageError(`cannot read "${file}": it is a directory`);
-    size = st.size;
-  } catch (e) {
-    if (e instanceof Exit) throw e;
-    const code = (e as NodeJS.ErrnoException).code;
-    throw usageError(code === "ENOENT" ? `no such file "${file}"` : `cannot read "${file}" (${code ?? "error"})`);
-  }
-  if (size > MAX_FILE_BYTES) throw new Exit(1, [`analyze: ${file}: the file is ${(size / 1048576).toFixed(1)} MB; the limit is ${MAX_FILE_BYTES / 1048576} MB`]);
-  try {
-    return readFileSync(file, "utf8");
-  } catch (e) {
-    throw usageError(`cannot read "${file}" (${(e as NodeJS.ErrnoException).code ?? "error"})`);
-  }
 }
 
 const USAGE_CODES = new Set(["unknown-pair-id", "unknown-break-wire"]);
@@ -121,36 +90,15 @@ function run(argv: readonly string[]): string {
   if (parsed.kind === "help") return HELP;
   if (parsed.kind === "usage-error") throw usageError(parsed.message);
   const { file, json, input, output } = parsed.args;
-  const text = readDiagramFile(file);
-  const doc = parseJsonText(text);
-  if (!doc.ok) {
-    const { line, column, message } = doc.error;
-    throw new Exit(1, [`analyze: ${file}: not valid JSON at line ${line}, column ${column}: ${message}`]);
-  }
-  const out = analyzeDocument(doc.value, { input, output, break: wire });
+  const raw = readJsonFile("analyze", USAGE, file);
+  const out = analyzeDocument(raw, { input, output, break: wire });
   if (!out.ok) {
     const usage = out.problems.filter((p: Problem) => USAGE_CODES.has(p.code));
-    if (usage.length) throw new Exit(2, [...usage.map((p) => `analyze: ${p.message}`), USAGE]);
+    if (usage.length) throw new CliExit(2, [...usage.map((p) => `analyze: ${p.message}`), USAGE]);
     const errors = out.problems.filter((p) => p.severity === "error").length;
-    throw new Exit(1, [`analyze: ${file}: ${errors} problem${errors === 1 ? "" : "s"} prevent analysis`, ...out.problems.map(formatProblem)]);
+    throw new CliExit(1, [`analyze: ${file}: ${errors} problem${errors === 1 ? "" : "s"} prevent analysis`, ...out.problems.map(formatProblem)]);
   }
   return json ? `${JSON.stringify(out.result, null, 2)}\n` : report(out.result, out.prepared.doc.title);
 }
 
-function main(): void {
-  try {
-    process.stdout.write(run(process.argv.slice(2)));
-    process.exitCode = 0;
-  } catch (e) {
-    if (e instanceof Exit) {
-      process.stderr.write(`${e.lines.join("\n")}\n`);
-      process.exitCode = e.code;
-    } else {
-      const message = e instanceof Error ? e.message : String(e);
-      process.stderr.write(`analyze: internal error: ${message}\nPlease report it together with the diagram file.\n`);
-      process.exitCode = 3;
-    }
-  }
-}
-
-main();
+await runCommand("analyze", run);

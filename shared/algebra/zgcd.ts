@@ -101,14 +101,17 @@ function probeDegree(a: ZRec, b: ZRec): number {
   return -1;
 }
 
-/** Small-primes modular gcd of primitive integer polynomials, checked by exact division. */
+/**
+ * Small-primes modular gcd of primitive integer polynomials, checked by exact division. The images are combined
+ * in the symmetric range, so a prime that leaves every coefficient unchanged means the lift has settled: only then
+ * is a candidate built and tried (not once per prime).
+ */
 function modularGcd(v: string, A: readonly bigint[], B: readonly bigint[]): ZPoly {
   const lcA = A[A.length - 1];
   const lcB = B[B.length - 1];
   const gamma = bigGcd(lcA, lcB);
   let acc: bigint[] = [];
   let modulus = 1n;
-  let candidate: ZPoly | null = null;
   for (let i = 0; ; i++) {
     const p = modPrime(i);
     const P = BigInt(p);
@@ -119,29 +122,29 @@ function modularGcd(v: string, A: readonly bigint[], B: readonly bigint[]): ZPol
     const gp = bigMod(gamma, p);
     const scaled: ModPoly = img.map((x) => mulMod(x, gp, p));
     if (!acc.length || img.length < acc.length) {
-      acc = scaled.map(BigInt);
+      acc = scaled.map((x) => BigInt(x > p >> 1 ? x - p : x));
       modulus = P;
-      candidate = null;
       continue;
     }
     const inv = BigInt(invMod(bigMod(modulus, p), p));
-    acc = acc.map((x, k) => x + modulus * ((((BigInt(scaled[k]) - x) % P) * inv % P + P) % P));
-    modulus *= P;
-    const half = modulus / 2n;
-    const next = zNormSign(zQuoContent(zMake(v, acc.map((x) => (x > half ? x - modulus : x)))));
-    if (candidate !== null && zEqualsInt(candidate, next)) {
-      if (zDivExact({ v, c: A }, next) !== null && zDivExact({ v, c: B }, next) !== null) return next;
+    const next = modulus * P;
+    const half = next / 2n;
+    let settled = true;
+    for (let k = 0; k < acc.length; k++) {
+      const t = ((((BigInt(scaled[k]) - acc[k]) % P) * inv) % P + P) % P;
+      if (t === 0n) continue;
+      settled = false;
+      const x = acc[k] + modulus * t;
+      acc[k] = x > half ? x - next : x;
     }
-    candidate = next;
+    modulus = next;
+    if (!settled) continue;
+    const candidate = zNormSign(zQuoContent(zMake(v, acc.slice())));
+    if (zDivExact({ v, c: A }, candidate) !== null && zDivExact({ v, c: B }, candidate) !== null) return candidate;
   }
 }
 
 const zQuoContent = (a: ZPoly): ZPoly => zQuo(a, zContentInt(a));
-
-function zEqualsInt(a: ZPoly, b: ZPoly): boolean {
-  if (typeof a === "bigint" || typeof b === "bigint") return a === b;
-  return a.c.length === b.c.length && a.c.every((x, i) => x === b.c[i]);
-}
 
 /** Pseudo-remainder lc(b)^(deg a − deg b + 1)·a mod b on coefficient lists of one variable. */
 function prem(A: readonly ZPoly[], B: readonly ZPoly[]): ZPoly[] {

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { diagramDocumentSchema } from "@shared/diagram/schema";
 import { reductionResultSchema } from "@shared/reduce/result";
+import { analysisJsonSchema } from "@shared/analysis/schema";
 
 /**
  * The published JSON Schemas, generated from the zod schemas so they cannot drift: file name under
@@ -23,5 +24,6 @@ export function publishedJsonSchemas(): Record<string, Record<string, unknown>> 
       description:
         "Closed-loop transfer functions with cancelled factors, the characteristic polynomial, every reduction step and warnings.",
     },
+    "analysis-result.schema.json": analysisJsonSchema(),
   };
 }

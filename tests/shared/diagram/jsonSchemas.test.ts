@@ -9,7 +9,7 @@ const schemaFile = (name: string) => fileURLToPath(new URL(`../../../shared/sche
 describe("published JSON Schemas", () => {
   it("the committed files equal freshly generated ones (run npx tsx server/scripts/gen-schemas.ts)", () => {
     const fresh = publishedJsonSchemas();
-    expect(Object.keys(fresh).sort()).toEqual(["loopwright-diagram.v1.schema.json", "reduction-result.schema.json"]);
+    expect(Object.keys(fresh).sort()).toEqual(["analysis-result.schema.json", "loopwright-diagram.v1.schema.json", "reduction-result.schema.json"]);
     for (const [name, schema] of Object.entries(fresh)) {
       expect(JSON.parse(readFileSync(schemaFile(name), "utf8")), name).toEqual(schema);
     }

@@ -27,8 +27,6 @@ export interface Selection {
   wires: string[];
 }
 
-export const emptySelection: Selection = { blocks: [], wires: [] };
-
 /**
  * What every command returns: the next document (plus what to select afterwards), or the reason it was
  * refused — a sentence the editor shows where the user is looking.

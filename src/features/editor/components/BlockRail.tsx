@@ -7,7 +7,7 @@ import { TYPE_NAME } from "@/features/editor/lib/flowModel";
 export const BLOCK_MIME = "application/x-loopwright-block";
 
 /** The rail's blocks in order; the digit is the keyboard shortcut that adds one. */
-export const RAIL: { type: BlockType; short: string; key: string; glyph: ReactNode; hint: string }[] = [
+const RAIL: { type: BlockType; short: string; key: string; glyph: ReactNode; hint: string }[] = [
   { type: "input", short: "Input", key: "1", glyph: <ArrowRightFromLine className="size-5" />, hint: "External signal: reference or disturbance" },
   { type: "sum", short: "Sum", key: "2", glyph: <CirclePlus className="size-5" />, hint: "Adds and subtracts its inputs" },
   { type: "gain", short: "Gain", key: "3", glyph: <Triangle className="size-5 rotate-90" />, hint: "Static gain, no s" },

@@ -26,7 +26,7 @@ import { useFlowState } from "@/features/editor/hooks/useFlowState";
 import { useLiveResult } from "@/features/editor/hooks/useLiveResult";
 import { useSaveFlow } from "@/features/editor/hooks/useSaveFlow";
 import { useUnsavedGuard } from "@/features/editor/hooks/useUnsavedGuard";
-import { problemMarks } from "@/features/editor/lib/marks";
+import { problemMarks, stepFootprint } from "@/features/editor/lib/marks";
 import { resultView } from "@/features/editor/lib/resultView";
 
 interface Props {
@@ -59,7 +59,8 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
   const view = useMemo(() => resultView(live.outcome, pair), [live.outcome, pair]);
   const [stepAt, setStepAt] = useState<number | null>(null);
   const step = stepAt === null ? null : (view.steps[stepAt] ?? null);
-  const marks = useMemo(() => problemMarks(view.problems, step), [view.problems, step]);
+  const footprint = useMemo(() => (step && stepAt !== null ? stepFootprint(view.steps, stepAt) : null), [step, stepAt, view.steps]);
+  const marks = useMemo(() => problemMarks(view.problems, footprint), [view.problems, footprint]);
 
   const selectRef = useRef<(s: Selection) => void>(() => {});
   const act = useCallback<Act>(
@@ -143,7 +144,7 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
       ? `Unsaved changes${base ? ` since v${base}` : ""}${draft.failed ? " (this browser refused to keep a draft)" : " · draft kept in this browser"}`
       : base
         ? `Saved as v${base}`
-        : "Nothing saved yet";
+        : "No version saved yet";
 
   return (
     <EditorContext.Provider value={useMemo(() => ({ act, readOnly }), [act, readOnly])}>
@@ -186,7 +187,7 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
             onConnectWire={commands.connectWire}
             onDropBlock={commands.dropBlock}
           >
-            {step && <StepBadge step={step} nodes={canvasState.nodes} />}
+            {step && footprint && <StepBadge step={step} blocks={footprint.blocks} nodes={canvasState.nodes} />}
           </DiagramCanvas>
           {doc.blocks.length === 0 && (
             <p className="pointer-events-none absolute inset-x-0 top-1/3 mx-auto max-w-sm text-center text-sm text-ink-soft">

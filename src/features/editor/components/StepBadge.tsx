@@ -4,8 +4,8 @@ import { Tex } from "@/features/editor/components/Tex";
 import type { FlowNode } from "@/features/editor/lib/flowModel";
 
 /** The equivalent block a step produced, drawn on the canvas just under the blocks it replaced. */
-export function StepBadge({ step, nodes }: { step: ReductionStep; nodes: FlowNode[] }) {
-  const consumed = nodes.filter((n) => step.consumedBlocks.includes(n.id));
+export function StepBadge({ step, blocks, nodes }: { step: ReductionStep; blocks: ReadonlySet<string>; nodes: FlowNode[] }) {
+  const consumed = nodes.filter((n) => blocks.has(n.id));
   if (consumed.length === 0) return null;
   const left = Math.min(...consumed.map((n) => n.position.x));
   const bottom = Math.max(...consumed.map((n) => n.position.y + (n.measured?.height ?? 48)));

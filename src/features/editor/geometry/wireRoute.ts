@@ -20,7 +20,7 @@ export interface WireEnds {
 }
 
 /** Straight run out of an output and into an input before the first bend. */
-export const STUB = 16;
+const STUB = 16;
 /** Clearance between a detour and the blocks it passes. */
 export const GAP = 24;
 
@@ -83,15 +83,4 @@ export function roundedPath(points: Point[], radius = 6): string {
 function towards(from: Point, to: Point, distance: number): Point {
   const length = Math.hypot(to.x - from.x, to.y - from.y) || 1;
   return { x: from.x + ((to.x - from.x) / length) * distance, y: from.y + ((to.y - from.y) / length) * distance };
-}
-
-/** The point halfway along the polyline, where a wire's label sits. */
-export function routeMidpoint(points: Point[]): Point {
-  const lengths = points.slice(1).map((p, i) => Math.abs(p.x - points[i].x) + Math.abs(p.y - points[i].y));
-  let left = lengths.reduce((a, b) => a + b, 0) / 2;
-  for (let i = 0; i < lengths.length; i += 1) {
-    if (left <= lengths[i]) return towards(points[i], points[i + 1], left);
-    left -= lengths[i];
-  }
-  return points[points.length - 1] ?? { x: 0, y: 0 };
 }

@@ -4,7 +4,7 @@ import type { EditorDoc } from "@/features/editor/commands/types";
 import { ReduceChannel } from "@/features/editor/worker/reduceChannel";
 import ReduceWorker from "@/features/editor/worker/reduce.worker.ts?worker";
 
-export const LIVE_DEBOUNCE_MS = 250;
+const LIVE_DEBOUNCE_MS = 250;
 
 export interface LiveResult {
   /** The latest answer (kept while the next one is computed, so the panel does not flicker). */

@@ -48,7 +48,7 @@ export const OUT_HANDLE = "out";
 /** Where a block without a stored position is placed: a loose grid in document order. */
 export const fallbackPosition = (index: number): Point => ({ x: 48 + (index % 6) * 176, y: 48 + Math.floor(index / 6) * 128 });
 
-export const blockAriaLabel = (b: Block) => `${TYPE_NAME[b.type]} ${b.id}${b.label ? ` (${b.label})` : ""}`;
+const blockAriaLabel = (b: Block) => `${TYPE_NAME[b.type]} ${b.id}${b.label ? ` (${b.label})` : ""}`;
 
 export function wireAriaLabel(w: EditorWire, target: Block | undefined): string {
   const into = target?.type === "sum" && w.port !== undefined ? ` port ${w.port} (${target.signs[w.port] === "-" ? "minus" : "plus"})` : "";

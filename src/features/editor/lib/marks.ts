@@ -4,8 +4,31 @@ import type { Marks } from "@/features/editor/lib/flowModel";
 
 const worse = (a: Severity | undefined, b: Severity): Severity => (a === "error" || b === "error" ? "error" : "warning");
 
+/**
+ * What a step consumed, in terms of the drawing: an equivalent block an earlier step produced (`eq1`)
+ * stands for everything that step consumed, recursively.
+ * Example: step 2 consumes eq1 and h, step 1 made eq1 from c and p → blocks c, p, h.
+ */
+export function stepFootprint(steps: ReductionStep[], index: number): { blocks: Set<string>; wires: Set<string> } {
+  const made = new Map(steps.slice(0, index).map((s) => [s.produced, s]));
+  const blocks = new Set<string>();
+  const wires = new Set<string>();
+  const visit = (s: ReductionStep) => {
+    s.consumedWires.forEach((w) => wires.add(w));
+    for (const id of s.consumedBlocks) {
+      const earlier = made.get(id);
+      if (earlier) {
+        made.delete(id);
+        visit(earlier);
+      } else blocks.add(id);
+    }
+  };
+  if (steps[index]) visit(steps[index]);
+  return { blocks, wires };
+}
+
 /** Canvas marks: what the current reduction step consumed, and the worst problem on each block and wire. */
-export function problemMarks(problems: Problem[], step: ReductionStep | null): Marks {
+export function problemMarks(problems: Problem[], step: { blocks: Set<string>; wires: Set<string> } | null): Marks {
   const blockProblems = new Map<string, Severity>();
   const wireProblems = new Map<string, Severity>();
   for (const p of problems) {
@@ -13,8 +36,8 @@ export function problemMarks(problems: Problem[], step: ReductionStep | null): M
     if (p.wireId) wireProblems.set(p.wireId, worse(wireProblems.get(p.wireId), p.severity));
   }
   return {
-    highlightBlocks: new Set(step?.consumedBlocks ?? []),
-    highlightWires: new Set(step?.consumedWires ?? []),
+    highlightBlocks: step?.blocks ?? new Set(),
+    highlightWires: step?.wires ?? new Set(),
     blockProblems,
     wireProblems,
   };

@@ -14,7 +14,7 @@ export function transferText(t: Pick<TransferResult, "numerator" | "denominator"
 }
 
 /** The name of a pair's closed-loop transfer function in plain text and LaTeX. */
-export const pairName = (t: Pick<TransferResult, "input" | "output">) => `T_${t.output}_${t.input}(s)`;
+const pairName = (t: Pick<TransferResult, "input" | "output">) => `T_${t.output}_${t.input}(s)`;
 const pairLatex = (t: Pick<TransferResult, "input" | "output">) =>
   `T_{\\mathrm{${t.output.replaceAll("_", "\\_")}},\\mathrm{${t.input.replaceAll("_", "\\_")}}}(s)`;
 

@@ -2,7 +2,7 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import type { Point } from "@/features/editor/commands/types";
 import { sumDiameter, sumPortPlaces, type Side } from "@/features/editor/geometry/sumPorts";
-import { GAP, roundedPath, routeMidpoint, wireRoute, type Box } from "@/features/editor/geometry/wireRoute";
+import { GAP, roundedPath, wireRoute, type Box } from "@/features/editor/geometry/wireRoute";
 
 const box = (x: number, y: number, width = 80, height = 48): Box => ({ x, y, width, height });
 /** Output on the right edge, middle height. */
@@ -64,10 +64,9 @@ describe("wire routing (common practice for block diagrams: orthogonal wires, fe
     expect(pts).toHaveLength(6);
   });
 
-  it("the SVG path visits the polyline and the midpoint lies halfway along it", () => {
-    const pts = [{ x: 0, y: 0 }, { x: 100, y: 0 }, { x: 100, y: 50 }];
-    expect(roundedPath(pts)).toBe("M 0 0 L 94 0 Q 100 0 100 6 L 100 50");
-    expect(routeMidpoint(pts)).toEqual({ x: 75, y: 0 });
+  it("the SVG path follows the polyline with its corners rounded, less on short segments", () => {
+    expect(roundedPath([{ x: 0, y: 0 }, { x: 100, y: 0 }, { x: 100, y: 50 }])).toBe("M 0 0 L 94 0 Q 100 0 100 6 L 100 50");
+    expect(roundedPath([{ x: 0, y: 0 }, { x: 4, y: 0 }, { x: 4, y: 50 }])).toBe("M 0 0 L 2 0 Q 4 0 4 2 L 4 50");
   });
 });
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { buildEdges, buildNodes, fallbackPosition } from "@/features/editor/lib/flowModel";
-import { problemMarks } from "@/features/editor/lib/marks";
+import { problemMarks, stepFootprint } from "@/features/editor/lib/marks";
 import { unityLoop } from "../support";
 
 const none = problemMarks([], null);
@@ -24,7 +24,7 @@ describe("canvas model of a document", () => {
         { severity: "warning", code: "x", message: "", blockId: "e" },
         { severity: "error", code: "y", message: "", blockId: "e", related: ["G"] },
       ],
-      step,
+      stepFootprint([step], 0),
     );
     const doc = { ...unityLoop(), layout: { r: { x: 5, y: 7 } } };
     const nodes = buildNodes(doc, marks, { selection: { blocks: ["r"], wires: [] }, dragging: new Map([["y", { x: 1, y: 2 }]]), measured: new Map() });
@@ -38,5 +38,17 @@ describe("canvas model of a document", () => {
     expect(nodes[1].position).toEqual(fallbackPosition(1));
     expect(nodes[3].position).toEqual({ x: 1, y: 2 });
     expect(buildEdges(doc, marks, { blocks: [], wires: [] }).filter((e) => e.domAttributes).map((e) => e.id)).toEqual(["w2", "w4"]);
+  });
+
+  it("an equivalent block stands for everything the step that made it consumed (reduction trace semantics)", () => {
+    const base = { description: "", expr: "", latex: "" };
+    const steps = [
+      { ...base, index: 0, rule: "series" as const, consumedBlocks: ["c", "p"], consumedWires: ["w3"], produced: "eq1" },
+      { ...base, index: 1, rule: "feedback" as const, consumedBlocks: ["eq1", "h"], consumedWires: ["w5", "w6"], produced: "eq2" },
+    ];
+    const second = stepFootprint(steps, 1);
+    expect([...second.blocks].sort()).toEqual(["c", "h", "p"]);
+    expect([...second.wires].sort()).toEqual(["w3", "w5", "w6"]);
+    expect([...stepFootprint(steps, 0).blocks].sort()).toEqual(["c", "p"]);
   });
 });

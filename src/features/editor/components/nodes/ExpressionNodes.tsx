@@ -10,7 +10,7 @@ import type { NodeOf } from "@/features/editor/lib/flowModel";
 /** The expression as a typeset formula, or the raw text in mono when it does not parse yet. */
 function Formula({ expr }: { expr: string }) {
   const latex = useMemo(() => expressionLatex(expr), [expr]);
-  if (latex === null) return <span className="font-mono text-xs text-fault">{expr || "∅"}</span>;
+  if (latex === null) return <span className="block max-w-40 truncate font-mono text-xs text-fault">{expr || "∅"}</span>;
   return <Tex latex={latex} className="text-[15px]" />;
 }
 

@@ -1,8 +1,8 @@
 import { useId, useState } from "react";
 import { Button } from "@/components/Button";
 import { deleteSelection } from "@/features/editor/commands/selection";
-import { connect, openInputs } from "@/features/editor/commands/wires";
-import type { EditorDoc } from "@/features/editor/commands/types";
+import { connect, openInputs, type ConnectArgs } from "@/features/editor/commands/wires";
+import type { EditorDoc, Outcome } from "@/features/editor/commands/types";
 import { useEditorActions } from "@/features/editor/components/EditorContext";
 
 const target = (a: { to: string; port?: number }) => (a.port === undefined ? a.to : `${a.to}:${a.port}`);
@@ -68,7 +68,13 @@ export function Connections({ doc, blockId, hasOutput }: { doc: EditorDoc; block
             disabled={!choice}
             onClick={() => {
               const picked = options.find((o) => target(o) === choice);
-              if (picked && act("Connect", (d) => connect(d, picked))) setChoice("");
+              // Keep this block selected, so several wires can be drawn from it in a row.
+              const keep = { blocks: [blockId], wires: [] };
+              const run = (d: EditorDoc): Outcome => {
+                const o = connect(d, picked as ConnectArgs);
+                return o.ok ? { ...o, select: keep } : o;
+              };
+              if (picked && act("Connect", run)) setChoice("");
             }}
           >
             Connect

@@ -73,7 +73,8 @@ export function ExpressionField({ blockId, expr, allowS, parameters, inputRef }:
         ) : (
           <div className="flex flex-col gap-1">
             <p className="text-xs font-medium text-fault">
-              {parsed.message} (character {parsed.position + 1})
+              {parsed.message}
+              {/position \d+/.test(parsed.message) ? "" : ` (at position ${parsed.position})`}
             </p>
             <Pointer text={expr} position={parsed.position} />
             {parsed.code === "unknown-name" && !readOnly && <DeclareButton expr={expr} position={parsed.position} />}
