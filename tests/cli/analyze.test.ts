@@ -1,9 +1,9 @@
 import { spawn } from "node:child_process";
-import { mkdtempSync, readFileSync, writeFileSync } from "node:fs";
+import { mkdtempSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
-import { analysisJsonSchema, analysisResultSchema } from "@shared/analysis/schema";
+import { analysisResultSchema } from "@shared/analysis/schema";
 import { makeDoc } from "../support/docBuilder";
 
 // The `analyze` command as teams' CI calls it: a real process (node + tsx), stdout, stderr and exit status.
