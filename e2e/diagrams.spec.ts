@@ -37,10 +37,9 @@ test("an owner creates, renames, archives and restores a diagram", async ({ page
   await page.getByLabel("Show archived diagrams").uncheck();
   await expect(table.getByRole("link", { name: "Condenser fan speed, variant B" })).toBeVisible();
 
-  // The diagram page is a placeholder until the editor ships.
+  // The diagram opens in the editor.
   await table.getByRole("link", { name: "Condenser fan speed, variant B" }).click();
   await expect(page.getByRole("heading", { level: 1, name: "Condenser fan speed, variant B" })).toBeVisible();
-  await expect(page.getByText("The canvas editor arrives in a later release.")).toBeVisible();
   await expect(page.getByText("No version saved yet")).toBeVisible();
   await page.getByRole("link", { name: /Back to Chiller loop/ }).click();
   await expect(page.getByRole("heading", { level: 1, name: /Chiller loop/ })).toBeVisible();

@@ -50,6 +50,10 @@ export function readJsonFile(command: string, usage: string, file: string): unkn
 
 /** Runs a command: prints its output, or its failure's lines with the right exit code. */
 export async function runCommand(command: string, run: (argv: string[]) => string | Promise<string>): Promise<void> {
+  // A reader that stops early (`| head`) is not an error of ours.
+  process.stdout.on("error", (e: NodeJS.ErrnoException) => {
+    if (e.code === "EPIPE") process.exit(process.exitCode ?? 0);
+  });
   try {
     process.stdout.write(await run(process.argv.slice(2)));
     process.exitCode = 0;

@@ -1,4 +1,7 @@
-import { parse, type MathNode } from "mathjs";
+import { create, parseDependencies, type MathNode } from "mathjs";
+
+// Only the parser of mathjs: the full library would triple the editor's and the worker's bundles.
+const { parse } = create({ parseDependencies });
 import type { ExprNode } from "@shared/expr/ast";
 import { LIMITS } from "@shared/diagram/schema";
 import { decimalToRational, MAX_DECIMAL_EXPONENT } from "@shared/expr/decimal";

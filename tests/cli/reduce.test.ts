@@ -39,7 +39,7 @@ function file(name: string, content: unknown): string {
   return path;
 }
 
-// Each case starts node + tsx (about a second, much more on a busy machine): cases run concurrently.
+// Each case starts node + tsx (about a second, much more on a busy machine).
 const SPAWN_TIMEOUT = 120_000;
 const STACK_TRACE = /\n\s+at .+:\d+:\d+/;
 const USAGE = "usage: reduce FILE.json";
@@ -59,7 +59,7 @@ const spindle = makeDoc(
   "Spindle speed loop",
 );
 
-describe.concurrent("reduce CLI: success", { timeout: SPAWN_TIMEOUT }, () => {
+describe("reduce CLI: success", { timeout: SPAWN_TIMEOUT }, () => {
   it("--json prints one ReductionResult whose transfer is G/(1 + G·H) (from memory: Nise, Control Systems Engineering, canonical feedback form)", async () => {
     const run = await reduce(file("spindle.json", spindle), "--json");
     expect(run.stderr).toBe("");
@@ -128,7 +128,7 @@ describe.concurrent("reduce CLI: success", { timeout: SPAWN_TIMEOUT }, () => {
   });
 });
 
-describe.concurrent("reduce CLI: the file's content is wrong → exit 1, messages on stderr, no stack trace", { timeout: SPAWN_TIMEOUT }, () => {
+describe("reduce CLI: the file's content is wrong → exit 1, messages on stderr, no stack trace", { timeout: SPAWN_TIMEOUT }, () => {
   const expectContentError = (run: Run, ...fragments: string[]) => {
     expect(run.code).toBe(1);
     expect(run.stdout).toBe("");
@@ -197,7 +197,7 @@ describe.concurrent("reduce CLI: the file's content is wrong → exit 1, message
   });
 });
 
-describe.concurrent("reduce CLI: the command line is wrong → exit 2 with a usage line", { timeout: SPAWN_TIMEOUT }, () => {
+describe("reduce CLI: the command line is wrong → exit 2 with a usage line", { timeout: SPAWN_TIMEOUT }, () => {
   const expectUsageError = (run: Run, fragment: string) => {
     expect(run.code).toBe(2);
     expect(run.stdout).toBe("");

@@ -1,10 +1,13 @@
 import { Suspense } from "react";
-import { Outlet } from "react-router-dom";
+import { Outlet, useMatch } from "react-router-dom";
 import { Header } from "@/app/layout/Header";
 import { Loading } from "@/components/QueryState";
 import { SafetyNote } from "@/components/SafetyNote";
+import { paths } from "@/lib/paths";
 
 export function AppShell() {
+  // The editor needs the whole width for its canvas; reading pages keep a comfortable measure.
+  const wide = useMatch(paths.diagram) !== null;
   return (
     <div className="flex min-h-screen flex-col">
       <a
@@ -14,7 +17,7 @@ export function AppShell() {
         Skip to content
       </a>
       <Header />
-      <main id="main" tabIndex={-1} className="mx-auto w-full max-w-6xl flex-1 px-4 py-8 sm:px-6">
+      <main id="main" tabIndex={-1} className={`mx-auto w-full flex-1 px-4 sm:px-6 ${wide ? "max-w-none py-4" : "max-w-6xl py-8"}`}>
         <Suspense fallback={<Loading label="Loading the page…" />}>
           <Outlet />
         </Suspense>
