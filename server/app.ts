@@ -73,7 +73,7 @@ export function createApp(deps: AppDeps): Express {
     app.use(express.static(clientDir, { index: false, maxAge: "1h" }));
     // SPA fallback: every other GET that wants HTML gets the client, which routes it.
     app.get(/^\/(?!api\/|dev\/).*/, (req, res, next) =>
-      req.accepts("html") ? res.sendFile(join(clientDir, "index.html")) : next(),
+      req.accepts("html") ? res.sendFile("index.html", { root: clientDir }) : next(),
     );
   }
   app.use(errorHandler(log));

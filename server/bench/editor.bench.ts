@@ -1,0 +1,228 @@
+import { chromium, request, type Browser, type BrowserContextOptions, type Page } from "@playwright/test";
+import type { DiagramDocument } from "@shared/diagram/schema";
+import { ladderDiagram } from "@server/bench/diagrams";
+import { startLiveServer } from "@server/bench/liveServer";
+
+/**
+ * Canvas editor benchmark in headless Chromium against the real server and production build: time from
+ * navigation start until all blocks of a 500-block diagram are on the canvas and until its closed-loop
+ * result shows, then the frame rate while the canvas is dragged around. Prints figures and targets;
+ * asserts nothing. Headless Chromium draws in software, so these figures are a floor.
+ * Run: BENCH_DATABASE_URL=postgres://… npx tsx server/bench/editor.bench.ts (or `npm run bench editor`).
+ */
+const BLOCKS = 500;
+const RUNS = 3;
+const PAN_MS = 3000;
+const IDLE_MS = 1000;
+const LOAD_TIMEOUT_MS = 120_000;
+const CHROMIUM_ARGS = ["--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"];
+const VIEWPORT = { width: 1600, height: 1000 };
+const RESULT_TEXT = 'output[aria-label="Closed-loop transfer function as text"]';
+
+const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
+
+/** The generated ladder placed on a grid (row-major in block order), unless it already has a layout. */
+function benchDocument(): DiagramDocument {
+  const doc = ladderDiagram(BLOCKS);
+  if (doc.layout) return doc;
+  const columns = Math.ceil(Math.sqrt(BLOCKS));
+  const layout = Object.fromEntries(doc.blocks.map((b, i) => [b.id, { x: (i % columns) * 224, y: Math.floor(i / columns) * 144 }]));
+  return { ...doc, layout };
+}
+
+/** A fresh user, team and diagram with the bench document as version 1; returns its id and the signed-in cookies. */
+async function seedDiagram(baseUrl: string): Promise<{ id: string; storageState: BrowserContextOptions["storageState"] }> {
+  const api = await request.newContext({ baseURL: baseUrl, extraHTTPHeaders: { Origin: baseUrl } });
+  try {
+    const post = async (path: string, data: unknown) => {
+      const res = await api.post(path, { data });
+      if (!res.ok()) throw new Error(`POST ${path} answered ${res.status()}: ${(await res.text()).slice(0, 300)}`);
+      return res.json();
+    };
+    const email = `bench.${Date.now()}.${Math.floor(Math.random() * 1e6)}@bench.loopwright.test`;
+    await post("/api/auth/sign-up", { name: "Bench Runner", email, password: "bench-password-42" });
+    const { team } = await post("/api/teams", { name: `Bench ${Date.now()}` });
+    const { diagram } = await post(`/api/teams/${team.id}/diagrams`, { title: `Ladder of ${BLOCKS} blocks` });
+    await post(`/api/diagrams/${diagram.id}/versions`, { baseVersion: 0, message: "Generated for the editor benchmark", document: benchDocument() });
+    return { id: diagram.id, storageState: await api.storageState() };
+  } finally {
+    await api.dispose();
+  }
+}
+
+interface LoadFigures {
+  canvasMs: number;
+  resultMs: number | null;
+  engineStatus: string;
+}
+
+/** Milliseconds since navigation start at the first animation frame where `count` measured block nodes are shown. */
+const waitForCanvas = (page: Page, count: number) =>
+  page
+    .waitForFunction(
+      (n) => {
+        // xyflow keeps a node hidden until it has measured it.
+        const shown = [...document.querySelectorAll<HTMLElement>(".react-flow__node")].filter((el) => el.style.visibility !== "hidden");
+        return shown.length >= n ? performance.now() : false;
+      },
+      count,
+      { polling: "raf", timeout: LOAD_TIMEOUT_MS },
+    )
+    .then((h) => h.jsonValue() as Promise<number>);
+
+/** Milliseconds since navigation start when the closed-loop result shows, or null if the editor reports problems instead. */
+const waitForResult = (page: Page) =>
+  page
+    .waitForFunction(
+      (selector) => {
+        if (document.querySelector(selector)?.textContent?.trim()) return performance.now();
+        return /No result while the diagram has errors/.test(document.body.textContent ?? "") ? -1 : false;
+      },
+      RESULT_TEXT,
+      { polling: "raf", timeout: LOAD_TIMEOUT_MS },
+    )
+    .then(async (h) => {
+      const t = (await h.jsonValue()) as number;
+      return t < 0 ? null : t;
+    });
+
+/** One cold load (fresh context, empty cache); leaves the page open for the pan runs. */
+async function load(browser: Browser, url: string, storageState: BrowserContextOptions["storageState"]) {
+  const context = await browser.newContext({ storageState, viewport: VIEWPORT });
+  const page = await context.newPage();
+  await page.goto(url, { waitUntil: "commit" });
+  const canvasMs = await waitForCanvas(page, BLOCKS);
+  const resultMs = await waitForResult(page);
+  const engineStatus = (await page.getByRole("status").filter({ hasText: /Computed in/ }).first().textContent({ timeout: 5000 }).catch(() => null)) ?? "—";
+  const figures: LoadFigures = { canvasMs, resultMs, engineStatus };
+  return { page, close: () => context.close(), figures };
+}
+
+interface FrameFigures {
+  fps: number;
+  worstFrameMs: number;
+  viewportUpdatesPerS: number;
+}
+
+/** A point on the empty pane (not on a block or wire) near the middle of the canvas, so a drag pans. */
+const emptyPanePoint = (page: Page) =>
+  page.evaluate(() => {
+    const pane = document.querySelector(".react-flow__pane")!.getBoundingClientRect();
+    const cx = pane.x + pane.width / 2;
+    const cy = pane.y + pane.height / 2;
+    for (let r = 0; r < Math.min(pane.width, pane.height) / 2; r += 4)
+      for (let a = 0; a < 16; a++) {
+        const x = cx + r * Math.cos((a * Math.PI) / 8);
+        const y = cy + r * Math.sin((a * Math.PI) / 8);
+        if (document.elementFromPoint(x, y)?.classList.contains("react-flow__pane")) return { x, y };
+      }
+    throw new Error("no empty spot on the canvas pane to start a drag from");
+  });
+
+/** What the pan run keeps on the page's window: frame times and the distinct viewport transforms seen. */
+interface BenchWindow {
+  benchFrames: number[];
+  benchTransforms: Set<string>;
+  benchStop: boolean;
+  benchTick: (t: number) => void;
+}
+
+/** Counts the page's animation frames, and the distinct canvas viewport transforms, while `during` runs. */
+async function countFrames(page: Page, during: () => Promise<void>): Promise<FrameFigures> {
+  await page.evaluate(() => {
+    const w = window as unknown as BenchWindow;
+    w.benchFrames = [];
+    w.benchTransforms = new Set();
+    w.benchStop = false;
+    const viewport = document.querySelector<HTMLElement>(".react-flow__viewport")!;
+    // A property, not a named const: tsx would wrap a named function in a helper the page does not have.
+    w.benchTick = (t: number) => {
+      w.benchFrames.push(t);
+      w.benchTransforms.add(viewport.style.transform);
+      if (!w.benchStop) requestAnimationFrame(w.benchTick);
+    };
+    requestAnimationFrame(w.benchTick);
+  });
+  await during();
+  const { frames, transforms } = await page.evaluate(() => {
+    const w = window as unknown as BenchWindow;
+    w.benchStop = true;
+    return { frames: w.benchFrames, transforms: w.benchTransforms.size };
+  });
+  const spanMs = frames[frames.length - 1] - frames[0];
+  const gaps = frames.slice(1).map((t, i) => t - frames[i]);
+  return { fps: ((frames.length - 1) * 1000) / spanMs, worstFrameMs: Math.max(...gaps), viewportUpdatesPerS: ((transforms - 1) * 1000) / spanMs };
+}
+
+/** Drags the pane in a circle for PAN_MS with a move every ~8 ms (a fast mouse), counting frames meanwhile. */
+async function pan(page: Page): Promise<FrameFigures> {
+  const start = await emptyPanePoint(page);
+  const figures = await countFrames(page, async () => {
+    await page.mouse.move(start.x, start.y);
+    await page.mouse.down();
+    const t0 = Date.now();
+    for (let t = 0; t < PAN_MS; t = Date.now() - t0) {
+      const angle = (2 * Math.PI * t) / 1500;
+      await page.mouse.move(start.x + 150 * Math.sin(angle), start.y + 100 * (1 - Math.cos(angle)));
+      await new Promise((r) => setTimeout(r, 8));
+    }
+    await page.mouse.up();
+  });
+  if (figures.viewportUpdatesPerS === 0) throw new Error("the drag did not move the canvas viewport: the pan measured nothing");
+  return figures;
+}
+
+/** The frame rate with the editor open and nothing happening: what the machine gives the page at rest. */
+const idle = (page: Page) => countFrames(page, () => new Promise((r) => setTimeout(r, IDLE_MS)));
+
+function report(loads: LoadFigures[], idles: FrameFigures[], pans: FrameFigures[]): void {
+  const ms = (v: number | null) => (v === null ? "no result" : `${Math.round(v)} ms`);
+  const results = loads.map((l) => l.resultMs);
+  const rows: [string, string, string, string][] = [
+    ["canvas ready (500 blocks shown)", ms(median(loads.map((l) => l.canvasMs))), loads.map((l) => ms(l.canvasMs)).join(", "), "< 2000 ms"],
+    ["result ready (closed loop shown)", results.includes(null) ? "no result" : ms(median(results as number[])), results.map(ms).join(", "), "< 2000 ms"],
+    ["idle frame rate (editor open, no input)", `${median(idles.map((p) => p.fps)).toFixed(1)} fps`, idles.map((p) => p.fps.toFixed(1)).join(", "), "—"],
+    ["pan frame rate", `${median(pans.map((p) => p.fps)).toFixed(1)} fps`, pans.map((p) => p.fps.toFixed(1)).join(", "), "≥ 50 fps"],
+    ["pan worst frame", `${Math.round(median(pans.map((p) => p.worstFrameMs)))} ms`, pans.map((p) => Math.round(p.worstFrameMs)).join(", "), "—"],
+    ["pan viewport updates", `${median(pans.map((p) => p.viewportUpdatesPerS)).toFixed(1)} /s`, pans.map((p) => p.viewportUpdatesPerS.toFixed(1)).join(", "), "—"],
+  ];
+  const w = [40, 12, 30];
+  console.log(`${"measure".padEnd(w[0])}  ${"median".padStart(w[1])}  ${"runs".padEnd(w[2])}  target`);
+  for (const [a, b, c, d] of rows) console.log(`${a.padEnd(w[0])}  ${b.padStart(w[1])}  ${c.padEnd(w[2])}  ${d}`);
+  console.log(`Engine status after each load: ${loads.map((l) => l.engineStatus).join(" | ")}`);
+  console.log("Loads are cold (fresh browser context, empty cache). Headless Chromium renders in software: figures are a floor.");
+}
+
+async function main(): Promise<void> {
+  const databaseUrl = process.env.BENCH_DATABASE_URL;
+  if (!databaseUrl) throw new Error("BENCH_DATABASE_URL is not set: run through `npm run bench editor`, which sets it");
+  const live = await startLiveServer(databaseUrl);
+  let browser: Browser | null = null;
+  try {
+    const { id, storageState } = await seedDiagram(live.baseUrl);
+    browser = await chromium.launch({ executablePath: "/usr/bin/chromium", args: CHROMIUM_ARGS });
+    const loads: LoadFigures[] = [];
+    const idles: FrameFigures[] = [];
+    const pans: FrameFigures[] = [];
+    for (let i = 0; i < RUNS; i++) {
+      const run = await load(browser, `${live.baseUrl}/diagrams/${id}`, storageState);
+      try {
+        loads.push(run.figures);
+        idles.push(await idle(run.page));
+        pans.push(await pan(run.page));
+      } finally {
+        await run.close();
+      }
+    }
+    console.log(`Editor with a ${BLOCKS}-block ladder, viewport ${VIEWPORT.width}×${VIEWPORT.height}, ${RUNS} runs, pans of ${PAN_MS / 1000} s`);
+    report(loads, idles, pans);
+  } finally {
+    await browser?.close();
+    await live.stop();
+  }
+}
+
+main().catch((e: Error) => {
+  console.error(`✗ editor benchmark failed: ${e.message}`);
+  process.exitCode = 1;
+});

@@ -1,0 +1,81 @@
+import { spawn, spawnSync, type ChildProcess } from "node:child_process";
+import { mkdtempSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+
+/**
+ * The real app for browser benchmarks: the production client built into a temporary folder, the server
+ * started on its own ports against the bench database, the database migrated first (bench mode does not
+ * migrate). `stop()` ends the server and removes the build; safe to call twice.
+ */
+export interface LiveServer {
+  baseUrl: string;
+  stop(): Promise<void>;
+}
+
+const PORT = 3300;
+const FAKE_MAIL_PORT = 2800;
+const bin = (name: string) => join("node_modules", ".bin", name);
+
+function runOrThrow(cmd: string, args: string[], what: string, env: NodeJS.ProcessEnv = process.env): void {
+  const r = spawnSync(cmd, args, { stdio: ["ignore", "inherit", "inherit"], env });
+  if (r.error) throw new Error(`${what}: ${r.error.message}`);
+  if (r.status !== 0) throw new Error(`${what} (exit ${r.status})`);
+}
+
+async function waitForHealth(url: string, server: ChildProcess, ms: number): Promise<void> {
+  const until = Date.now() + ms;
+  while (Date.now() < until) {
+    if (server.exitCode !== null) throw new Error(`the server exited (code ${server.exitCode}) before ${url} answered`);
+    try {
+      if ((await fetch(url)).ok) return;
+    } catch {
+      // not listening yet
+    }
+    await new Promise((r) => setTimeout(r, 250));
+  }
+  throw new Error(`${url} did not answer within ${ms / 1000} s`);
+}
+
+function stopChild(child: ChildProcess): Promise<void> {
+  if (child.exitCode !== null || child.signalCode !== null) return Promise.resolve();
+  return new Promise((done) => {
+    const force = setTimeout(() => child.kill("SIGKILL"), 5000);
+    child.once("exit", () => (clearTimeout(force), done()));
+    child.kill("SIGTERM");
+  });
+}
+
+/** Builds the client, migrates the database, starts the server and waits for /api/health. */
+export async function startLiveServer(databaseUrl: string): Promise<LiveServer> {
+  const clientDir = mkdtempSync(join(tmpdir(), "loopwright-bench-client-"));
+  const baseUrl = `http://127.0.0.1:${PORT}`;
+  let server: ChildProcess | null = null;
+  const stop = async () => {
+    if (server) await stopChild(server);
+    rmSync(clientDir, { recursive: true, force: true });
+  };
+  try {
+    runOrThrow(bin("vite"), ["build", "--outDir", clientDir, "--emptyOutDir", "--logLevel", "error"], "the client build failed");
+    runOrThrow(bin("tsx"), ["server/db/migrateCli.ts"], "migrating the bench database failed", { ...process.env, DATABASE_URL: databaseUrl });
+    server = spawn(bin("tsx"), ["server/main.ts"], {
+      stdio: ["ignore", "ignore", "inherit"],
+      env: {
+        ...process.env,
+        CLIENT_DIR: clientDir,
+        PORT: String(PORT),
+        FAKE_MAIL_PORT: String(FAKE_MAIL_PORT),
+        PUBLIC_URL: baseUrl,
+        NODE_ENV: "test",
+        LOG_LEVEL: "warn",
+        RATE_LIMIT_AUTH_PER_15_MIN: "10000",
+        DATABASE_URL: databaseUrl,
+      },
+    });
+    await waitForHealth(`${baseUrl}/api/health`, server, 60_000);
+    return { baseUrl, stop };
+  } catch (e) {
+    await stop();
+    throw e;
+  }
+}
