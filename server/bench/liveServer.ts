@@ -1,5 +1,6 @@
 import { spawn, spawnSync, type ChildProcess } from "node:child_process";
 import { mkdtempSync, rmSync } from "node:fs";
+import { connect } from "node:net";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 
@@ -37,6 +38,14 @@ async function waitForHealth(url: string, server: ChildProcess, ms: number): Pro
   throw new Error(`${url} did not answer within ${ms / 1000} s`);
 }
 
+/** Whether something already listens on the port (another run's server would answer our health check). */
+const portTaken = (port: number) =>
+  new Promise<boolean>((done) => {
+    const socket = connect({ host: "127.0.0.1", port });
+    socket.once("connect", () => (socket.destroy(), done(true)));
+    socket.once("error", () => done(false));
+  });
+
 function stopChild(child: ChildProcess): Promise<void> {
   if (child.exitCode !== null || child.signalCode !== null) return Promise.resolve();
   return new Promise((done) => {
@@ -48,10 +57,14 @@ function stopChild(child: ChildProcess): Promise<void> {
 
 /** Builds the client, migrates the database, starts the server and waits for /api/health. */
 export async function startLiveServer(databaseUrl: string): Promise<LiveServer> {
+  for (const port of [PORT, FAKE_MAIL_PORT])
+    if (await portTaken(port)) throw new Error(`port ${port} is already in use (another benchmark run?); stop that program first`);
   const clientDir = mkdtempSync(join(tmpdir(), "loopwright-bench-client-"));
   const baseUrl = `http://127.0.0.1:${PORT}`;
   let server: ChildProcess | null = null;
+  let stopping = false;
   const stop = async () => {
+    stopping = true;
     if (server) await stopChild(server);
     rmSync(clientDir, { recursive: true, force: true });
   };
@@ -71,6 +84,9 @@ export async function startLiveServer(databaseUrl: string): Promise<LiveServer> 
         RATE_LIMIT_AUTH_PER_15_MIN: "10000",
         DATABASE_URL: databaseUrl,
       },
+    });
+    server.once("exit", (code, signal) => {
+      if (!stopping) console.error(`✗ the bench server exited unexpectedly (code ${code}, signal ${signal})`);
     });
     await waitForHealth(`${baseUrl}/api/health`, server, 60_000);
     return { baseUrl, stop };
