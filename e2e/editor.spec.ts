@@ -11,9 +11,21 @@ const closedLoopText = (page: Page) => page.getByLabel("Closed-loop transfer fun
 /** The displayed result without spaces and explicit `*`, so K/(s^2 + 2*s + K) reads K/(s^2+2s+K). */
 const compact = async (page: Page) => ((await closedLoopText(page).textContent()) ?? "").replace(/[\s*]/g, "");
 
+/** Where a locator sits once it has stopped moving (fit view and zoom animate the canvas). */
+async function settledBox(locator: Locator) {
+  let last = await locator.boundingBox();
+  for (let i = 0; i < 50; i++) {
+    await new Promise((r) => setTimeout(r, 100));
+    const now = await locator.boundingBox();
+    if (now && last && now.x === last.x && now.y === last.y && now.width === last.width) return now;
+    last = now;
+  }
+  throw new Error("the canvas kept moving");
+}
+
 async function drag(page: Page, from: Locator, to: Locator) {
-  const a = (await from.boundingBox())!;
-  const b = (await to.boundingBox())!;
+  const a = await settledBox(from);
+  const b = await settledBox(to);
   await page.mouse.move(a.x + a.width / 2, a.y + a.height / 2);
   await page.mouse.down();
   await page.mouse.move(b.x + b.width / 2, b.y + b.height / 2, { steps: 12 });
