@@ -1,33 +1,12 @@
-import { spawn } from "node:child_process";
-import { mkdtempSync, writeFileSync } from "node:fs";
-import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import { analysisResultSchema } from "@shared/analysis/schema";
 import { makeDoc } from "../support/docBuilder";
+import { runCli, tempFiles, SPAWN_TIMEOUT, STACK_TRACE } from "../support/cliRun";
 
 // The `analyze` command as teams' CI calls it: a real process (node + tsx), stdout, stderr and exit status.
-const TSX = join(process.cwd(), "node_modules", ".bin", "tsx");
-const dir = mkdtempSync(join(tmpdir(), "loopwright-analyze-"));
-const SPAWN_TIMEOUT = 120_000;
-const STACK_TRACE = /\n\s+at .+:\d+:\d+/;
-
-function analyze(...args: string[]): Promise<{ code: number | null; stdout: string; stderr: string }> {
-  return new Promise((resolve, reject) => {
-    const child = spawn(TSX, ["server/cli/analyze.ts", ...args], { cwd: process.cwd() });
-    let [stdout, stderr] = ["", ""];
-    child.stdout.on("data", (d: Buffer) => (stdout += d.toString()));
-    child.stderr.on("data", (d: Buffer) => (stderr += d.toString()));
-    child.on("error", reject);
-    child.on("close", (code) => resolve({ code, stdout, stderr }));
-  });
-}
-
-function file(name: string, content: unknown): string {
-  const path = join(dir, name);
-  writeFileSync(path, typeof content === "string" ? content : JSON.stringify(content));
-  return path;
-}
+const analyze = (...args: string[]) => runCli("analyze", ...args);
+const { dir, file } = tempFiles("loopwright-analyze-");
 
 // Unity negative feedback around 2/(s+1)^3: closed forms for the margins (see the margins tests).
 const loop = makeDoc(

@@ -1,47 +1,18 @@
-import { spawn } from "node:child_process";
-import { mkdirSync, mkdtempSync, writeFileSync } from "node:fs";
-import { tmpdir } from "node:os";
+import { mkdirSync } from "node:fs";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import { reductionResultSchema } from "@shared/reduce/result";
 import { cClose, cx } from "../support/complex";
 import { evalExpr } from "../support/evalExpr";
 import { makeDoc } from "../support/docBuilder";
+import { runCli, tempFiles, type CliRun, SPAWN_TIMEOUT, STACK_TRACE } from "../support/cliRun";
 import { evalTransfer } from "../support/ours";
 import { TEXTBOOK_CASES } from "../support/textbookDiagrams";
 
 // The `reduce` command as teams' CI calls it: a real process (node + tsx), checking stdout, stderr and
 // the exit status of each documented case.
-const TSX = join(process.cwd(), "node_modules", ".bin", "tsx");
-const dir = mkdtempSync(join(tmpdir(), "loopwright-cli-"));
-
-interface Run {
-  code: number | null;
-  stdout: string;
-  stderr: string;
-}
-
-function reduce(...args: string[]): Promise<Run> {
-  return new Promise((resolve, reject) => {
-    const child = spawn(TSX, ["server/cli/reduce.ts", ...args], { cwd: process.cwd() });
-    let stdout = "";
-    let stderr = "";
-    child.stdout.on("data", (d: Buffer) => (stdout += d.toString()));
-    child.stderr.on("data", (d: Buffer) => (stderr += d.toString()));
-    child.on("error", reject);
-    child.on("close", (code) => resolve({ code, stdout, stderr }));
-  });
-}
-
-function file(name: string, content: unknown): string {
-  const path = join(dir, name);
-  writeFileSync(path, typeof content === "string" ? content : JSON.stringify(content, null, 2));
-  return path;
-}
-
-// Each case starts node + tsx (about a second, much more on a busy machine).
-const SPAWN_TIMEOUT = 120_000;
-const STACK_TRACE = /\n\s+at .+:\d+:\d+/;
+const reduce = (...args: string[]) => runCli("reduce", ...args);
+const { dir, file } = tempFiles("loopwright-cli-");
 const USAGE = "usage: reduce FILE.json";
 
 // The example document of the diagram format (spindle speed loop).
@@ -129,7 +100,7 @@ describe("reduce CLI: success", { timeout: SPAWN_TIMEOUT }, () => {
 });
 
 describe("reduce CLI: the file's content is wrong → exit 1, messages on stderr, no stack trace", { timeout: SPAWN_TIMEOUT }, () => {
-  const expectContentError = (run: Run, ...fragments: string[]) => {
+  const expectContentError = (run: CliRun, ...fragments: string[]) => {
     expect(run.code).toBe(1);
     expect(run.stdout).toBe("");
     for (const f of fragments) expect(run.stderr).toContain(f);
@@ -198,7 +169,7 @@ describe("reduce CLI: the file's content is wrong → exit 1, messages on stderr
 });
 
 describe("reduce CLI: the command line is wrong → exit 2 with a usage line", { timeout: SPAWN_TIMEOUT }, () => {
-  const expectUsageError = (run: Run, fragment: string) => {
+  const expectUsageError = (run: CliRun, fragment: string) => {
     expect(run.code).toBe(2);
     expect(run.stdout).toBe("");
     expect(run.stderr).toContain(fragment);
