@@ -253,7 +253,9 @@ test("a viewer sees the same diagram and its result but cannot change it", async
   await viewer.getByLabel("Name").fill("Vik Viewer");
   await viewer.getByLabel("Password").fill(PASSWORD);
   await viewer.getByRole("button", { name: `Create account and join ${teamName}` }).click();
-  await expect(viewer.getByRole("heading", { level: 1, name: teamName })).toBeVisible();
+  // Joined once the team page shows (the invitation page's own heading also names the team).
+  await expect(viewer).toHaveURL(new RegExp(`/teams/${teamId}$`));
+  await expect(viewer.getByRole("heading", { level: 1, name: teamName, exact: true })).toBeVisible();
 
   await openEditor(viewer, diagramPath);
   await expect(block(viewer, "Transfer function G1")).toBeVisible();
