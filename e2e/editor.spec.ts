@@ -113,10 +113,15 @@ test("draws unity negative feedback around K/(s(s+2)), steps through it, saves, 
   await expect.poll(() => compact(page)).toBe("K/(s^2+2s+K)");
 
   // Signs: flipping the feedback sign on the junction itself gives positive feedback, K/(s^2+2s-K).
-  await page.getByRole("button", { name: "Sign of port 1 of e1: minus. Flip it" }).click();
+  // (A click that lands while the panels below the canvas re-lay out can miss the small sign: try again then.)
+  const minus = page.getByRole("button", { name: "Sign of port 1 of e1: minus. Flip it" });
+  const plus = page.getByRole("button", { name: "Sign of port 1 of e1: plus. Flip it" });
+  await expect(async () => {
+    if (await minus.isVisible()) await minus.click();
+    await expect(plus).toBeVisible({ timeout: 2_000 });
+  }).toPass({ timeout: 20_000 });
   // from memory: Ogata, Modern Control Engineering — positive feedback gives G/(1−G).
   await expect.poll(() => compact(page)).toBe("K/(s^2+2s-K)");
-  await expect(page.getByRole("button", { name: "Sign of port 1 of e1: plus. Flip it" })).toBeVisible();
 
   // Undo and redo with the keyboard.
   await page.keyboard.press("Control+z");
