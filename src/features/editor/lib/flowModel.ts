@@ -19,6 +19,8 @@ export type FlowNode = { [T in BlockType]: NodeOf<T> }[BlockType];
 export interface SignalEdgeData extends Record<string, unknown> {
   highlighted: boolean;
   problem: Severity | null;
+  /** The loop is broken here for margins and the Nyquist plot. */
+  isBreak: boolean;
   /** Side of the target block the wire enters. */
   side: Side;
 }
@@ -30,6 +32,8 @@ export interface Marks {
   highlightWires: ReadonlySet<string>;
   blockProblems: ReadonlyMap<string, Severity>;
   wireProblems: ReadonlyMap<string, Severity>;
+  /** Wire id where the analysis breaks the loop, if any. */
+  breakWire: string | null;
 }
 
 export const TYPE_NAME: Record<BlockType, string> = {
@@ -98,7 +102,7 @@ export function buildEdges(doc: EditorDoc, marks: Marks, selection: Selection): 
       sourceHandle: OUT_HANDLE,
       targetHandle: inHandle(target?.type === "sum" ? w.port : undefined),
       selected: selected.has(w.id),
-      data: { highlighted, problem: marks.wireProblems.get(w.id) ?? null, side },
+      data: { highlighted, problem: marks.wireProblems.get(w.id) ?? null, isBreak: marks.breakWire === w.id, side },
       ariaLabel: wireAriaLabel(w, target),
       domAttributes: stepAttrs(highlighted),
     };

@@ -27,8 +27,8 @@ export function stepFootprint(steps: ReductionStep[], index: number): { blocks: 
   return { blocks, wires };
 }
 
-/** Canvas marks: what the current reduction step consumed, and the worst problem on each block and wire. */
-export function problemMarks(problems: Problem[], step: { blocks: Set<string>; wires: Set<string> } | null): Marks {
+/** Canvas marks: what the current reduction step consumed, the worst problem on each block and wire, the break wire. */
+export function problemMarks(problems: Problem[], step: { blocks: Set<string>; wires: Set<string> } | null, breakWire: string | null = null): Marks {
   const blockProblems = new Map<string, Severity>();
   const wireProblems = new Map<string, Severity>();
   for (const p of problems) {
@@ -40,5 +40,6 @@ export function problemMarks(problems: Problem[], step: { blocks: Set<string>; w
     highlightWires: step?.wires ?? new Set(),
     blockProblems,
     wireProblems,
+    breakWire,
   };
 }
