@@ -1,5 +1,5 @@
 import { NavLink, useParams } from "react-router-dom";
-import { useDiagram } from "@/features/diagrams/api/getDiagram";
+import { useEditorDiagram } from "@/features/editor/api/getEditorDiagram";
 import { useTeam } from "@/features/teams/api/getTeam";
 import { href } from "@/lib/paths";
 
@@ -8,7 +8,7 @@ const link = "rounded px-2 py-1 text-ink-soft hover:bg-paper-sunk hover:text-ink
 /** The current team's name and its pages; the team comes from the URL, or from the open diagram. */
 export function TeamNav() {
   const params = useParams();
-  const diagram = useDiagram(params.teamId ? undefined : params.id);
+  const diagram = useEditorDiagram(params.teamId ? undefined : params.id);
   const teamId = params.teamId ?? diagram.data?.diagram.teamId;
   if (!teamId) return null;
   return <CurrentTeam teamId={teamId} />;
