@@ -1,4 +1,4 @@
-import { useCallback, useMemo, useRef, useState } from "react";
+import { lazy, Suspense, useCallback, useMemo, useRef, useState } from "react";
 import { useReactFlow } from "@xyflow/react";
 import type { DiagramDetail, DiagramVersionView } from "@shared/api/diagrams";
 import type { Problem } from "@shared/diagram/problems";
@@ -23,11 +23,15 @@ import { useCanvasCommands } from "@/features/editor/hooks/useCanvasCommands";
 import { useDraft } from "@/features/editor/hooks/useDraft";
 import { useEditorHistory } from "@/features/editor/hooks/useEditorHistory";
 import { useFlowState } from "@/features/editor/hooks/useFlowState";
+import { useLiveAnalysis, type AnalysisSettings } from "@/features/editor/hooks/useLiveAnalysis";
 import { useLiveResult } from "@/features/editor/hooks/useLiveResult";
 import { useSaveFlow } from "@/features/editor/hooks/useSaveFlow";
 import { useUnsavedGuard } from "@/features/editor/hooks/useUnsavedGuard";
 import { problemMarks, stepFootprint } from "@/features/editor/lib/marks";
 import { resultView } from "@/features/editor/lib/resultView";
+
+// The analysis views carry the charting library: a chunk of their own, loaded after the canvas.
+const AnalysisPanel = lazy(() => import("@/features/editor/components/analysis/AnalysisPanel").then((m) => ({ default: m.AnalysisPanel })));
 
 interface Props {
   diagram: DiagramDetail["diagram"];
@@ -60,7 +64,12 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
   const [stepAt, setStepAt] = useState<number | null>(null);
   const step = stepAt === null ? null : (view.steps[stepAt] ?? null);
   const footprint = useMemo(() => (step && stepAt !== null ? stepFootprint(view.steps, stepAt) : null), [step, stepAt, view.steps]);
-  const marks = useMemo(() => problemMarks(view.problems, footprint), [view.problems, footprint]);
+  // Slider values, band, swept parameter and break live here, not in the document: analysing never dirties it.
+  const [analysisSettings, setAnalysisSettings] = useState<AnalysisSettings>({ values: {}, band: 0.02, sweepParameter: null, break: null });
+  const changeAnalysis = useCallback((change: Partial<AnalysisSettings>) => setAnalysisSettings((s) => ({ ...s, ...change })), []);
+  const analysis = useLiveAnalysis(doc, { ...analysisSettings, input: view.transfer?.input ?? null, output: view.transfer?.output ?? null });
+  const usedBreak = analysis.result?.breakWire ?? null;
+  const marks = useMemo(() => problemMarks(view.problems, footprint, usedBreak?.id ?? null), [view.problems, footprint, usedBreak?.id]);
 
   const selectRef = useRef<(s: Selection) => void>(() => {});
   const act = useCallback<Act>(
@@ -199,7 +208,12 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
           <CanvasNotice notice={notice} onDone={clearNotice} />
         </div>
         <aside aria-label="Properties" className="overflow-y-auto border-l border-rule bg-paper-raised p-4">
-          <PropertiesPanel doc={doc} selection={selection} firstFieldRef={firstField} />
+          <PropertiesPanel
+            doc={doc}
+            selection={selection}
+            firstFieldRef={firstField}
+            analysisBreak={{ used: usedBreak, chosen: analysisSettings.break, onBreak: (id) => changeAnalysis({ break: id }) }}
+          />
         </aside>
       </div>
       <div className="mt-4 grid gap-4 lg:grid-cols-3">
@@ -215,6 +229,13 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
           ) : (
             <p className="text-sm text-ink-soft">Checking the diagram…</p>
           )}
+        </Panel>
+      </div>
+      <div className="mt-4">
+        <Panel title="Analysis">
+          <Suspense fallback={<p className="text-sm text-ink-soft">Loading the analysis…</p>}>
+            <AnalysisPanel live={analysis} settings={analysisSettings} onSettings={changeAnalysis} onPickProblem={pickProblem} />
+          </Suspense>
         </Panel>
       </div>
       <div className="mt-4">

@@ -34,7 +34,7 @@ export function useLiveResult(doc: EditorDoc): LiveResult {
                 crash: "crash" in r.reply ? r.reply.crash : null,
                 pending: r.waiting,
                 ms: r.reply.ms,
-                doc: r.doc,
+                doc: r.payload,
               },
         ),
     );

@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
 import type { EditorDoc } from "@/features/editor/commands/types";
 import type { ReduceRequest } from "@/features/editor/worker/protocol";
-import { ReduceChannel, RUNAWAY_MS, type ChannelResult } from "@/features/editor/worker/reduceChannel";
+import { ReduceChannel, type ChannelResult } from "@/features/editor/worker/reduceChannel";
+import { RUNAWAY_MS } from "@/features/editor/worker/workerChannel";
 import { unityLoop } from "../support";
 
 /** Stands in for a Web Worker: records requests; the test answers them. */
@@ -49,10 +50,10 @@ describe("reduction worker channel (common practice: latest-wins queue for live 
     expect(workers).toHaveLength(1);
     expect(workers[0].sent.map((m) => m.document)).toEqual([a]);
     workers[0].answer(1);
-    expect(results).toEqual([{ reply: expect.objectContaining({ seq: 1 }), doc: a, waiting: true }]);
+    expect(results).toEqual([{ reply: expect.objectContaining({ seq: 1 }), payload: a, waiting: true }]);
     expect(workers[0].sent.map((m) => m.document)).toEqual([a, c]);
     workers[0].answer(2);
-    expect(results[1]).toMatchObject({ doc: c, waiting: false });
+    expect(results[1]).toMatchObject({ payload: c, waiting: false });
   });
 
   it("abandons a runaway reduction for a newer document, and ignores the stale answer", () => {
@@ -66,7 +67,7 @@ describe("reduction worker channel (common practice: latest-wins queue for live 
     workers[0].answer(1);
     expect(results).toEqual([]);
     workers[1].answer(2);
-    expect(results).toMatchObject([{ doc: b, waiting: false }]);
+    expect(results).toMatchObject([{ payload: b, waiting: false }]);
   });
 
   it("reports a worker that fails to start", () => {

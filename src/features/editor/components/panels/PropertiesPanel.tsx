@@ -4,20 +4,24 @@ import { setLabel } from "@/features/editor/commands/blocks";
 import { deleteSelection, duplicate } from "@/features/editor/commands/selection";
 import type { EditorDoc, Selection } from "@/features/editor/commands/types";
 import { useEditorActions } from "@/features/editor/components/EditorContext";
+import { BreakHere } from "@/features/editor/components/analysis/BreakPicker";
 import { Connections } from "@/features/editor/components/panels/Connections";
 import { ExpressionField } from "@/features/editor/components/panels/ExpressionField";
 import { SumPorts } from "@/features/editor/components/panels/SumPorts";
 import { TYPE_NAME, wireAriaLabel } from "@/features/editor/lib/flowModel";
+import type { BreakWire } from "@/features/editor/worker/analysisProtocol";
 
 interface Props {
   doc: EditorDoc;
   selection: Selection;
   /** Receives the first field of the selected block, so Enter on the canvas can focus it. */
   firstFieldRef: Ref<HTMLInputElement>;
+  /** The analysis' break point: the wire it used, the one chosen, and how to choose one. */
+  analysisBreak: { used: BreakWire | null; chosen: string | null; onBreak: (wireId: string | null) => void };
 }
 
 /** What the selection is and everything that can be changed about it. */
-export function PropertiesPanel({ doc, selection, firstFieldRef }: Props) {
+export function PropertiesPanel({ doc, selection, firstFieldRef, analysisBreak }: Props) {
   const { act, readOnly } = useEditorActions();
   const labelId = useId();
   const { blocks, wires } = selection;
@@ -55,6 +59,7 @@ export function PropertiesPanel({ doc, selection, firstFieldRef }: Props) {
       <div className="flex flex-col gap-3 text-sm">
         <h3 className="font-medium">Wire {wire.id}</h3>
         <p className="text-ink-soft">{wireAriaLabel(wire, doc.blocks.find((b) => b.id === wire.to))}.</p>
+        <BreakHere wireId={wire.id} {...analysisBreak} />
         {!readOnly && (
           <Button size="sm" variant="danger" onClick={() => act("Delete wire", (d) => deleteSelection(d, selection))}>
             Delete wire

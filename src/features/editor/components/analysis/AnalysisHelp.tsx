@@ -1,0 +1,126 @@
+import { useId, type ReactNode } from "react";
+import { Tex } from "@/features/editor/components/Tex";
+
+/** One defined term: its name and what the analysis means by it. */
+const TERMS: { term: string; body: ReactNode }[] = [
+  {
+    term: "Which transfer function",
+    body: (
+      <>
+        Poles, zeros and the stability verdict belong to the chosen pair&apos;s transfer function T(s) in lowest terms: common factors
+        of numerator and denominator are cancelled first. A mode cancelled during the reduction is listed as a hidden mode, not as a
+        pole; an unstable hidden mode makes the loop internally unstable even when T(s) looks stable. Without a choice, the pair is the
+        first input block and the first output block in the order the document lists its blocks.
+      </>
+    ),
+  },
+  {
+    term: "Stable, marginal, unstable",
+    body: (
+      <>
+        Decided exactly on the rational coefficients, not with a rounding tolerance. Stable: every pole has a negative real part.
+        Marginal: the poles on the imaginary axis (s = 0 included) are all simple and none lies to the right of it. Unstable: a pole
+        in the right half-plane, or a repeated pole on the imaginary axis.
+      </>
+    ),
+  },
+  {
+    term: "DC gain",
+    body: <>T(0), whenever s = 0 is not a pole, unstable systems included; otherwise there is none.</>,
+  },
+  {
+    term: "Step metrics",
+    body: (
+      <>
+        Taken on the unit step response y(t), and only for a stable, proper T(s) with T(0) ≠ 0 (otherwise the panel says which of
+        these fails). With a negative final value they are read on y(t)/T(0). Final value: T(0). Rise time: from the first time the
+        response reaches 10 % of the final value to the first time it reaches 90 %. Peak time: the first time y(t)/T(0) reaches its
+        global maximum; without overshoot there is none. Overshoot: how far that maximum exceeds 1, in percent; 0 when it never does.
+        Settling time: the last time the response leaves the band of ±2 % around the final value (1 % and 5 % can be chosen).
+      </>
+    ),
+  },
+  {
+    term: "Loop gain at a break",
+    body: (
+      <>
+        Cut the chosen wire, inject a signal u at its destination side (through that port&apos;s sign), read w at its source side, and
+        keep every other loop closed: <Tex latex="L(s) = -w/u" />. Unity negative feedback around G gives L = G. By default the break
+        is the wire into the minus-signed port of the first summing junction the chosen input reaches; when there is none, the panel
+        shows no margins and asks for a wire to break.
+      </>
+    ),
+  },
+  {
+    term: "Crossovers and margins",
+    body: (
+      <>
+        Crossovers are at finite ω &gt; 0, in rad/s. At a gain crossover |L(jω)| = 1; the phase margin there is 180° + ∠L(jω), brought
+        into (−180°, 180°]. At a phase crossover L(jω) is real and negative; the gain margin there is −20 log₁₀|L(jω)| dB. With several
+        crossovers, the one with the smallest |margin| is reported; with none, that margin is infinite. Margins are reported, negative
+        if need be, even when the closed loop is unstable.
+      </>
+    ),
+  },
+  {
+    term: "Delay margin, sensitivity peak, bandwidth",
+    body: (
+      <>
+        Delay margin: the smallest extra delay in the loop that turns a gain crossover to −180°, the phase margin (taken in [0°, 360°),
+        in radians) divided by that crossover&apos;s ω; defined only when the closed loop is stable. Sensitivity peak:{" "}
+        <Tex latex="M_s = \max_\omega \left| 1/(1 + L(j\omega)) \right|" />, the inverse of the closest approach of the Nyquist curve to
+        −1. Closed-loop bandwidth: the first ω where |T(jω)| falls to |T(0)|/√2.
+      </>
+    ),
+  },
+  {
+    term: "Nyquist criterion",
+    body: (
+      <>
+        s runs up the imaginary axis, passing to the right of any pole on it along a small half-circle, and returns along a large
+        half-circle in the right half-plane. N counts the clockwise encirclements of −1 by L(s) along that path, P the poles of L in
+        the right half-plane; then Z = N + P closed-loop poles lie in the right half-plane, and the loop is stable exactly when Z = 0.
+        When L has poles in the right half-plane, or the loop is conditionally stable, negative margins alone do not mean instability.
+      </>
+    ),
+  },
+  {
+    term: "Routh array",
+    body: (
+      <>
+        The number of sign changes down the first column is the number of roots in the right half-plane. A row that starts with 0 but
+        is not all zero: the 0 becomes a small ε &gt; 0 and the signs are read as ε → 0⁺. A row that is all zero: the row above gives the
+        auxiliary polynomial A(s), whose roots are symmetric about the origin and are roots of the polynomial too; the zero row is
+        replaced by the coefficients of dA/ds.
+      </>
+    ),
+  },
+  {
+    term: "Final value theorem",
+    body: (
+      <>
+        <Tex latex="\lim_{t\to\infty} y(t) = \lim_{s\to 0} sY(s)" /> holds only when every pole of sY(s) lies in the open left
+        half-plane; otherwise the panel does not apply it and says why. Steady-state errors are those of e = (pair input) − (pair
+        output); system type and the error constants Kp, Kv, Ka come from the loop gain at the break.
+      </>
+    ),
+  },
+];
+
+/** The definitions every figure of the analysis follows (the panel itself shows the caution about the model). */
+export function AnalysisHelp() {
+  const headingId = useId();
+  return (
+    <section aria-labelledby={headingId} className="flex flex-col gap-2 text-sm">
+      <h3 id={headingId} className="font-semibold">Definitions the analysis follows</h3>
+      <dl className="flex flex-col gap-2">
+        {TERMS.map((t) => (
+          <div key={t.term}>
+            <dt className="font-medium">{t.term}</dt>
+            <dd className="text-ink-soft">{t.body}</dd>
+          </div>
+        ))}
+      </dl>
+    </section>
+  );
+}

@@ -1,0 +1,135 @@
+import type { Analysis } from "@shared/analysis/analyze";
+import type { Quantity } from "@shared/analysis/steadyState";
+import { Tex } from "@/features/editor/components/Tex";
+import { formatQuantity } from "@/features/editor/lib/analysisFormat";
+
+const TH = "border-b border-rule-strong px-2 py-1 text-left font-medium text-ink-soft";
+const TD = "border-b border-rule px-2 py-1 align-top";
+
+const INPUTS = [
+  { key: "step", name: "Unit step", signal: "r(t) = 1" },
+  { key: "ramp", name: "Unit ramp", signal: "r(t) = t" },
+  { key: "parabola", name: "Unit parabola", signal: "r(t) = t²/2" },
+] as const;
+
+/** The value in monospace (∞ and "—" included, never blank) with the note that says where it came from. */
+function Value({ q }: { q: Quantity }) {
+  const missing = q.value === null;
+  return (
+    <>
+      <span className={`font-mono ${missing ? "text-ink-faint" : ""}`}>{formatQuantity(q)}</span>
+      {q.note && <span className="block text-xs text-ink-soft">{q.note}</span>}
+    </>
+  );
+}
+
+/** Final and initial values, steady-state errors, system type and error constants of the chosen pair. */
+export function SteadyStateView({ analysis }: { analysis: Analysis }) {
+  const ss = analysis.steadyState;
+  return (
+    <div className="flex flex-col gap-4 text-sm">
+      <dl className="grid grid-cols-[max-content_1fr] gap-x-4 gap-y-2">
+        <dt className="font-semibold">Final value of the step response</dt>
+        <dd>
+          <Value q={ss.finalValue} />
+        </dd>
+        <dt className="font-semibold">Initial value of the step response</dt>
+        <dd>
+          <Value q={ss.initialValue} />
+        </dd>
+      </dl>
+      <div className="overflow-x-auto">
+        <table className="w-full border-collapse">
+          <caption className="pb-1 text-left font-semibold">
+            Steady-state error e = r − y (input {analysis.input}, output {analysis.output})
+          </caption>
+          <thead>
+            <tr>
+              <th scope="col" className={TH}>Input</th>
+              <th scope="col" className={TH}>Steady-state error</th>
+            </tr>
+          </thead>
+          <tbody>
+            {INPUTS.map((i) => (
+              <tr key={i.key}>
+                <th scope="row" className={`${TD} text-left font-normal`}>
+                  {i.name} <span className="font-mono text-xs text-ink-soft">{i.signal}</span>
+                </th>
+                <td className={TD}>
+                  <Value q={ss.errors[i.key]} />
+                </td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+      <LoopConstants analysis={analysis} />
+    </div>
+  );
+}
+
+function LoopConstants({ analysis }: { analysis: Analysis }) {
+  const { steadyState: ss, loop } = analysis;
+  if (ss.constants === null || ss.systemType === null) {
+    return (
+      <section aria-label="System type and error constants">
+        <h4 className="font-semibold">System type and error constants</h4>
+        <p className="text-ink-soft">
+          There is no loop gain for this pair (no feedback loop was broken), so the system type and the error constants Kp, Kv and Ka do not apply.
+        </p>
+      </section>
+    );
+  }
+  const fromConstants = ss.errorsFromConstants;
+  const rows = [
+    { name: "Kp", what: "position", k: ss.constants.Kp, error: fromConstants?.step, formula: "1/(1 + Kp)" },
+    { name: "Kv", what: "velocity", k: ss.constants.Kv, error: fromConstants?.ramp, formula: "1/Kv" },
+    { name: "Ka", what: "acceleration", k: ss.constants.Ka, error: fromConstants?.parabola, formula: "1/Ka" },
+  ];
+  return (
+    <section aria-label="System type and error constants" className="flex flex-col gap-2">
+      <h4 className="font-semibold">System type and error constants</h4>
+      {loop && (
+        <p className="text-ink-soft">
+          From the loop gain broken at <span className="font-mono text-ink">{loop.breakPoint.label}</span>:{" "}
+          <Tex latex={`L(s) = ${loop.L.latex}`} />
+        </p>
+      )}
+      <p>
+        System type: <span className="font-mono font-semibold">{ss.systemType}</span>{" "}
+        <span className="text-ink-soft">(poles of L(s) at s = 0, net of zeros there)</span>
+      </p>
+      <div className="overflow-x-auto">
+        <table className="w-full border-collapse">
+          <caption className="pb-1 text-left font-semibold">Error constants and the errors they give</caption>
+          <thead>
+            <tr>
+              <th scope="col" className={TH}>Constant</th>
+              <th scope="col" className={TH}>Value</th>
+              <th scope="col" className={TH}>Unity-feedback error</th>
+            </tr>
+          </thead>
+          <tbody>
+            {rows.map((r) => (
+              <tr key={r.name}>
+                <th scope="row" className={`${TD} text-left font-normal`}>
+                  <span className="font-mono">{r.name}</span> <span className="text-xs text-ink-soft">({r.what})</span>
+                </th>
+                <td className={TD}>
+                  <Value q={r.k} />
+                </td>
+                <td className={TD}>
+                  <span className="block text-xs text-ink-soft">{r.formula}</span>
+                  {r.error && <Value q={r.error} />}
+                </td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+      <p className="text-xs text-ink-soft">
+        The errors from the constants assume unity feedback with the input at the reference; the table above is the exact error e = r − y of this pair.
+      </p>
+    </section>
+  );
+}

@@ -1,0 +1,53 @@
+import type { Analysis } from "@shared/analysis/analyze";
+import type { RootLocus } from "@shared/analysis/sweep";
+import type { Problem } from "@shared/diagram/problems";
+
+/** What the sweep tab draws for one parameter: the root locus over its range and step responses across it. */
+export interface SweepData {
+  parameter: string;
+  range: [number, number];
+  locus: RootLocus;                                  // closed-loop poles over the range, others at the slider values
+  overlay: { value: number; points: [number, number][] }[]; // step responses at 5 values across the range
+  current: number;                                   // the slider value now
+}
+
+/** What the analysis is asked for: the pair, the break, parameter values and the swept parameter. */
+export interface AnalysisQuery {
+  document: unknown;
+  /** Input and output block ids of the pair; null: the first input and the first output. */
+  input: string | null;
+  output: string | null;
+  /** Wire id where the loop is broken for margins; null: the default break. */
+  break: string | null;
+  /** Slider values; parameters not named here take their nominal value. */
+  values: Record<string, number>;
+  /** Settling band as a fraction (0.02 = 2 %). */
+  settlingBand: number;
+  /** Parameter of the sweep tab; null: the first parameter. */
+  sweepParameter: string | null;
+}
+
+export type AnalysisRequest = AnalysisQuery & { seq: number };
+
+/** One row of the slider table: the parameter table's nominal value, range, unit and description. */
+export interface ParameterInfo {
+  name: string;
+  nominal: number;
+  range: [number, number];
+  unit?: string;
+  description?: string;
+}
+
+/** The wire the loop was broken at: "given" by the user or found by the default rule. */
+export interface BreakWire {
+  id: string;
+  chosen: "given" | "default";
+}
+
+export type AnalysisAnswer =
+  | { ok: true; analysis: Analysis; parameters: ParameterInfo[]; sweep: SweepData | null; breakWire: BreakWire | null }
+  /** `parameters` is empty when the document itself could not be prepared. */
+  | { ok: false; problems: Problem[]; parameters: ParameterInfo[] };
+
+/** The worker's answer to request `seq`, or the message of an unexpected crash. */
+export type AnalysisReply = (AnalysisAnswer & { seq: number; ms: number }) | { seq: number; ms: number; crash: string };

@@ -1,0 +1,143 @@
+// The analysis worker's work, as a pure function with a small cache so a slider move skips the symbolic part:
+// prepareAnalysis runs once per (document, pair, break); stable ranges, the root locus and the step overlay
+// are kept for as long as the values they depend on stay the same.
+import { AlgebraError } from "@shared/algebra/errors";
+import { polyParams } from "@shared/algebra/poly";
+import { ratDenominator } from "@shared/algebra/ratfn";
+import { analyzeAt, type Analysis } from "@shared/analysis/analyze";
+import { AnalysisError } from "@shared/analysis/errors";
+import { prepareAnalysis, type Prepared, type PreparedAnalysis } from "@shared/analysis/prepare";
+import { stableSet, type StableSet } from "@shared/analysis/stableSet";
+import { parameterRange, rootLocus, stepOverlay, sweepValues } from "@shared/analysis/sweep";
+import type { Problem } from "@shared/diagram/problems";
+import type { AnalysisAnswer, AnalysisQuery, BreakWire, ParameterInfo, SweepData } from "@/features/editor/worker/analysisProtocol";
+
+/** Points of the root locus and step responses in the overlay. */
+export const LOCUS_POINTS = 200;
+export const OVERLAY_VALUES = 5;
+/** Entries kept per cache before it is emptied (a slider drag visits many values). */
+const CACHE_LIMIT = 64;
+
+/**
+ * What the symbolic preparation depends on: the diagram's blocks, wires and parameter table, the pair and
+ * the break — not the layout, title or notes, so moving a block on the canvas reuses the preparation.
+ */
+export function analysisKey(document: unknown, input: string | null, output: string | null, brk: string | null): string {
+  const d = (document ?? {}) as Record<string, unknown>;
+  return JSON.stringify([d.format, d.version, d.blocks, d.wires, d.parameters, input, output, brk]);
+}
+
+const hasWire = (document: unknown, id: string): boolean => {
+  const wires = (document as { wires?: unknown })?.wires;
+  return Array.isArray(wires) && wires.some((w) => (w as { id?: unknown })?.id === id);
+};
+
+/** The same mapping analyzeDocument makes: a bad parameter value points at its row of the parameter table. */
+function problemOf(err: AnalysisError | AlgebraError): Problem {
+  const subject = err instanceof AnalysisError && err.code === "bad-value" && err.subject ? { field: `parameters.${err.subject}` } : {};
+  return { severity: "error", code: err.code, message: err.message, ...subject };
+}
+
+function parameterInfo(p: PreparedAnalysis): ParameterInfo[] {
+  return p.parameters.map((name) => {
+    const spec = (p.doc.parameters ?? {})[name];
+    const info: ParameterInfo = { name, nominal: p.nominal[name], range: parameterRange(p.doc, name) };
+    if (typeof spec === "object" && spec.unit) info.unit = spec.unit;
+    if (typeof spec === "object" && spec.description) info.description = spec.description;
+    return info;
+  });
+}
+
+/** Values of every parameter except `name`, as a cache key. */
+const othersKey = (values: Record<string, number>, name: string) =>
+  JSON.stringify(Object.entries(values).filter(([k]) => k !== name).sort(([a], [b]) => (a < b ? -1 : 1)));
+
+class Cache<T> {
+  private readonly map = new Map<string, T>();
+  get(key: string, make: () => T): T {
+    const hit = this.map.get(key);
+    if (hit !== undefined) return hit;
+    if (this.map.size >= CACHE_LIMIT) this.map.clear();
+    const made = make();
+    this.map.set(key, made);
+    return made;
+  }
+  clear() {
+    this.map.clear();
+  }
+}
+
+/** A stateful analyser: call it with each query; it remembers the last preparation and what hangs off it. */
+export function createAnalyzer(): (q: AnalysisQuery) => AnalysisAnswer {
+  let key: string | null = null;
+  let prepared: Prepared | null = null;
+  let conditions: string[] | null = null;
+  const sets = new Cache<StableSet>();
+  const sweeps = new Cache<Omit<SweepData, "current">>();
+
+  return (q) => {
+    const notes: string[] = [];
+    let brk = q.break;
+    if (brk !== null && !hasWire(q.document, brk)) {
+      notes.push(`The chosen break wire ${brk} is no longer in the diagram: the loop is broken at the default wire instead.`);
+      brk = null;
+    }
+    const k = analysisKey(q.document, q.input, q.output, brk);
+    const fresh = k !== key;
+    if (fresh) {
+      key = null; // set again only once the preparation has not thrown
+      sets.clear();
+      sweeps.clear();
+      prepared = prepareAnalysis(q.document, { input: q.input ?? undefined, output: q.output ?? undefined, break: brk ?? undefined });
+      key = k;
+    }
+    if (!prepared?.ok) return { ok: false, problems: prepared?.problems ?? [], parameters: [] };
+    const p = prepared.prepared;
+    const values = Object.fromEntries(Object.entries(q.values).filter(([name, v]) => p.parameters.includes(name) && Number.isFinite(v)));
+    try {
+      const parameters = parameterInfo(p);
+      const at = { ...p.nominal, ...values };
+      let analysis: Analysis;
+      if (fresh) {
+        // The first analysis of a preparation computes the symbolic Routh conditions; they depend on no value.
+        analysis = analyzeAt(p, { values, settlingBand: q.settlingBand });
+        conditions = analysis.conditions;
+        for (const s of analysis.stableSets) sets.get(`${s.parameter}|${othersKey(at, s.parameter)}`, () => s);
+      } else {
+        const fast = analyzeAt(p, { values, settlingBand: q.settlingBand, stableSets: false });
+        // A parameter's stable range depends on the other parameters only: moving its own slider reuses it.
+        const den = ratDenominator(p.transfer);
+        const stableSets = polyParams(den).map((name) => sets.get(`${name}|${othersKey(at, name)}`, () => stableSet(den, name, at)));
+        analysis = { ...fast, stableSets, conditions };
+      }
+      const sweep = sweepOf(p, q.sweepParameter, at, analysis.plotHorizon, sweeps, notes);
+      const index = analysis.loop?.breakPoint.index;
+      const wireId = index === undefined ? undefined : p.doc.wires[index]?.id;
+      const breakWire: BreakWire | null = wireId && analysis.loop ? { id: wireId, chosen: analysis.loop.breakPoint.chosen } : null;
+      return { ok: true, analysis: { ...analysis, notes: [...notes, ...analysis.notes] }, parameters, sweep, breakWire };
+    } catch (err) {
+      if (!(err instanceof AnalysisError || err instanceof AlgebraError)) throw err;
+      return { ok: false, problems: [...p.warnings, problemOf(err)], parameters: parameterInfo(p) };
+    }
+  };
+}
+
+/** The sweep of the chosen (else the first) parameter, others at the slider values; null without parameters. */
+function sweepOf(p: PreparedAnalysis, wanted: string | null, at: Record<string, number>, tEnd: number, cache: Cache<Omit<SweepData, "current">>, notes: string[]): SweepData | null {
+  const parameter = wanted !== null && p.parameters.includes(wanted) ? wanted : p.parameters[0];
+  if (parameter === undefined) return null;
+  try {
+    const made = cache.get(`${parameter}|${othersKey(at, parameter)}`, () => {
+      const range = parameterRange(p.doc, parameter);
+      const locus = rootLocus(p, parameter, range, LOCUS_POINTS, at);
+      // stepOverlay holds the other parameters at `nominal`: hand it the slider values in that place.
+      const overlay = stepOverlay({ ...p, nominal: at }, parameter, sweepValues(range, OVERLAY_VALUES), tEnd);
+      return { parameter, range, locus, overlay };
+    });
+    return { ...made, current: at[parameter] };
+  } catch (err) {
+    if (!(err instanceof AnalysisError || err instanceof AlgebraError)) throw err;
+    notes.push(`The sweep of ${parameter} could not be computed: ${err.message}`);
+    return null;
+  }
+}

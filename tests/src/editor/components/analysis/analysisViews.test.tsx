@@ -1,0 +1,130 @@
+// Light render checks without a DOM: the views rendered to static HTML, asserting on the words a user reads.
+import { renderToStaticMarkup } from "react-dom/server";
+import { describe, expect, it } from "vitest";
+import { analyzeAt, type Analysis } from "@shared/analysis/analyze";
+import { prepareAnalysis } from "@shared/analysis/prepare";
+import { rootLocus, stepOverlay } from "@shared/analysis/sweep";
+import { RouthView } from "@/features/editor/components/analysis/RouthView";
+import { StabilityView } from "@/features/editor/components/analysis/StabilityView";
+import { SteadyStateView } from "@/features/editor/components/analysis/SteadyStateView";
+import { SweepView } from "@/features/editor/components/analysis/SweepView";
+import { makeDoc } from "../../../../support/docBuilder";
+
+const prepared = (doc: unknown) => {
+  const p = prepareAnalysis(doc);
+  if (!p.ok) throw new Error(p.problems.map((x) => x.message).join("; "));
+  return p.prepared;
+};
+
+const feedback = (g: string, parameters = {}) =>
+  makeDoc(
+    [
+      { id: "r", type: "input" },
+      { id: "e", type: "sum", signs: ["+", "-"] },
+      { id: "g", type: "transfer", expr: g },
+      { id: "b", type: "branch" },
+      { id: "y", type: "output" },
+    ],
+    ["r->e:0", "e->g", "g->b", "b->y", "b->e:1"],
+    parameters,
+  );
+
+const open = (g: string) => makeDoc([{ id: "r", type: "input" }, { id: "g", type: "transfer", expr: g }, { id: "y", type: "output" }], ["r->g", "g->y"]);
+
+/** Visible text: tags dropped, entities decoded, KaTeX's hidden MathML annotations left in (they are text too). */
+const text = (html: string) =>
+  html.replace(/<[^>]+>/g, " ").replace(/&lt;/g, "<").replace(/&gt;/g, ">").replace(/&#x27;|&apos;/g, "'").replace(/&amp;/g, "&").replace(/\s+/g, " ");
+
+const headings = (html: string) => [...html.matchAll(/<h3[^>]*>([^<]*)<\/h3>/g)].map((m) => m[1]);
+
+const nise = prepared(feedback("K/(s*(s + 7)*(s + 11))", { K: { value: 100, min: 10, max: 3000 } }));
+const niseAt100: Analysis = analyzeAt(nise);
+
+describe("StabilityView", () => {
+  it("K/(s(s+7)(s+11)) at K = 100: 'Stable', three poles, unit DC gain (from memory: Nise, Control Systems Engineering, Example 6.9)", () => {
+    const html = renderToStaticMarkup(<StabilityView analysis={niseAt100} />);
+    expect(headings(html)).toEqual(["Stable"]);
+    expect(html).toContain('role="img" aria-label="Pole-zero map of T(s) in the s-plane"');
+    expect(html).toContain("<caption");
+    expect(html).toMatch(/<th scope="col"[^>]*>Multiplicity<\/th>/);
+    expect(text(html)).toContain("T(0) = 1");
+    expect(text(html)).toContain("T(s) has no finite zeros.");
+    // three real poles or one real pole and a pair: 3 poles in all, drawn as 3 × markers
+    expect(html.match(/<title>pole at/g)).toHaveLength(3);
+  });
+
+  it("an unstable pole cancelled by a zero: the alert names the hidden mode and the diagram verdict (common practice: unstable pole-zero cancellation)", () => {
+    const doc = makeDoc(
+      [
+        { id: "r", type: "input" },
+        { id: "e", type: "sum", signs: ["+", "-"] },
+        { id: "c", type: "transfer", expr: "(s - 1)/(s + 2)" },
+        { id: "g", type: "transfer", expr: "1/(s - 1)" },
+        { id: "b", type: "branch" },
+        { id: "y", type: "output" },
+      ],
+      ["r->e:0", "e->c", "c->g", "g->b", "b->y", "b->e:1"],
+    );
+    const html = renderToStaticMarkup(<StabilityView analysis={analyzeAt(prepared(doc))} />);
+    expect(headings(html)).toEqual(["Stable"]);
+    expect(html).toMatch(/<li role="alert"[^>]*>.*Unstable hidden mode/);
+    expect(text(html)).toContain("The diagram is unstable, although T(s) is stable.");
+  });
+
+  it("1/(s² + 4): 'Marginally stable' with the pair ±2j (from memory: Ogata, Modern Control Engineering, undamped oscillator)", () => {
+    const html = renderToStaticMarkup(<StabilityView analysis={analyzeAt(prepared(open("1/(s^2 + 4)")))} />);
+    expect(headings(html)).toEqual(["Marginally stable"]);
+    expect(text(html)).toContain("±2j");
+  });
+});
+
+describe("RouthView", () => {
+  it("states the stable range 0 < K < 1386 (from memory: Nise, Control Systems Engineering, Example 6.9)", () => {
+    const html = renderToStaticMarkup(<RouthView analysis={niseAt100} />);
+    expect(text(html)).toContain("0 < K < 1386");
+    expect(html).toMatch(/<th scope="row"[^>]*>s<sup>3<\/sup><\/th>/);
+    expect(html).toContain("First column");
+    expect(html).not.toContain("sign change</span>");
+  });
+
+  it("s⁵ + 2s⁴ + 2s³ + 4s² + 11s + 10: ε row explained, two sign changes marked (from memory: Nise, Control Systems Engineering, Example 6.2)", () => {
+    const html = renderToStaticMarkup(<RouthView analysis={analyzeAt(prepared(open("1/(s^5 + 2*s^4 + 2*s^3 + 4*s^2 + 11*s + 10)")))} />);
+    expect(html.match(/sign change<\/span>/g)).toHaveLength(2);
+    expect(text(html)).toContain("replaced by a small ε > 0");
+    // the diagram option exists and is enabled for a diagram with a characteristic polynomial
+    expect(html).not.toMatch(/<input[^>]*disabled/);
+  });
+});
+
+describe("SteadyStateView", () => {
+  it("type 1 loop at K = 100: Kv = 100/77, ramp error 77/100, step error 0, parabola error ∞ (from memory: Nise, Control Systems Engineering, Ch. 7 type-1 errors)", () => {
+    const t = text(renderToStaticMarkup(<SteadyStateView analysis={niseAt100} />));
+    expect(t).toContain("System type: 1");
+    expect(t).toContain("100/77 ≈ 1.299");
+    expect(t).toContain("77/100 ≈ 0.77");
+    expect(t).toMatch(/Unit parabola r\(t\) = t²\/2 ∞/);
+  });
+
+  it("an unstable pair without a loop: no final value (FVT refused) and no constants (common practice: final value theorem conditions)", () => {
+    const t = text(renderToStaticMarkup(<SteadyStateView analysis={analyzeAt(prepared(open("1/(s - 1)")))} />));
+    expect(t).toContain("the final value theorem does not apply");
+    expect(t).toContain("There is no loop gain for this pair");
+    expect(t).not.toMatch(/Final value of the step response\s+</);
+  });
+});
+
+describe("SweepView", () => {
+  it("asks for a parameter when there is none", () => {
+    expect(text(renderToStaticMarkup(<SweepView sweep={null} analysis={niseAt100} />))).toContain("No parameters to sweep: add one in the parameter table.");
+  });
+
+  it("draws three locus branches and one legend entry per overlay value (a third-order loop has three branches: common practice)", () => {
+    const range: [number, number] = [10, 3000];
+    const values = [10, 100, 1000, 3000];
+    const sweep = { parameter: "K", range, locus: rootLocus(nise, "K", range, 60), overlay: stepOverlay(nise, "K", values, 5), current: 100 };
+    const html = renderToStaticMarkup(<SweepView sweep={sweep} analysis={niseAt100} />);
+    expect(html.match(/<path d="M[^"]*" fill="none"/g)).toHaveLength(3);
+    expect(text(html)).toMatch(/K = 10 .*K = 100 .*K = 1000 .*K = 3000 /);
+    expect(html.match(/<th scope="row"[^>]*>\d<\/th>/g)).toHaveLength(3);
+  });
+});

@@ -1,0 +1,131 @@
+import { describe, expect, it } from "vitest";
+import { analyzeAt } from "@shared/analysis/analyze";
+import { prepareAnalysis } from "@shared/analysis/prepare";
+import type { AnalysisAnswer, AnalysisQuery } from "@/features/editor/worker/analysisProtocol";
+import { analysisKey, createAnalyzer, OVERLAY_VALUES } from "@/features/editor/worker/analyzeQuery";
+import { docOf, unityLoop } from "../support";
+
+const query = (document: unknown, over: Partial<AnalysisQuery> = {}): AnalysisQuery => ({
+  document,
+  input: null,
+  output: null,
+  break: null,
+  values: {},
+  settlingBand: 0.02,
+  sweepParameter: null,
+  ...over,
+});
+
+function ok(a: AnalysisAnswer) {
+  if (!a.ok) throw new Error(a.problems.map((p) => p.message).join("; "));
+  return a;
+}
+
+/** common practice: standard second-order formula, overshoot = 100·exp(−ζπ/√(1−ζ²)). */
+const overshoot = (zeta: number) => 100 * Math.exp((-zeta * Math.PI) / Math.sqrt(1 - zeta * zeta));
+
+describe("analysis worker's query (unity feedback around K/(s(s+2)): closed loop K/(s² + 2s + K))", () => {
+  it("gives the verdict and the second-order overshoot at nominal and at slider values", () => {
+    const analyze = createAnalyzer();
+    const nominal = ok(analyze(query(unityLoop())));
+    expect(nominal.analysis.stability.verdict).toBe("stable");
+    // K = 4: ωn = 2, ζ = 0.5 → 16.3 % (common practice: standard second-order formulas).
+    expect(nominal.analysis.step.overshootPercent).toBeCloseTo(overshoot(0.5), 3);
+    expect(nominal.parameters).toEqual([{ name: "K", nominal: 4, range: [0.4, 40] }]);
+    // K = 16: ωn = 4, ζ = 0.25 → 44.4 %.
+    const moved = ok(analyze(query(unityLoop(), { values: { K: 16 } })));
+    expect(moved.analysis.values.K).toBe(16);
+    expect(moved.analysis.step.overshootPercent).toBeCloseTo(overshoot(0.25), 3);
+    // K = −1: s² + 2s − 1 has a root at −1 + √2 > 0 (quadratic formula).
+    expect(ok(analyze(query(unityLoop(), { values: { K: -1 } }))).analysis.stability.verdict).toBe("unstable");
+  });
+
+  it("keeps the stable range and the Routh conditions on slider moves (from memory: Ogata, Routh criterion for s² + 2s + K → K > 0)", () => {
+    const analyze = createAnalyzer();
+    ok(analyze(query(unityLoop())));
+    const moved = ok(analyze(query(unityLoop(), { values: { K: 9 } })));
+    expect(moved.analysis.stableSets).toHaveLength(1);
+    expect(moved.analysis.stableSets[0].intervals).toMatchObject([{ lower: { value: 0 }, upper: null, lowerIncluded: false }]);
+  });
+
+  it("recomputes another parameter's stable range when a slider moves, agreeing with a full analysis at those values", () => {
+    // Two parameters: G = K/(s (T s + 1) (s + 1)); the range of K depends on T and the other way round.
+    const doc = { ...unityLoop("K/(s*(T*s+1)*(s+1))"), parameters: { K: 1, T: 0.5 } };
+    const analyze = createAnalyzer();
+    ok(analyze(query(doc)));
+    const moved = ok(analyze(query(doc, { values: { T: 0.25 } })));
+    const p = prepareAnalysis(doc);
+    if (!p.ok) throw new Error("prepare failed");
+    const full = analyzeAt(p.prepared, { values: { T: 0.25 } });
+    expect(moved.analysis.stableSets).toEqual(full.stableSets);
+    expect(moved.analysis.conditions).toEqual(full.conditions);
+    // common practice: a cubic a3 s³ + a2 s² + a1 s + a0 is stable iff all aᵢ > 0 and a2·a1 > a3·a0; for
+    // T s³ + (T+1) s² + s + K that is 0 < K < (T+1)/T → 5 at T = 0.25.
+    const k = moved.analysis.stableSets.find((s) => s.parameter === "K");
+    expect(k?.intervals[0].upper?.value).toBeCloseTo(5, 9);
+  });
+
+  it("sweeps the first parameter by default: the locus follows −1 ± j√(K−1) and the overlay spans the range", () => {
+    const a = ok(createAnalyzer()(query(unityLoop(), { values: { K: 2 } })));
+    const sweep = a.sweep;
+    expect(sweep).toMatchObject({ parameter: "K", range: [0.4, 40], current: 2 });
+    expect(sweep?.locus.branches).toHaveLength(2);
+    const i = sweep!.locus.values.findIndex((v) => v > 5);
+    const K = sweep!.locus.values[i];
+    // common practice: roots of s² + 2s + K by the quadratic formula.
+    const upper = sweep!.locus.branches.map((b) => b[i]).find((r) => r && r[1] > 0);
+    expect(upper?.[0]).toBeCloseTo(-1, 9);
+    expect(upper?.[1]).toBeCloseTo(Math.sqrt(K - 1), 9);
+    expect(sweep?.overlay.map((o) => o.value)).toHaveLength(OVERLAY_VALUES);
+    expect(sweep?.overlay[0].value).toBeCloseTo(0.4, 12);
+    expect(sweep?.overlay[OVERLAY_VALUES - 1].value).toBeCloseTo(40, 12);
+    // The step response of K/(s² + 2s + K) settles to 1 (final value theorem, common practice).
+    const last = sweep!.overlay[2].points.at(-1)!;
+    expect(last[1]).toBeCloseTo(1, 2);
+  });
+
+  it("reports the break wire in use: the default, a chosen one, and the default again for a removed wire", () => {
+    const analyze = createAnalyzer();
+    // The default break is the wire into the junction's minus port: G → e port 1 is w4 in unityLoop.
+    expect(ok(analyze(query(unityLoop()))).breakWire).toEqual({ id: "w4", chosen: "default" });
+    const given = ok(analyze(query(unityLoop(), { break: "w2" })));
+    expect(given.breakWire).toEqual({ id: "w2", chosen: "given" });
+    // Breaking anywhere on a single loop gives the same loop gain K/(s(s+2)) (common practice).
+    expect(given.analysis.loop?.L.denominator.replace(/\s|\*/g, "")).toMatch(/^(s\^2\+2s|2s\+s\^2)$/);
+    const gone = ok(analyze(query(unityLoop(), { break: "w9" })));
+    expect(gone.breakWire).toEqual({ id: "w4", chosen: "default" });
+    expect(gone.analysis.notes[0]).toContain("w9 is no longer in the diagram");
+  });
+
+  it("names the problem of a document that cannot be analysed, and keeps the sliders when only the values are bad", () => {
+    const analyze = createAnalyzer();
+    const broken = analyze(query(docOf([{ id: "r", type: "input" }, { id: "G", type: "transfer", expr: "1/(s+" }, { id: "y", type: "output" }], ["r>G", "G>y"])));
+    expect(broken.ok).toBe(false);
+    if (broken.ok) return;
+    expect(broken.problems.some((p) => p.blockId === "G" && p.field === "expr")).toBe(true);
+    expect(broken.parameters).toEqual([]);
+    // 1/(K s + K) is singular at K = 0: the answer says so and still lists K so its slider can move back.
+    const open = docOf([{ id: "r", type: "input" }, { id: "G", type: "transfer", expr: "1/(K*s+K)" }, { id: "y", type: "output" }], ["r>G", "G>y"], { K: 1 });
+    const singular = analyze(query(open, { values: { K: 0 } }));
+    expect(singular).toMatchObject({ ok: false, problems: [{ code: "singular-at-values" }], parameters: [{ name: "K" }] });
+  });
+});
+
+describe("analysis cache key", () => {
+  const doc = unityLoop();
+  it("ignores the layout, title and notes, so moving a block reuses the preparation", () => {
+    const moved = { ...doc, title: "Other", notes: "n", layout: { r: { x: 10, y: 20 } } };
+    expect(analysisKey(moved, "r", "y", null)).toBe(analysisKey(doc, "r", "y", null));
+  });
+  it("changes with the blocks, wires, parameter table, pair and break", () => {
+    const base = analysisKey(doc, "r", "y", null);
+    const variants = [
+      analysisKey(unityLoop("K/(s*(s+3))"), "r", "y", null),
+      analysisKey({ ...doc, wires: doc.wires.slice(1) }, "r", "y", null),
+      analysisKey({ ...doc, parameters: { K: 5 } }, "r", "y", null),
+      analysisKey(doc, "r", null, null),
+      analysisKey(doc, "r", "y", "w2"),
+    ];
+    for (const v of variants) expect(v).not.toBe(base);
+  });
+});
