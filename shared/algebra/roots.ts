@@ -1,9 +1,14 @@
-// Own root finder (Aberth–Ehrlich) so reported modes do not depend on a slow general CAS.
+// Own root finder (Aberth–Ehrlich) so reported modes do not depend on a slow general CAS; for exact
+// coefficients the double roots are polished with p and p' evaluated exactly, which is what makes
+// ill-conditioned degree-100 polynomials accurate.
+import { bigEvalWithDerivative, bigScaled, ldexp, logAbs } from "@shared/algebra/bigEval";
 import { AlgebraError } from "@shared/algebra/errors";
 import { polyDegree, polyParams, type Poly } from "@shared/algebra/poly";
-import { q, qMul, qToNumber } from "@shared/algebra/rational";
+import { bigGcd, q, qMul, qToNumber, type Q } from "@shared/algebra/rational";
 
 const EPS = 2 ** -52;
+/** Sweeps of the exact stage; good double starting points need one or two, clusters of 100 roots some dozens. */
+const EXACT_SWEEPS = 200;
 
 /**
  * Numeric roots as [re, im] pairs, sorted by real then imaginary part, from real coefficients in DESCENDING
@@ -26,6 +31,98 @@ export function polyRoots(coeffsDescending: readonly number[]): [number, number]
   if (n === 1) roots.push([-c[1] / c[0], 0]);
   else if (n === 2) roots.push(...quadratic(c[0], c[1], c[2]));
   else if (n > 2) roots.push(...aberth(c));
+  return tidyRoots(roots);
+}
+
+/**
+ * Roots of a polynomial with EXACT rational coefficients in DESCENDING powers, each to a few units in the last
+ * place when the roots are simple (give square-free factors: a repeated root converges slowly). Double starting
+ * points, then Aberth–Ehrlich steps with p and p' evaluated exactly, so clustered, widely spread or
+ * Wilkinson-like roots cost time, not accuracy. Sorted like polyRoots.
+ * Example: polyRootsExact([q(1), q(0), q(-2)]) is [[−√2, 0], [√2, 0]], each the nearest double.
+ */
+export function polyRootsExact(coeffsDescending: readonly Q[]): [number, number][] {
+  const c = integerCoefficients(coeffsDescending);
+  const roots: [number, number][] = [];
+  while (c.length > 1 && c[c.length - 1] === 0n) {
+    c.pop();
+    roots.push([0, 0]);
+  }
+  if (c.length === 2) roots.push([qToNumber(q(-c[1], c[0])), 0]);
+  else if (c.length > 2) {
+    const z = separate(exactStart(c));
+    aberthSweeps(z, (x, y) => exactNewton(c, x, y), 4 * EPS, EXACT_SWEEPS);
+    roots.push(...conjugatePairs(z));
+  }
+  return tidyRoots(roots);
+}
+
+/** Integer multiples of the coefficients (common denominator cleared), leading zeros dropped. */
+function integerCoefficients(desc: readonly Q[]): bigint[] {
+  const first = desc.findIndex((x) => x.n !== 0n);
+  const a = first < 0 ? [] : desc.slice(first);
+  const l = a.reduce((acc, x) => (acc / bigGcd(acc, x.d)) * x.d, 1n);
+  return a.map((x) => x.n * (l / x.d));
+}
+
+/** The double roots when the scaled coefficients fit in doubles; else points on the Newton-polygon circles. */
+function exactStart(c: readonly bigint[]): [number, number][] {
+  const logs = c.map(logAbs);
+  const finite = logs.filter((l) => l > -Infinity);
+  const top = Math.max(...finite);
+  if (Math.min(...finite) > top - 1000 * Math.LN2) {
+    const z = polyRoots(c.map((x) => bigScaled(x, Math.round(top / Math.LN2))));
+    if (z.length === c.length - 1 && z.every(([x, y]) => Number.isFinite(x) && Number.isFinite(y) && (x !== 0 || y !== 0))) return z;
+  }
+  return startingPoints(logs.reverse());
+}
+
+/** Moves points that coincide (a cluster the doubles could not resolve) slightly apart, so Aberth can separate them. */
+function separate(z: [number, number][]): [number, number][] {
+  const seen = new Set<string>();
+  return z.map(([x, y], k) => {
+    if (seen.has(`${x},${y}`)) {
+      const r = Math.hypot(x, y) * 2 ** -26;
+      [x, y] = [x + r * Math.cos(k), y + r * Math.sin(k)];
+    }
+    seen.add(`${x},${y}`);
+    return [x, y];
+  });
+}
+
+/** Newton correction from the exact p(z), p'(z); converged only at an exact root. */
+function exactNewton(c: readonly bigint[], x: number, y: number): NewtonStep {
+  const { p, dp } = bigEvalWithDerivative(c, x, y);
+  if (p.m[0] === 0 && p.m[1] === 0) return { re: 0, im: 0, converged: true };
+  const [re, im] = cdiv(p.m[0], p.m[1], dp.m[0], dp.m[1]);
+  return { re: ldexp(re, p.e - dp.e), im: ldexp(im, p.e - dp.e), converged: false };
+}
+
+/** Real coefficients: makes each complex pair exactly conjugate (the mean of the two polished values). */
+function conjugatePairs(z: [number, number][]): [number, number][] {
+  const out = z.map(([x, y]): [number, number] => [x, y]);
+  const lower = new Set(out.flatMap((r, i) => (r[1] < 0 ? [i] : [])));
+  out.forEach(([x, y], i) => {
+    if (y <= 0) return;
+    let [best, dist] = [-1, Infinity];
+    for (const j of lower) {
+      const d = Math.hypot(x - out[j][0], y + out[j][1]);
+      if (d < dist) [best, dist] = [j, d];
+    }
+    if (best < 0 || dist > 2 ** -40 * Math.hypot(x, y)) return;
+    lower.delete(best);
+    const [re, im] = [(x + out[best][0]) / 2, (y - out[best][1]) / 2];
+    out[i] = [re, im];
+    out[best] = [re, -im];
+  });
+  return out;
+}
+
+/**
+ * Roots with imaginary (or real) parts that are rounding noise next to the root's size dropped, sorted by
+ * real then imaginary part (the order every root list here uses). Example: tidyRoots([[1, 1e-20]]) is [[1, 0]].
+ */
+export function tidyRoots(roots: readonly [number, number][]): [number, number][] {
   return roots.map(tidy).sort((x, y) => x[0] - y[0] || x[1] - y[1]);
 }
 
@@ -46,10 +143,14 @@ function quadratic(a: number, b: number, c: number): [number, number][] {
   return [[re, -im], [re, im]];
 }
 
-/** Starting points: for each edge of the upper convex hull of (i, log|a_i|), that many points on its circle. */
-function startingPoints(asc: number[]): [number, number][] {
-  const n = asc.length - 1;
-  const pts = asc.map((x, i) => [i, x === 0 ? -Infinity : Math.log(Math.abs(x))] as const).filter((p) => p[1] > -Infinity);
+/**
+ * Aberth–Ehrlich starting points from the natural logs of |a_i| (ASCENDING powers, −Infinity for a zero
+ * coefficient): for each edge of the upper convex hull of (i, log|a_i|), that many points on its circle.
+ * Example: startingPoints([0, -Infinity, 0]) (s² + 1) gives two points on the unit circle.
+ */
+export function startingPoints(logAbsAscending: readonly number[]): [number, number][] {
+  const n = logAbsAscending.length - 1;
+  const pts = logAbsAscending.map((l, i) => [i, l] as const).filter((p) => p[1] > -Infinity);
   const hull: (readonly [number, number])[] = [];
   for (const p of pts) {
     while (hull.length >= 2) {
@@ -72,14 +173,16 @@ function startingPoints(asc: number[]): [number, number][] {
   return out;
 }
 
-interface Step {
-  /** Newton correction p/p'. */
+/** A Newton correction p(z)/p'(z) and whether z is already as good as the arithmetic allows. */
+export interface NewtonStep {
   re: number;
   im: number;
+  converged: boolean;
+}
+
+interface Step extends NewtonStep {
   /** |p(z)| against its rounding-error bound: a smaller value means a better point. */
   residual: number;
-  /** |p(z)| is at rounding-error level: the root cannot be improved. */
-  converged: boolean;
 }
 
 /** Newton correction at z; outside the unit disc through q(w) = w^n p(1/w), w = 1/z (no overflow). */
@@ -104,16 +207,19 @@ function newton(desc: number[], asc: number[], x: number, y: number): Step {
   return { re, im, residual, converged: residual <= 4 * n * EPS };
 }
 
-function aberth(desc: number[]): [number, number][] {
-  const n = desc.length - 1;
-  const asc = desc.slice().reverse();
-  const z = startingPoints(asc);
+/**
+ * Aberth–Ehrlich sweeps over the points z (updated in place, each with the others' newest values): a point is
+ * final once newtonAt reports it converged or its correction is at most tol·|z|. Returns whether all are final.
+ * Example: aberthSweeps(startingPoints(logs), (x, y) => newtonStepAt(x, y), 2 ** -52, 1000).
+ */
+export function aberthSweeps(z: [number, number][], newtonAt: (x: number, y: number) => NewtonStep, tol: number, maxSweeps: number): boolean {
+  const n = z.length;
   const done = new Array<boolean>(n).fill(false);
-  for (let iter = 0; iter < 1000 && done.includes(false); iter++) {
+  for (let iter = 0; iter < maxSweeps && done.includes(false); iter++) {
     for (let k = 0; k < n; k++) {
       if (done[k]) continue;
       const [x, y] = z[k];
-      const step = newton(desc, asc, x, y);
+      const step = newtonAt(x, y);
       if (step.converged) {
         done[k] = true;
         continue;
@@ -126,12 +232,21 @@ function aberth(desc: number[]): [number, number][] {
         si += ii;
       }
       const [mr, mi] = cmul(step.re, step.im, sr, si);
-      const [cr, ci] = cdiv(step.re, step.im, 1 - mr, -mi);
+      let [cr, ci] = cdiv(step.re, step.im, 1 - mr, -mi);
+      // Two points on the same double (a cluster finer than the grid): plain Newton for this one.
+      if (!Number.isFinite(cr) || !Number.isFinite(ci)) [cr, ci] = [step.re, step.im];
       if (!Number.isFinite(cr) || !Number.isFinite(ci)) continue;
       z[k] = [x - cr, y - ci];
-      if (Math.hypot(cr, ci) <= EPS * Math.hypot(x, y)) done[k] = true;
+      if (Math.hypot(cr, ci) <= tol * Math.hypot(x, y)) done[k] = true;
     }
   }
+  return !done.includes(false);
+}
+
+function aberth(desc: number[]): [number, number][] {
+  const asc = desc.slice().reverse();
+  const z = startingPoints(asc.map((x) => (x === 0 ? -Infinity : Math.log(Math.abs(x)))));
+  aberthSweeps(z, (x, y) => newton(desc, asc, x, y), EPS, 1000);
   return z.map(([x, y]) => polish(desc, asc, x, y));
 }
 
@@ -151,7 +266,8 @@ function cmul(a: number, b: number, c: number, d: number): [number, number] {
   return [a * c - b * d, a * d + b * c];
 }
 
-function cdiv(a: number, b: number, c: number, d: number): [number, number] {
+/** Complex quotient (a + bi)/(c + di), scaled against overflow. Example: cdiv(1, 0, 0, 1) is [0, −1]. */
+export function cdiv(a: number, b: number, c: number, d: number): [number, number] {
   if (Math.abs(c) >= Math.abs(d)) {
     const r = d / c;
     const t = c + d * r;

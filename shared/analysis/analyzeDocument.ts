@@ -16,7 +16,13 @@ export type AnalyzeOutcome =
  * Example: analyzeDocument(doc, { break: "w6" }).result.margins.phaseMarginDeg.
  */
 export function analyzeDocument(raw: unknown, opts: PrepareOptions & AnalyzeOptions = {}): AnalyzeOutcome {
-  const prepared = prepareAnalysis(raw, opts);
+  let prepared: ReturnType<typeof prepareAnalysis>;
+  try {
+    prepared = prepareAnalysis(raw, opts);
+  } catch (err) {
+    if (!(err instanceof AnalysisError)) throw err;
+    return { ok: false, problems: [{ severity: "error", code: err.code, message: err.message }] };
+  }
   if (!prepared.ok) return prepared;
   try {
     const analysis = analyzeAt(prepared.prepared, opts);

@@ -12,10 +12,24 @@ export interface Zpk {
   poles: Complex[];
 }
 
+// Float coefficients per exact polynomial: margin and Nyquist searches evaluate the same one thousands of times.
+const floats = new WeakMap<UPoly, number[]>();
+const floatsOf = (u: UPoly): number[] => {
+  let f = floats.get(u);
+  if (!f) floats.set(u, (f = u.map(qToNumber)));
+  return f;
+};
+
 /** p(s) at a complex point (Horner in doubles). Example: upEvalComplex(s^2 + 1, [0, 1]) is [0, 0]. */
 export function upEvalComplex(u: UPoly, [x, y]: Complex): Complex {
-  let [re, im] = [0, 0];
-  for (let i = u.length - 1; i >= 0; i--) [re, im] = [re * x - im * y + qToNumber(u[i]), re * y + im * x];
+  const c = floatsOf(u);
+  let re = 0;
+  let im = 0;
+  for (let i = c.length - 1; i >= 0; i--) {
+    const r = re * x - im * y + c[i];
+    im = re * y + im * x;
+    re = r;
+  }
   return [re, im];
 }
 

@@ -4,9 +4,12 @@ import { qFromString, q, qAdd, qMul, qDiv, qOne, qZero, type Q } from "@shared/a
 import { ratDiv, ratFromExpr, type RatFn } from "@shared/algebra/ratfn";
 import { S, type ZPoly } from "@shared/algebra/zpoly";
 import { polyAdd, polyConst, polyMul, polyParam, polyS, type Poly } from "@shared/algebra/poly";
+import { DEGREE_LIMIT } from "@shared/algebra/errors";
 import { parseExpression } from "@shared/expr/parse";
 import { AnalysisError } from "@shared/analysis/errors";
 import { upDeg, upDivMod, upFrom, upGcd, upLead, upScale, type UPoly } from "@shared/analysis/upoly";
+
+const ENGINE_TEXT_LIMITS = { exprLength: Number.POSITIVE_INFINITY, exponent: DEGREE_LIMIT };
 
 /**
  * The exact rational function num/den written in the expression syntax (as the engine prints transfers).
@@ -15,8 +18,9 @@ import { upDeg, upDivMod, upFrom, upGcd, upLead, upScale, type UPoly } from "@sh
  */
 export function parseTransfer(numerator: string, denominator: string, parameters: readonly string[]): RatFn {
   const read = (text: string) => {
-    const parsed = parseExpression(text, { allowS: true, parameters });
-    if (!parsed.ok) throw new Error(`internal: cannot read "${text}": ${parsed.message}`);
+    // The engine wrote this text: read it back without the limits meant for typed block expressions.
+    const parsed = parseExpression(text, { allowS: true, parameters, limits: ENGINE_TEXT_LIMITS });
+    if (!parsed.ok) throw new Error(`internal: cannot read "${text.slice(0, 200)}": ${parsed.message}`);
     return ratFromExpr(parsed.ast);
   };
   return ratDiv(read(numerator), read(denominator));

@@ -2,11 +2,12 @@
 // square-free factor has simple roots, which the root finder gets to full accuracy), exact text for
 // rational and quadratic-surd roots, damping ratio and natural frequency for complex pairs.
 import { qMul, qNeg, qSub, q } from "@shared/algebra/rational";
-import { polyRoots } from "@shared/algebra/roots";
+import { polyRootsExact } from "@shared/algebra/roots";
 import { exactFactors, type Factor } from "@shared/analysis/factors";
+import { memoByPoly } from "@shared/analysis/memo";
 import { shownQ, shownText } from "@shared/analysis/shown";
 import { sqrtRational, surdText } from "@shared/analysis/surd";
-import { upDeg, upFloatsDesc, upText, type UPoly } from "@shared/analysis/upoly";
+import { upDeg, upText, type UPoly } from "@shared/analysis/upoly";
 
 export interface RootInfo {
   re: number;
@@ -20,6 +21,13 @@ export interface RootInfo {
   damping: number | null;
   naturalFrequency: number | null;
 }
+
+/**
+ * Numeric roots of one exact (square-free) factor, each to a few units in the last place, sorted by real then
+ * imaginary part; memoised, since poles, zeros, responses and Bode data all ask for the same factors.
+ * Example: factorRoots(s^2 + 1) is [[0, −1], [0, 1]].
+ */
+export const factorRoots = memoByPoly((f: UPoly): [number, number][] => polyRootsExact(f.slice().reverse()));
 
 /** Exact texts of the roots of a monic linear or quadratic factor, in polyRoots order (re, then im). */
 function exactTexts(f: UPoly): string[] | null {
@@ -41,15 +49,16 @@ function exactTexts(f: UPoly): string[] | null {
 export function rootsOf(u: UPoly, factors: Factor[] = exactFactors(u)): RootInfo[] {
   const out: RootInfo[] = [];
   for (const { poly, multiplicity } of factors) {
-    const roots = polyRoots(upFloatsDesc(poly));
+    const roots = factorRoots(poly);
     const texts = exactTexts(poly);
+    const factor = upText(poly);
     roots.forEach(([re, im], i) => {
       const wn = Math.hypot(re, im);
       out.push({
         re,
         im,
         multiplicity,
-        factor: upText(poly),
+        factor,
         exact: texts ? texts[i] : null,
         damping: im !== 0 ? -re / wn : null,
         naturalFrequency: im !== 0 ? wn : null,

@@ -4,7 +4,7 @@ import { polyCoeffsS, polyDegree, polyParams, type Poly } from "@shared/algebra/
 import {
   ratConst, ratDiv, ratFromExpr, ratIsZero, ratMul, ratSub, ratToLatex, ratToText, type RatFn,
 } from "@shared/algebra/ratfn";
-import { q, qSign } from "@shared/algebra/rational";
+import { q, qDiv, qMul, qSign, qSub, qZero, type Q } from "@shared/algebra/rational";
 import { polyToText } from "@shared/algebra/polytext";
 import type { ZPoly } from "@shared/algebra/zpoly";
 
@@ -38,6 +38,8 @@ export interface RouthArray {
 
 /** Row entries as exact rational functions (ε and parameters allowed), with the special cases recorded. */
 export function routhRows(p: Poly): { rows: RatFn[][]; special: RouthSpecial[]; aux: { power: number; degree: number } | null } {
+  const plain = polyParams(p).length ? null : numericRows(p);
+  if (plain) return { rows: plain, special: [], aux: null };
   const n = polyDegree(p);
   const desc = polyCoeffsS(p).reverse().map(ratFromPoly);
   const rows: RatFn[][] = [desc.filter((_, i) => i % 2 === 0)];
@@ -75,6 +77,31 @@ export function routhRows(p: Poly): { rows: RatFn[][]; special: RouthSpecial[]; 
     }
   }
   return { rows: rows.map((r) => (r.length ? r : [ratConst(q(0))])), special, aux };
+}
+
+/**
+ * The same rows in plain rationals for a numeric polynomial (rational-function arithmetic is several times
+ * slower); null when some row is all zero or starts with 0, which the general path handles with ε or A(s).
+ */
+function numericRows(p: Poly): RatFn[][] | null {
+  const n = polyDegree(p);
+  const desc = polyCoeffsS(p).reverse().map((c) => c.q); // a numeric coefficient is c.q·1
+  const rows: Q[][] = [desc.filter((_, i) => i % 2 === 0)];
+  if (n > 0) rows.push(desc.filter((_, i) => i % 2 === 1));
+  const width = rows[0].length;
+  for (let power = n - 1; power >= 0; power--) {
+    const idx = n - power;
+    if (idx >= 2) {
+      const [a, b] = [rows[idx - 2], rows[idx - 1]];
+      const at = (r: Q[], j: number) => r[j] ?? qZero;
+      rows.push(Array.from({ length: width - 1 }, (_, j) => qDiv(qSub(qMul(b[0], at(a, j + 1)), qMul(a[0], at(b, j + 1))), b[0])));
+    }
+    const row = rows[idx] ?? [];
+    while (row.length > 1 && row[row.length - 1].n === 0n) row.pop();
+    rows[idx] = row;
+    if (!row.length || row[0].n === 0n) return null;
+  }
+  return rows.map((r) => r.map(ratConst));
 }
 
 const trimRow = (r: RatFn[]): RatFn[] => {

@@ -5,7 +5,7 @@ import { memoByPoly } from "@shared/analysis/memo";
 import { routhRows, signAsEpsilonVanishes } from "@shared/analysis/routh";
 import { countRealRoots, realRoots } from "@shared/analysis/sturm";
 import {
-  upDeg, upDivMod, upGcd, upNegVar, upOnAxis, upToPoly, upZeroOrder, type UPoly,
+  upDeg, upDivMod, upGcd, upMonic, upNegVar, upOnAxis, upToPoly, upZeroOrder, type UPoly,
 } from "@shared/analysis/upoly";
 
 export type Verdict = "stable" | "marginal" | "unstable";
@@ -40,7 +40,10 @@ function rhpByRouth(h: UPoly): number {
  * Exact root counts (multiplicity included) in the open right half-plane, on the imaginary axis and in the
  * open left half-plane. Example: rootCounts((s + 1)(s^2 + 4)^2) has rhp 0, axis 4, lhp 1, repeatedAxis true.
  */
-export const rootCounts = memoByPoly(countRoots);
+export const rootCounts = (u: UPoly): RootCounts => countsOfMonic(upMonic(u));
+
+// Keyed by the monic multiple: the characteristic polynomial is often the denominator times a constant.
+const countsOfMonic = memoByPoly(countRoots);
 
 function countRoots(u: UPoly): RootCounts {
   const counts: RootCounts = { rhp: 0, axis: 0, lhp: 0, repeatedAxis: false, atOrigin: upZeroOrder(u), axisFrequencies: [] };

@@ -34,16 +34,44 @@ export function horizon(r: TimeResponse, tol: number): number {
   return t;
 }
 
+/** |c|·(t + 1)^k·e^{−σt}: the size of a term, which the grid compares with 1e-12 of the final value. */
+const size = (x: TimeResponse["terms"][number], t: number): number => Math.abs(x.coefficient) * (t + 1) ** x.power * Math.exp(-x.decay * t);
+
+/**
+ * The time from which a decaying term's size stays below tol for good: past its peak (t + 1 = k/σ) the size only
+ * falls, so one bisection replaces a test at every grid point. −Infinity when it never reaches tol.
+ */
+function negligibleFrom(x: TimeResponse["terms"][number], tol: number): number {
+  const peak = Math.max(0, x.power / x.decay - 1);
+  if (size(x, peak) < tol) return -Infinity;
+  let [a, b] = [peak, peak + 1 / x.decay];
+  while (size(x, b) >= tol) [a, b] = [b, b + 2 * (b - peak)];
+  for (let i = 0; i < 200 && b - a > 1e-15 * b; i++) {
+    const m = (a + b) / 2;
+    if (size(x, m) >= tol) a = m;
+    else b = m;
+  }
+  return b;
+}
+
 /** Grid from 0 to tEnd whose step follows the fastest term still alive (1/20 of its time scale). */
 function grid(r: TimeResponse, tEnd: number, scale: number): number[] {
   const ts = [0];
   const maxStep = tEnd / 400;
+  const tol = 1e-12 * scale;
+  const terms = r.terms.map((x) => ({
+    rate: Math.hypot(x.decay, x.frequency),
+    decaying: x.decay > 0,
+    rising: x.decay > 0 && x.power > 0 ? x.power / x.decay - 1 : 0,
+    until: x.decay > 0 ? negligibleFrom(x, tol) : Infinity,
+    x,
+  }));
   while (ts[ts.length - 1] < tEnd) {
     const t = ts[ts.length - 1];
     let rate = 0;
-    for (const x of r.terms) {
-      if (x.decay > 0 && Math.abs(x.coefficient) * (t + 1) ** x.power * Math.exp(-x.decay * t) < 1e-12 * scale) continue;
-      rate = Math.max(rate, Math.hypot(x.decay, x.frequency));
+    for (const d of terms) {
+      const alive = !d.decaying || (t < d.until && (t >= d.rising || size(d.x, t) >= tol));
+      if (alive) rate = Math.max(rate, d.rate);
     }
     ts.push(Math.min(tEnd, t + Math.min(maxStep, rate > 0 ? 1 / (20 * rate) : maxStep)));
   }

@@ -21,9 +21,15 @@ const trimInts = (a: bigint[]): bigint[] => {
   return a.slice(0, n);
 };
 
-/** a divided by the (positive) gcd of its coefficients. */
+const absBig = (x: bigint): bigint => (x < 0n ? -x : x);
+
+/** a divided by the (positive) gcd of its coefficients (smallest first: the gcd shrinks fast, often to 1). */
 function primitive(a: bigint[]): bigint[] {
-  const g = a.reduce((acc, x) => bigGcd(acc, x), 0n);
+  let g = 0n;
+  for (const x of a.map(absBig).sort((x, y) => (x < y ? -1 : x > y ? 1 : 0))) {
+    g = bigGcd(g, x);
+    if (g === 1n) return a;
+  }
   return g > 1n ? a.map((x) => x / g) : a;
 }
 

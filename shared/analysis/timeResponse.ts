@@ -1,14 +1,14 @@
 // Impulse, step and ramp responses in closed form by partial fractions: exact for rational and
 // quadratic-surd poles, 12 significant digits for the others, impulse terms of an improper T reported.
 import { q, qAdd, qDiv, qMul, qNeg, qSub, type Q } from "@shared/algebra/rational";
-import { polyRoots } from "@shared/algebra/roots";
 import { exactFactors, type Factor } from "@shared/analysis/factors";
+import { factorRoots } from "@shared/analysis/poles";
 import { poleCoefficients } from "@shared/analysis/residues";
 import { shownQ, shownValue, type Shown } from "@shared/analysis/shown";
 import { complexField, sqrtRational, surdField, type NumberField, type Surd } from "@shared/analysis/surd";
 import { impulseText, joinTerms, termText, type TermKind } from "@shared/analysis/termText";
 import {
-  upDeg, upDivMod, upFloatsDesc, upFrom, upInts, upMul, upZeroOrder, type UPoly,
+  upDeg, upDivMod, upFrom, upInts, upMul, upZeroOrder, type UPoly,
 } from "@shared/analysis/upoly";
 
 export type InputKind = "impulse" | "step" | "ramp";
@@ -159,7 +159,7 @@ function rationalRoots(f: UPoly): Q[] {
 /** Terms of a factor of degree ≥ 3, from its numeric roots (conjugate pairs merged into cos/sin). */
 function numericTerms(rem: UPoly, cofactor: UPoly, f: Factor): ResponseTerm[] {
   const F: NumberField<[number, number]> = complexField;
-  const roots = polyRoots(upFloatsDesc(f.poly));
+  const roots = factorRoots(f.poly);
   const out: ResponseTerm[] = [];
   roots.forEach((r, i) => {
     if (r[1] < 0) return;
@@ -177,7 +177,7 @@ function numericTerms(rem: UPoly, cofactor: UPoly, f: Factor): ResponseTerm[] {
 export function responseAt(r: TimeResponse, t: number): number {
   let y = 0;
   for (const x of r.terms) {
-    const base = x.coefficient * t ** x.power * Math.exp(-x.decay * t);
+    const base = x.coefficient * (x.power === 0 ? 1 : t ** x.power) * Math.exp(-x.decay * t);
     y += x.kind === "exp" ? base : base * (x.kind === "cos" ? Math.cos(x.frequency * t) : Math.sin(x.frequency * t));
   }
   return y;

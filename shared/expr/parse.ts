@@ -34,6 +34,8 @@ export interface ParseOptions {
   allowS: boolean;
   /** Declared parameter names; any other name is an error. */
   parameters: Iterable<string>;
+  /** Size limits; default LIMITS. Text the engine wrote itself is read back with wider ones. */
+  limits?: { exprLength: number; exponent: number };
 }
 
 export type ParseFailure = { ok: false; code: ParseErrorCode; message: string; position: number };
@@ -54,8 +56,9 @@ class Refusal extends Error {
  * Example: parseExpression("K*(s+2)/s", { allowS: true, parameters: ["K"] }) → { ok: true, ast: div(…) }.
  */
 export function parseExpression(text: string, options: ParseOptions): ParseResult {
-  if (text.length > LIMITS.exprLength) {
-    return fail("expr-too-long", `The expression is ${text.length} characters long; the limit is ${LIMITS.exprLength}`, LIMITS.exprLength);
+  const limits = options.limits ?? LIMITS;
+  if (text.length > limits.exprLength) {
+    return fail("expr-too-long", `The expression is ${text.length} characters long; the limit is ${limits.exprLength}`, limits.exprLength);
   }
   if (text.trim() === "") {
     return fail("empty", "The expression is empty: enter a number, a parameter or an expression in s", 0);
@@ -69,7 +72,7 @@ export function parseExpression(text: string, options: ParseOptions): ParseResul
     return mathjsSyntaxFailure(err, text, lexed.tokens);
   }
   try {
-    const walker = new TreeWalker(lexed.tokens, new Set(options.parameters), options.allowS);
+    const walker = new TreeWalker(lexed.tokens, new Set(options.parameters), options.allowS, limits.exponent);
     return { ok: true, ast: walker.walkAll(tree) };
   } catch (err) {
     if (err instanceof Refusal) return fail(err.code, err.message, err.position);
@@ -121,6 +124,7 @@ class TreeWalker {
     private readonly tokens: Token[],
     private readonly parameters: Set<string>,
     private readonly allowS: boolean,
+    private readonly maxExponent: number,
   ) {}
 
   walkAll(tree: MathNode): ExprNode {
@@ -200,8 +204,8 @@ class TreeWalker {
 
   private exponent(exp: ExprNode, position: number): number {
     if (exp.kind !== "num" || exp.den !== 1n) return this.badExponent(position, "is not a whole number");
-    if (exp.num > BigInt(LIMITS.exponent)) {
-      throw new Refusal("exponent-limit", `The exponent ${exp.num} at position ${position} is above the limit of ${LIMITS.exponent}`, position);
+    if (exp.num > BigInt(this.maxExponent)) {
+      throw new Refusal("exponent-limit", `The exponent ${exp.num} at position ${position} is above the limit of ${this.maxExponent}`, position);
     }
     return Number(exp.num);
   }

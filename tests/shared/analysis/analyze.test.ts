@@ -69,6 +69,34 @@ describe("analysis of a document", () => {
     expect(a.notes.join(" ")).toMatch(/characteristic polynomial .* is unstable/);
   });
 
+  const twoLags = (g: string, h: string) =>
+    makeDoc(
+      [
+        { id: "r", type: "input" },
+        { id: "e", type: "sum", signs: ["+", "-"] },
+        { id: "g", type: "transfer", expr: g },
+        { id: "h", type: "transfer", expr: h },
+        { id: "b", type: "branch" },
+        { id: "y", type: "output" },
+      ],
+      ["r->e:0", "e->g", "g->h", "h->b", "b->y", "b->e:1"],
+    );
+
+  it("a closed loop of degree 61 (above the typed-expression power limit of 50) is analysed (common practice: a polynomial with missing powers has roots off the open left half-plane)", () => {
+    const out = analyzeDocument(twoLags("1/(s^30 + 3)", "1/(s^31 + 2)"), { stableSets: false });
+    expect(out.ok).toBe(true);
+    if (!out.ok) return;
+    // (s^30 + 3)(s^31 + 2) + 1 = s^61 + 3s^31 + 2s^30 + 7: 61 poles, not Hurwitz.
+    expect(out.result.poles).toHaveLength(61);
+    expect(out.result.stable).toBe("unstable");
+  });
+
+  it("a closed loop of degree 101 is refused with a degree-limit problem, not an internal error (common practice: clear refusal)", () => {
+    const out = analyzeDocument(twoLags("1/(s^50 + 3)", "1/((s^50 + 2)*s)"), { stableSets: false });
+    expect(out.ok).toBe(false);
+    if (!out.ok) expect(out.problems).toEqual([expect.objectContaining({ severity: "error", code: "degree-limit", message: expect.stringMatching(/101/) })]);
+  });
+
   it("improper T: metrics null with the reason, impulse terms in the response", () => {
     const doc = makeDoc([{ id: "r", type: "input" }, { id: "g", type: "transfer", expr: "(s^2 + 1)/(s + 1)" }, { id: "y", type: "output" }], ["r->g", "g->y"]);
     const a = analyzeAt(prepared(doc));

@@ -3,7 +3,7 @@ import { q } from "@shared/algebra/rational";
 import { AnalysisError } from "@shared/analysis/errors";
 import { exactFactors } from "@shared/analysis/factors";
 import { dominantPoles, flatRoots, rootsOf } from "@shared/analysis/poles";
-import { upFrom, upInts, upMul, upText, type UPoly } from "@shared/analysis/upoly";
+import { upFrom, upInts, upMul, upSub, upText, type UPoly } from "@shared/analysis/upoly";
 
 const product = (...ps: number[][]): UPoly => ps.map((p) => upInts(p)).reduce(upMul);
 
@@ -45,6 +45,33 @@ describe("poles and zeros", () => {
       const want = [Math.cos((2 * Math.PI * k) / 100), Math.sin((2 * Math.PI * k) / 100)];
       expect(Math.hypot(re - want[0], im - want[1])).toBeLessThan(1e-9);
     }
+  });
+
+  it("degree 100 through the factoring: (s + 1)^100 − 3/2^100 has the roots −1 + (3^(1/100)/2)·e^{2πik/100}, to 1e-13 relative (common practice: by construction; irreducible, Eisenstein at 3 in 2(s + 1))", () => {
+    const binomial = Array.from({ length: 101 }, (_, k) => {
+      let c = 1n;
+      for (let i = 0; i < k; i++) c = (c * BigInt(100 - i)) / BigInt(i + 1);
+      return c;
+    });
+    const asc = binomial.map((c, k) => (k === 0 ? q(c * 2n ** 100n - 3n, 2n ** 100n) : q(c)));
+    const roots = rootsOf(upFrom(asc));
+    expect(roots.map((r) => r.factor)).toEqual(new Array(100).fill(upText(upFrom(asc))));
+    const radius = 3 ** (1 / 100) / 2;
+    for (const r of roots) {
+      const k = Math.round((Math.atan2(r.im, r.re + 1) / (2 * Math.PI)) * 100);
+      const want = [-1 + radius * Math.cos((2 * Math.PI * k) / 100), radius * Math.sin((2 * Math.PI * k) / 100)];
+      expect(Math.hypot(r.re - want[0], r.im - want[1]) / Math.hypot(want[0], want[1])).toBeLessThan(1e-13);
+    }
+    expect(new Set(roots.map((r) => `${r.re},${r.im}`)).size).toBe(100);
+  });
+
+  it("degree 64: the zeros of the Chebyshev polynomial T_64 are cos((2m−1)π/128), to 1e-13 (Abramowitz & Stegun 22.16.1; T_64 is irreducible)", () => {
+    let [t0, t1] = [upInts([1]), upInts([0, 1])];
+    for (let k = 1; k < 64; k++) [t0, t1] = [t1, upSub(upMul(upInts([0, 2]), t1), t0)];
+    const roots = flatRoots(rootsOf(t1));
+    const want = Array.from({ length: 64 }, (_, m) => Math.cos(((2 * m + 1) * Math.PI) / 128)).sort((a, b) => a - b);
+    expect(roots.map(([, im]) => im)).toEqual(new Array(64).fill(0));
+    roots.forEach(([re], i) => expect(Math.abs(re - want[i]) / Math.abs(want[i])).toBeLessThan(1e-13));
   });
 
   it("above degree 100 a clear refusal naming the limit", () => {

@@ -197,4 +197,11 @@ describe("parsed Laplace transforms evaluate to the transform of their time func
       expect(Math.abs(evalExpr(tree, s, { a, b }) - expected)).toBeLessThan(1e-7 * Math.max(1, Math.abs(expected)));
     }
   });
+
+  it("reads engine-written text with wider limits given by the caller, and still refuses past them (common practice: limits are per caller)", () => {
+    const wide = { exprLength: 5000, exponent: 1000 };
+    expect(parseExpression("s^61 + 2", { allowS: true, parameters: [], limits: wide }).ok).toBe(true);
+    const refused = parseExpression("s^1001", { allowS: true, parameters: [], limits: wide });
+    expect(refused.ok ? null : refused.code).toBe("exponent-limit");
+  });
 });
