@@ -41,17 +41,23 @@ export function ratEvalComplex(num: UPoly, den: UPoly, s: Complex): Complex {
   return [(a * c + b * d) / m, (b * c - a * d) / m];
 }
 
+/**
+ * Angle of jω − r, continuous in ω: atan2 for a root in the left half-plane; for one in the right half-plane
+ * π − atan2(ω − Im, Re), which stays off atan2's branch cut where ω passes Im r.
+ */
+const rootAngle = (re: number, im: number, w: number) => (re > 0 ? Math.PI - Math.atan2(w - im, re) : Math.atan2(w - im, -re));
+
 /** Magnitude in dB and phase in degrees (unwrapped along ω > 0) at s = jω. Example: 1/(s + 1) at ω = 1 → −3.01 dB, −45°. */
 export function bodeAt(zpk: Zpk, w: number): { magDb: number; phaseDeg: number } {
   let logMag = Math.log10(Math.abs(zpk.gain));
   let phase = zpk.gain < 0 ? Math.PI : 0;
   for (const [re, im] of zpk.zeros) {
     logMag += Math.log10(Math.hypot(re, w - im));
-    phase += Math.atan2(w - im, -re);
+    phase += rootAngle(re, im, w);
   }
   for (const [re, im] of zpk.poles) {
     logMag -= Math.log10(Math.hypot(re, w - im));
-    phase -= Math.atan2(w - im, -re);
+    phase -= rootAngle(re, im, w);
   }
   return { magDb: 20 * logMag, phaseDeg: (phase * 180) / Math.PI };
 }

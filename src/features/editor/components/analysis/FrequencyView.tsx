@@ -5,7 +5,6 @@ import type { BodeData } from "@shared/analysis/frequency";
 import type { LoopAnalysis } from "@shared/analysis/loopAnalysis";
 import { Tex } from "@/features/editor/components/Tex";
 import { formatNumber } from "@/features/editor/lib/analysisFormat";
-import { unwrapDegrees } from "@/features/editor/lib/unwrapPhase";
 
 type Which = "closed" | "loop";
 
@@ -50,8 +49,8 @@ const decades = (lo: number, hi: number): number[] => {
 const omegaText = (w: number) => (w === Infinity ? "ω → ∞" : `ω = ${formatNumber(w)} rad/s`);
 
 function BodePlots({ data, title, loop, bandwidth }: { data: BodeData; title: string; loop: LoopAnalysis | null; bandwidth: number | null }) {
-  const phase = useMemo(() => unwrapDegrees(data.phaseDeg), [data]);
-  const rows = useMemo(() => data.omega.map((w, i) => ({ w, mag: data.magDb[i], phase: phase[i] })), [data, phase]);
+  const phase = data.phaseDeg;
+  const rows = useMemo(() => data.omega.map((w, i) => ({ w, mag: data.magDb[i], phase: data.phaseDeg[i] })), [data]);
   const domain: [number, number] = [data.omega[0], data.omega[data.omega.length - 1]];
   const ticks = decades(...domain);
   const [pMin, pMax] = [Math.min(...phase), Math.max(...phase)];
