@@ -65,7 +65,7 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
   const step = stepAt === null ? null : (view.steps[stepAt] ?? null);
   const footprint = useMemo(() => (step && stepAt !== null ? stepFootprint(view.steps, stepAt) : null), [step, stepAt, view.steps]);
   // Slider values, band, swept parameter and break live here, not in the document: analysing never dirties it.
-  const [analysisSettings, setAnalysisSettings] = useState<AnalysisSettings>({ values: {}, band: 0.02, sweepParameter: null, break: null });
+  const [analysisSettings, setAnalysisSettings] = useState<AnalysisSettings>({ values: {}, band: 0.02, sweepParameter: null, sweepShown: false, break: null });
   const changeAnalysis = useCallback((change: Partial<AnalysisSettings>) => setAnalysisSettings((s) => ({ ...s, ...change })), []);
   const analysis = useLiveAnalysis(doc, { ...analysisSettings, input: view.transfer?.input ?? null, output: view.transfer?.output ?? null });
   const usedBreak = analysis.result?.breakWire ?? null;

@@ -16,6 +16,8 @@ export interface AnalysisSettings {
   /** Settling band as a fraction. */
   band: number;
   sweepParameter: string | null;
+  /** The sweep tab is open: only then are the root locus and step overlay computed. */
+  sweepShown: boolean;
 }
 
 export type AnalysisOptions = AnalysisSettings & { input: string | null; output: string | null };
@@ -73,6 +75,7 @@ export function useLiveAnalysis(doc: EditorDoc, opts: AnalysisOptions): LiveAnal
       values: o.values,
       settlingBand: o.band,
       sweepParameter: o.sweepParameter,
+      withSweep: o.sweepShown,
     };
     channel.current?.request(query);
   };
@@ -87,7 +90,7 @@ export function useLiveAnalysis(doc: EditorDoc, opts: AnalysisOptions): LiveAnal
     return () => window.clearTimeout(timer);
   }, [doc]);
 
-  const { input, output, break: brk, values, band, sweepParameter } = opts;
+  const { input, output, break: brk, values, band, sweepParameter, sweepShown } = opts;
   const mounted = useRef(false);
   useEffect(() => {
     // The first request goes out with the document's debounce; later option changes go straight through.
@@ -97,7 +100,7 @@ export function useLiveAnalysis(doc: EditorDoc, opts: AnalysisOptions): LiveAnal
     }
     setState((s) => (s.pending ? s : { ...s, pending: true }));
     send();
-  }, [input, output, brk, values, band, sweepParameter]);
+  }, [input, output, brk, values, band, sweepParameter, sweepShown]);
 
   return state;
 }

@@ -25,6 +25,8 @@ export interface AnalysisQuery {
   settlingBand: number;
   /** Parameter of the sweep tab; null: the first parameter. */
   sweepParameter: string | null;
+  /** Compute the sweep (root locus and step overlay) — only while its tab is open, as it costs the most. */
+  withSweep: boolean;
 }
 
 export type AnalysisRequest = AnalysisQuery & { seq: number };

@@ -110,7 +110,7 @@ export function createAnalyzer(): (q: AnalysisQuery) => AnalysisAnswer {
         const stableSets = polyParams(den).map((name) => sets.get(`${name}|${othersKey(at, name)}`, () => stableSet(den, name, at)));
         analysis = { ...fast, stableSets, conditions };
       }
-      const sweep = sweepOf(p, q.sweepParameter, at, analysis.plotHorizon, sweeps, notes);
+      const sweep = q.withSweep ? sweepOf(p, q.sweepParameter, at, analysis.plotHorizon, sweeps, notes) : null;
       const index = analysis.loop?.breakPoint.index;
       const wireId = index === undefined ? undefined : p.doc.wires[index]?.id;
       const breakWire: BreakWire | null = wireId && analysis.loop ? { id: wireId, chosen: analysis.loop.breakPoint.chosen } : null;

@@ -25,6 +25,7 @@ const query = (K: number): AnalysisQuery => ({
   values: { K },
   settlingBand: 0.02,
   sweepParameter: "K",
+  withSweep: true,
 });
 
 describe("analysis worker channel (common practice: latest-wins queue, shared with the reduction channel)", () => {

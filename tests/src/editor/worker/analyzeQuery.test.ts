@@ -13,6 +13,7 @@ const query = (document: unknown, over: Partial<AnalysisQuery> = {}): AnalysisQu
   values: {},
   settlingBand: 0.02,
   sweepParameter: null,
+  withSweep: true,
   ...over,
 });
 
@@ -82,6 +83,15 @@ describe("analysis worker's query (unity feedback around K/(s(s+2)): closed loop
     // The step response of K/(s² + 2s + K) settles to 1 (final value theorem, common practice).
     const last = sweep!.overlay[2].points.at(-1)!;
     expect(last[1]).toBeCloseTo(1, 2);
+  });
+
+  it("leaves the sweep out while its tab is closed, with the same verdict (common practice: the sweep is extra work, not a different answer)", () => {
+    const analyze = createAnalyzer();
+    const closed = ok(analyze(query(unityLoop(), { withSweep: false })));
+    expect(closed.sweep).toBeNull();
+    const open = ok(analyze(query(unityLoop(), { withSweep: true })));
+    expect(open.sweep?.parameter).toBe("K");
+    expect(open.analysis.stability.verdict).toBe(closed.analysis.stability.verdict);
   });
 
   it("reports the break wire in use: the default, a chosen one, and the default again for a removed wire", () => {

@@ -71,7 +71,13 @@ export function AnalysisPanel({ live, settings, onSettings, onPickProblem }: Pro
             onSweep={(sweepParameter) => onSettings({ sweepParameter })}
           />
         </section>
-        {result && <AnalysisTabs label="Analysis results" tabs={tabsFor(result, settings, onSettings)} />}
+        {result && (
+          <AnalysisTabs
+            label="Analysis results"
+            tabs={tabsFor(result, settings, onSettings, live.parameters.length > 0)}
+            onOpen={(key) => onSettings({ sweepShown: key === "sweep" })}
+          />
+        )}
       </div>
       <p className="border-t border-rule pt-2 text-xs text-ink-soft">
         <strong className="font-semibold text-ink">Caution: </strong>
@@ -81,7 +87,7 @@ export function AnalysisPanel({ live, settings, onSettings, onPickProblem }: Pro
   );
 }
 
-function tabsFor(result: NonNullable<LiveAnalysis["result"]>, settings: AnalysisSettings, onSettings: Props["onSettings"]): TabSpec[] {
+function tabsFor(result: NonNullable<LiveAnalysis["result"]>, settings: AnalysisSettings, onSettings: Props["onSettings"], hasParameters: boolean): TabSpec[] {
   const { analysis, sweep } = result;
   return [
     { key: "stability", label: "Stability", render: () => <StabilityView analysis={analysis} /> },
@@ -89,7 +95,12 @@ function tabsFor(result: NonNullable<LiveAnalysis["result"]>, settings: Analysis
     { key: "steady", label: "Steady state", render: () => <SteadyStateView analysis={analysis} /> },
     { key: "time", label: "Time response", render: () => <TimeResponseView analysis={analysis} band={settings.band} onBand={(band) => onSettings({ band })} /> },
     { key: "frequency", label: "Frequency", render: () => <FrequencyView analysis={analysis} /> },
-    { key: "sweep", label: "Parameter sweep", render: () => <SweepView sweep={sweep} analysis={analysis} /> },
+    {
+      key: "sweep",
+      label: "Parameter sweep",
+      // The sweep is computed only while this tab is open: the first answer after opening it brings it.
+      render: () => (sweep || !hasParameters ? <SweepView sweep={sweep} analysis={analysis} /> : <p className="text-sm text-ink-soft">Computing the root locus…</p>),
+    },
     { key: "help", label: "Definitions", render: () => <AnalysisHelp /> },
   ];
 }

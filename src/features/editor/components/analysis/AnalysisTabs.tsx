@@ -8,9 +8,13 @@ export interface TabSpec {
 }
 
 /** A tab list with arrow-key, Home and End navigation (automatic activation); one panel shown at a time. */
-export function AnalysisTabs({ label, tabs }: { label: string; tabs: TabSpec[] }) {
+export function AnalysisTabs({ label, tabs, onOpen }: { label: string; tabs: TabSpec[]; onOpen?: (key: string) => void }) {
   const base = useId();
-  const [open, setOpen] = useState(tabs[0]?.key ?? "");
+  const [open, setOpenState] = useState(tabs[0]?.key ?? "");
+  const setOpen = (key: string) => {
+    setOpenState(key);
+    onOpen?.(key);
+  };
   const buttons = useRef<(HTMLButtonElement | null)[]>([]);
   const at = Math.max(0, tabs.findIndex((t) => t.key === open));
 
