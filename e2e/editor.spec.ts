@@ -4,7 +4,9 @@ import { PASSWORD, createTeam, signUp, uniqueEmail } from "./helpers";
 // Canvas blocks and wires are found by the accessible names the editor gives them ("Transfer function G1",
 // "Wire w2 from e1 to G1"); handles are only used as drag points.
 const block = (page: Page, name: string) => page.getByRole("group", { name, exact: true });
-const wire = (page: Page, name: string) => page.getByRole("group", { name, exact: true });
+const escaped = (text: string) => text.replace(/[.*+?^${}()|[\]\\]/g, "\\$&");
+/** A wire by its description; the wire where the analysis breaks the loop says so after it. */
+const wire = (page: Page, name: string) => page.getByRole("group", { name: new RegExp(`^${escaped(name)}(, loop broken here for analysis)?$`) });
 const handle = (page: Page, nodeId: string, handleId: string) =>
   page.locator(`.react-flow__handle[data-nodeid="${nodeId}"][data-handleid="${handleId}"]`);
 const closedLoopText = (page: Page) => page.getByLabel("Closed-loop transfer function as text");
