@@ -54,6 +54,8 @@ interface LoadFigures {
   canvasMs: number;
   resultMs: number | null;
   engineStatus: string;
+  /** Elements in the whole page and inside the canvas once the result shows: what every frame lays out, hit-tests and paints. */
+  elements: { page: number; canvas: number };
 }
 
 /** Milliseconds since navigation start at the first animation frame where `count` measured block nodes are shown. */
@@ -94,7 +96,11 @@ async function load(browser: Browser, url: string, storageState: BrowserContextO
   const canvasMs = await waitForCanvas(page, BLOCKS);
   const resultMs = await waitForResult(page);
   const engineStatus = (await page.getByRole("status").filter({ hasText: /Computed in/ }).first().textContent({ timeout: 5000 }).catch(() => null)) ?? "—";
-  const figures: LoadFigures = { canvasMs, resultMs, engineStatus };
+  const elements = await page.evaluate(() => ({
+    page: document.querySelectorAll("*").length,
+    canvas: document.querySelectorAll(".react-flow *").length,
+  }));
+  const figures: LoadFigures = { canvasMs, resultMs, engineStatus, elements };
   return { page, close: () => context.close(), figures };
 }
 
@@ -181,6 +187,7 @@ function report(loads: LoadFigures[], idles: FrameFigures[], pans: FrameFigures[
   const rows: [string, string, string, string][] = [
     ["canvas ready (500 blocks shown)", ms(median(loads.map((l) => l.canvasMs))), loads.map((l) => ms(l.canvasMs)).join(", "), "< 2000 ms"],
     ["result ready (closed loop shown)", results.includes(null) ? "no result" : ms(median(results as number[])), results.map(ms).join(", "), "< 2000 ms"],
+    ["DOM elements: page (canvas)", `${median(loads.map((l) => l.elements.page))} (${median(loads.map((l) => l.elements.canvas))})`, loads.map((l) => l.elements.page).join(", "), "—"],
     ["idle frame rate (editor open, no input)", `${median(idles.map((p) => p.fps)).toFixed(1)} fps`, idles.map((p) => p.fps.toFixed(1)).join(", "), "—"],
     ["pan frame rate", `${median(pans.map((p) => p.fps)).toFixed(1)} fps`, pans.map((p) => p.fps.toFixed(1)).join(", "), "≥ 50 fps"],
     ["pan worst frame", `${Math.round(median(pans.map((p) => p.worstFrameMs)))} ms`, pans.map((p) => Math.round(p.worstFrameMs)).join(", "), "—"],

@@ -1,4 +1,4 @@
-import type { DragEvent, PointerEvent as ReactPointerEvent, RefObject } from "react";
+import { useState, type DragEvent, type PointerEvent as ReactPointerEvent, type ReactNode, type RefObject } from "react";
 import {
   Background,
   BackgroundVariant,
@@ -21,10 +21,11 @@ import type { Point } from "@/features/editor/commands/types";
 import { BranchNode, InputNode, OutputNode } from "@/features/editor/components/nodes/TerminalNodes";
 import { GainNode, IntegratorNode, TransferNode } from "@/features/editor/components/nodes/ExpressionNodes";
 import { SumNode } from "@/features/editor/components/nodes/SumNode";
+import { FarViewProvider, useFarView } from "@/features/editor/components/nodes/farView";
 import { SignalEdgeView, WireMarkers } from "@/features/editor/components/SignalEdgeView";
 import { BLOCK_MIME } from "@/features/editor/components/BlockRail";
 import type { FlowNode, SignalEdge } from "@/features/editor/lib/flowModel";
-import type { ReactNode } from "react";
+import { fitZoomEstimate } from "@/features/editor/geometry/viewport";
 
 // Module-level so the canvas never sees new type tables (which would remount every node).
 const nodeTypes = {
@@ -37,6 +38,16 @@ const nodeTypes = {
   branch: BranchNode,
 } satisfies NodeTypes;
 const edgeTypes = { signal: SignalEdgeView } satisfies EdgeTypes;
+
+const MIN_ZOOM = 0.2;
+/** A typical block's extent in flow pixels, for estimating where the first fit-to-view lands. */
+const TYPICAL_BLOCK = 120;
+
+/** Dots on the grid; zoomed far out every fourth, so the pane does not repaint a dense haze on each pan frame. */
+function CanvasGrid() {
+  const far = useFarView();
+  return <Background variant={BackgroundVariant.Dots} gap={far ? GRID * 4 : GRID} size={far ? 4 : 1.2} color="#b9b2a3" />;
+}
 
 const portOf = (handle: string | null | undefined) => (handle && handle.startsWith("in") && handle !== "in" ? Number(handle.slice(2)) : undefined);
 
@@ -56,6 +67,17 @@ interface Props {
 /** The drawing surface: blocks, wires, grid, zoom and pan, overview map; it draws, the document decides. */
 export function DiagramCanvas({ nodes, edges, onNodesChange, onEdgesChange, readOnly, pointer, onConnectWire, onDropBlock, children }: Props) {
   const flow = useReactFlow();
+  // A large diagram starts at about the zoom the first fit-to-view lands on, so its blocks are drawn once in
+  // their far form rather than typeset first and redrawn. The window bounds the canvas from above.
+  const [opening] = useState(() => ({
+    x: 0,
+    y: 0,
+    zoom: fitZoomEstimate(
+      nodes.map((n) => n.position),
+      { width: window.innerWidth, height: window.innerHeight },
+      { min: MIN_ZOOM, max: 1, block: TYPICAL_BLOCK },
+    ),
+  }));
 
   const onConnect = (c: Connection) => onConnectWire({ from: c.source, to: c.target, port: portOf(c.targetHandle) });
 
@@ -85,44 +107,48 @@ export function DiagramCanvas({ nodes, edges, onNodesChange, onEdgesChange, read
   };
 
   return (
-    <div className="relative size-full" onPointerMove={track} onPointerDown={track} onDragOver={onDragOver} onDrop={onDrop}>
+    // No text selection on the canvas: a drag pans or moves, and selection tracking costs every pan frame.
+    <div className="relative size-full select-none" onPointerMove={track} onPointerDown={track} onDragOver={onDragOver} onDrop={onDrop}>
       <WireMarkers />
-      <ReactFlow<FlowNode, SignalEdge>
-        nodes={nodes}
-        edges={edges}
-        nodeTypes={nodeTypes}
-        edgeTypes={edgeTypes}
-        onNodesChange={onNodesChange}
-        onEdgesChange={onEdgesChange}
-        onConnect={onConnect}
-        onConnectEnd={onConnectEnd}
-        nodesDraggable={!readOnly}
-        nodesConnectable={!readOnly}
-        elementsSelectable
-        deleteKeyCode={null}
-        snapToGrid
-        snapGrid={[GRID, GRID]}
-        minZoom={0.2}
-        maxZoom={2.5}
-        fitView
-        fitViewOptions={{ padding: 0.25, maxZoom: 1.2 }}
-        connectionRadius={24}
-        aria-label="Diagram canvas"
-        className="bg-paper"
-      >
-        <Background variant={BackgroundVariant.Dots} gap={GRID} size={1.2} color="#b9b2a3" />
-        <Controls showInteractive={false} showFitView={false} position="bottom-left" />
-        <MiniMap
-          pannable
-          zoomable
-          position="bottom-right"
-          ariaLabel="Overview of the whole diagram"
-          nodeColor={(n) => ((n as FlowNode).data.highlighted ? "#d4891c" : n.selected ? "#1d5c63" : "#b9b2a3")}
-          maskColor="rgba(235, 232, 224, 0.7)"
-          className="!border !border-rule !bg-paper-raised"
-        />
-        {children}
-      </ReactFlow>
+      <FarViewProvider>
+        <ReactFlow<FlowNode, SignalEdge>
+          nodes={nodes}
+          edges={edges}
+          nodeTypes={nodeTypes}
+          edgeTypes={edgeTypes}
+          onNodesChange={onNodesChange}
+          onEdgesChange={onEdgesChange}
+          onConnect={onConnect}
+          onConnectEnd={onConnectEnd}
+          nodesDraggable={!readOnly}
+          nodesConnectable={!readOnly}
+          elementsSelectable
+          deleteKeyCode={null}
+          snapToGrid
+          snapGrid={[GRID, GRID]}
+          minZoom={MIN_ZOOM}
+          maxZoom={2.5}
+          defaultViewport={opening}
+          fitView
+          fitViewOptions={{ padding: 0.25, maxZoom: 1.2 }}
+          connectionRadius={24}
+          aria-label="Diagram canvas"
+          className="bg-paper"
+        >
+          <CanvasGrid />
+          <Controls showInteractive={false} showFitView={false} position="bottom-left" />
+          <MiniMap
+            pannable
+            zoomable
+            position="bottom-right"
+            ariaLabel="Overview of the whole diagram"
+            nodeColor={(n) => ((n as FlowNode).data.highlighted ? "#d4891c" : n.selected ? "#1d5c63" : "#b9b2a3")}
+            maskColor="rgba(235, 232, 224, 0.7)"
+            className="!border !border-rule !bg-paper-raised"
+          />
+          {children}
+        </ReactFlow>
+      </FarViewProvider>
     </div>
   );
 }

@@ -1,6 +1,6 @@
-import { memo } from "react";
+import { memo, useMemo } from "react";
 import { BaseEdge, useInternalNode, type EdgeProps, type InternalNode } from "@xyflow/react";
-import { roundedPath, wireRoute, type Box } from "@/features/editor/geometry/wireRoute";
+import { midpointAlong, roundedPath, wireRoute, type Box, type WirePlace } from "@/features/editor/geometry/wireRoute";
 import type { SignalEdge } from "@/features/editor/lib/flowModel";
 
 /** Stroke colours and the matching arrowhead markers (defined once in WireMarkers). */
@@ -11,6 +11,8 @@ const LOOK = {
   fault: { stroke: "#a23a2c", marker: "lw-arrow-fault" },
 } as const;
 
+const PAPER = "#f5f3ee";
+
 const boxOf = (n: InternalNode | undefined): Box => ({
   x: n?.internals.positionAbsolute.x ?? 0,
   y: n?.internals.positionAbsolute.y ?? 0,
@@ -18,27 +20,49 @@ const boxOf = (n: InternalNode | undefined): Box => ({
   height: n?.measured.height ?? 0,
 });
 
+/**
+ * Where the analysis breaks the loop: the wire cut by a gap between two bars across it, and a small tag,
+ * so the mark reads without colour.
+ */
+function BreakMark({ at, stroke }: { at: WirePlace; stroke: string }) {
+  const tag = at.horizontal ? ({ x: at.x, y: at.y - 11, anchor: "middle" } as const) : ({ x: at.x + 10, y: at.y + 3, anchor: "start" } as const);
+  return (
+    <g aria-hidden className="pointer-events-none">
+      <g transform={`translate(${at.x} ${at.y})${at.horizontal ? "" : " rotate(90)"}`}>
+        <rect x={-3.5} y={-4} width={7} height={8} fill={PAPER} />
+        <path d="M -3.5 -7 V 7 M 3.5 -7 V 7" stroke={stroke} strokeWidth={2} strokeLinecap="round" />
+      </g>
+      <text x={tag.x} y={tag.y} textAnchor={tag.anchor} fontSize={9} fontFamily="'IBM Plex Mono', monospace" fill={stroke} stroke={PAPER} strokeWidth={3} paintOrder="stroke">
+        break
+      </text>
+    </g>
+  );
+}
+
 /** A signal wire: orthogonal route from the utility module, an arrowhead at the input it feeds. */
 export const SignalEdgeView = memo(function SignalEdgeView(props: EdgeProps<SignalEdge>) {
   const { id, source, target, sourceX, sourceY, targetX, targetY, data, selected } = props;
-  const sourceNode = useInternalNode(source);
-  const targetNode = useInternalNode(target);
-  const points = wireRoute({
-    source: { x: sourceX, y: sourceY },
-    target: { x: targetX, y: targetY },
-    side: data?.side ?? "left",
-    sourceBox: boxOf(sourceNode),
-    targetBox: boxOf(targetNode),
-  });
+  const side = data?.side ?? "left";
+  const sourceBox = boxOf(useInternalNode(source));
+  const targetBox = boxOf(useInternalNode(target));
+  // Routing reruns only when an end moved or resized, not on every store update that re-renders the wire.
+  const points = useMemo(
+    () => wireRoute({ source: { x: sourceX, y: sourceY }, target: { x: targetX, y: targetY }, side, sourceBox, targetBox }),
+    [sourceX, sourceY, targetX, targetY, side, ...Object.values(sourceBox), ...Object.values(targetBox)],
+  );
+  const path = useMemo(() => roundedPath(points), [points]);
   const look = data?.highlighted ? LOOK.step : selected ? LOOK.selected : data?.problem === "error" ? LOOK.fault : LOOK.plain;
   return (
-    <BaseEdge
-      id={id}
-      path={roundedPath(points)}
-      markerEnd={`url(#${look.marker})`}
-      interactionWidth={14}
-      style={{ stroke: look.stroke, strokeWidth: data?.highlighted || selected ? 2.5 : 1.6 }}
-    />
+    <>
+      <BaseEdge
+        id={id}
+        path={path}
+        markerEnd={`url(#${look.marker})`}
+        interactionWidth={14}
+        style={{ stroke: look.stroke, strokeWidth: data?.highlighted || selected ? 2.5 : 1.6 }}
+      />
+      {data?.isBreak && <BreakMark at={midpointAlong(points)} stroke={look.stroke} />}
+    </>
   );
 });
 

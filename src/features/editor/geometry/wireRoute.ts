@@ -52,14 +52,18 @@ export function wireRoute({ source: s, target: t, side, sourceBox, targetBox }: 
   return simplify([s, { x: out, y: s.y }, { x: out, y: high }, { x: t.x, y: high }, t]);
 }
 
-/** Drops repeated points and the middle of three collinear points. */
+/**
+ * Drops repeated points and the middle of three collinear points that run one way; a point where the wire
+ * turns back on itself stays, or a detour above a top port would end arriving from below.
+ */
 function simplify(points: Point[]): Point[] {
   const kept: Point[] = [];
   for (const p of points) {
     const last = kept[kept.length - 1];
     if (last && last.x === p.x && last.y === p.y) continue;
     const prev = kept[kept.length - 2];
-    if (prev && last && ((prev.x === last.x && last.x === p.x) || (prev.y === last.y && last.y === p.y))) kept.pop();
+    const onward = prev && last && (last.x - prev.x) * (p.x - last.x) >= 0 && (last.y - prev.y) * (p.y - last.y) >= 0;
+    if (onward && ((prev.x === last.x && last.x === p.x) || (prev.y === last.y && last.y === p.y))) kept.pop();
     kept.push(p);
   }
   return kept;
@@ -83,4 +87,27 @@ export function roundedPath(points: Point[], radius = 6): string {
 function towards(from: Point, to: Point, distance: number): Point {
   const length = Math.hypot(to.x - from.x, to.y - from.y) || 1;
   return { x: from.x + ((to.x - from.x) / length) * distance, y: from.y + ((to.y - from.y) / length) * distance };
+}
+
+/** A point on a wire and the direction of the segment it lies on. */
+export interface WirePlace extends Point {
+  horizontal: boolean;
+}
+
+/**
+ * The point halfway along a polyline by length, on the segment that holds it (a zero-length polyline gives
+ * its first point). Example: [(0,0), (10,0), (10,30)] → (10, 5), vertical.
+ */
+export function midpointAlong(points: Point[]): WirePlace {
+  const lengths = points.slice(1).map((p, i) => Math.hypot(p.x - points[i].x, p.y - points[i].y));
+  let left = lengths.reduce((a, b) => a + b, 0) / 2;
+  for (let i = 0; i < lengths.length; i += 1) {
+    const [a, b] = [points[i], points[i + 1]];
+    if (lengths[i] > 0 && left <= lengths[i]) {
+      const f = left / lengths[i];
+      return { x: a.x + (b.x - a.x) * f, y: a.y + (b.y - a.y) * f, horizontal: a.y === b.y };
+    }
+    left -= lengths[i];
+  }
+  return { x: points[0]?.x ?? 0, y: points[0]?.y ?? 0, horizontal: true };
 }

@@ -5,23 +5,38 @@ import { buildEdges, buildNodes, type FlowNode, type Marks, type SignalEdge } fr
 
 type Size = { width: number; height: number };
 
-/** Keeps a node object when nothing it shows changed, so memoised node components skip re-rendering. */
-function reuse(prev: Map<string, FlowNode>, next: FlowNode[]): FlowNode[] {
+/** Keeps the previous object for an id when `same` says nothing it shows changed, so memoised views skip re-rendering. */
+function reuse<T extends { id: string }>(prev: ReadonlyMap<string, T>, next: T[], same: (old: T, now: T) => boolean): T[] {
   return next.map((n) => {
     const old = prev.get(n.id);
-    const same =
-      old &&
-      old.data.block === n.data.block &&
-      old.data.highlighted === n.data.highlighted &&
-      old.data.problem === n.data.problem &&
-      old.selected === n.selected &&
-      old.position.x === n.position.x &&
-      old.position.y === n.position.y &&
-      old.measured?.width === n.measured?.width &&
-      old.measured?.height === n.measured?.height;
-    return same ? old : n;
+    return old && same(old, n) ? old : n;
   });
 }
+
+const sameNode = (old: FlowNode, n: FlowNode) =>
+  old.data.block === n.data.block &&
+  old.data.highlighted === n.data.highlighted &&
+  old.data.problem === n.data.problem &&
+  old.selected === n.selected &&
+  old.position.x === n.position.x &&
+  old.position.y === n.position.y &&
+  old.measured?.width === n.measured?.width &&
+  old.measured?.height === n.measured?.height;
+
+// A wire's object is rebuilt whenever marks or the selection change; most wires look the same afterwards.
+const sameEdge = (old: SignalEdge, e: SignalEdge) =>
+  old.source === e.source &&
+  old.target === e.target &&
+  old.targetHandle === e.targetHandle &&
+  old.selected === e.selected &&
+  old.ariaLabel === e.ariaLabel &&
+  old.data?.highlighted === e.data?.highlighted &&
+  old.data?.problem === e.data?.problem &&
+  old.data?.isBreak === e.data?.isBreak &&
+  old.data?.side === e.data?.side;
+
+/** The latest list, keyed by id, for the next round of `reuse`. */
+const byId = <T extends { id: string }>(items: T[]) => new Map(items.map((x) => [x.id, x]));
 
 /**
  * The canvas's view of the document: the document stays the truth; this hook adds the selection, the
@@ -32,14 +47,19 @@ export function useFlowState(doc: EditorDoc, marks: Marks, onMoved: (moves: Reco
   const [selection, setSelection] = useState<Selection>({ blocks: [], wires: [] });
   const [dragging, setDragging] = useState<ReadonlyMap<string, Point>>(new Map());
   const [measured, setMeasured] = useState<ReadonlyMap<string, Size>>(new Map());
-  const previous = useRef(new Map<string, FlowNode>());
+  const previousNodes = useRef(new Map<string, FlowNode>());
+  const previousEdges = useRef(new Map<string, SignalEdge>());
 
   const nodes = useMemo(() => {
-    const built = reuse(previous.current, buildNodes(doc, marks, { selection, dragging, measured }));
-    previous.current = new Map(built.map((n) => [n.id, n]));
+    const built = reuse(previousNodes.current, buildNodes(doc, marks, { selection, dragging, measured }), sameNode);
+    previousNodes.current = byId(built);
     return built;
   }, [doc, marks, selection, dragging, measured]);
-  const edges = useMemo<SignalEdge[]>(() => buildEdges(doc, marks, selection), [doc, marks, selection]);
+  const edges = useMemo(() => {
+    const built = reuse(previousEdges.current, buildEdges(doc, marks, selection), sameEdge);
+    previousEdges.current = byId(built);
+    return built;
+  }, [doc, marks, selection]);
 
   const onNodesChange = useCallback(
     (changes: NodeChange<FlowNode>[]) => {

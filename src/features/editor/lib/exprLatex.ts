@@ -2,17 +2,20 @@ import { lexExpression } from "@shared/expr/lexer";
 import { parseExpression } from "@shared/expr/parse";
 import type { ExprNode } from "@shared/expr/ast";
 
-const GREEK = new Set([
-  "alpha", "beta", "gamma", "delta", "epsilon", "zeta", "eta", "theta", "iota", "kappa", "lambda", "mu", "nu", "xi",
-  "pi", "rho", "sigma", "tau", "upsilon", "phi", "chi", "psi", "omega", "Gamma", "Delta", "Theta", "Lambda", "Xi",
-  "Pi", "Sigma", "Phi", "Psi", "Omega",
-]);
+/** Greek letter names engineers type, with the letter each stands for. */
+const GREEK: Record<string, string> = {
+  alpha: "α", beta: "β", gamma: "γ", delta: "δ", epsilon: "ε", zeta: "ζ", eta: "η", theta: "θ", iota: "ι", kappa: "κ",
+  lambda: "λ", mu: "μ", nu: "ν", xi: "ξ", pi: "π", rho: "ρ", sigma: "σ", tau: "τ", upsilon: "υ", phi: "φ", chi: "χ",
+  psi: "ψ", omega: "ω", Gamma: "Γ", Delta: "Δ", Theta: "Θ", Lambda: "Λ", Xi: "Ξ", Pi: "Π", Sigma: "Σ", Phi: "Φ",
+  Psi: "Ψ", Omega: "Ω",
+};
+const isGreek = (name: string) => Object.hasOwn(GREEK, name);
 
 /** A parameter name as engineers write it: `tau` → τ, `K_p` → K with subscript p, `Kp` upright-italic as one symbol. */
 export function nameLatex(name: string): string {
   const cut = name.indexOf("_");
   const [base, sub] = cut > 0 ? [name.slice(0, cut), name.slice(cut + 1)] : [name, ""];
-  const head = GREEK.has(base) ? `\\${base}` : base.length > 1 ? `\\mathit{${base}}` : base;
+  const head = isGreek(base) ? `\\${base}` : base.length > 1 ? `\\mathit{${base}}` : base;
   return sub ? `${head}_{${sub.replaceAll("_", "\\_")}}` : head;
 }
 
@@ -66,13 +69,93 @@ function productLatex(left: ExprNode, right: ExprNode): string {
 }
 
 /**
- * LaTeX of an expression as typed, for drawing it on a block; null when it does not parse. Names are
- * accepted whether declared or not — undeclared ones are reported by validation, not hidden here.
+ * Plain text of an expression, for the far-zoom drawing of a block where typesetting would not be legible:
+ * Greek names as letters, explicit `·` only where juxtaposition would misread. Example: K*(s+2) → K(s + 2), Kd*s → Kd·s.
  */
-export function expressionLatex(expr: string): string | null {
+export function exprText(node: ExprNode): string {
+  switch (node.kind) {
+    case "num":
+      return node.den === 1n ? node.num.toString() : `${node.num}/${node.den}`;
+    case "s":
+      return "s";
+    case "param":
+      return node.name.split("_").map((part) => (isGreek(part) ? GREEK[part] : part)).join("_");
+    case "add":
+      return `${exprText(node.left)} + ${exprText(node.right)}`;
+    case "sub": {
+      const right = exprText(node.right);
+      return `${exprText(node.left)} − ${isSum(node.right) || node.right.kind === "neg" ? `(${right})` : right}`;
+    }
+    case "mul": {
+      const [l, r] = [textFactor(node.left), textFactor(node.right)];
+      // Juxtapose only between a closing parenthesis, a number or a one-letter name on the left and a
+      // parenthesis or one-letter name on the right: Kd·s, ω_n·s, s^2·s, s·K_p read apart.
+      const tail = /[\p{L}\d_^]+$/u.exec(l)?.[0] ?? "";
+      const head = /^[\p{L}\d_]+/u.exec(r)?.[0] ?? "";
+      const tight = (l.endsWith(")") || /^\d+$/.test(tail) || [...tail].length === 1) && (r.startsWith("(") || /^\p{L}$/u.test(head));
+      return tight ? `${l}${r}` : `${l}·${r}`;
+    }
+    case "div":
+      return `${textFactor(node.left)}/${textFactor(node.right, true)}`;
+    case "neg": {
+      const arg = exprText(node.arg);
+      return `−${isSum(node.arg) || node.arg.kind === "neg" ? `(${arg})` : arg}`;
+    }
+    case "pow": {
+      const atomic = node.base.kind === "s" || node.base.kind === "param" || (node.base.kind === "num" && node.base.den === 1n);
+      const base = exprText(node.base);
+      return `${atomic ? base : `(${base})`}^${node.exp}`;
+    }
+  }
+}
+
+/** A factor in parentheses when it would otherwise bind wrongly; a denominator also when it is a product. */
+function textFactor(node: ExprNode, denominator = false): string {
+  const text = exprText(node);
+  const loose =
+    isSum(node) || node.kind === "neg" || node.kind === "div" || (node.kind === "num" && node.den !== 1n) || (denominator && node.kind === "mul");
+  return loose ? `(${text})` : text;
+}
+
+/**
+ * `compute` remembered for the last `limit` keys (oldest dropped first): a diagram repeats few expressions, so
+ * each is parsed or typeset once per page. Example: boundedMemo(2, f)("a") calls f("a") once however often asked.
+ */
+export function boundedMemo<V>(limit: number, compute: (key: string) => V): (key: string) => V {
+  const kept = new Map<string, V>();
+  return (key) => {
+    if (kept.has(key)) return kept.get(key) as V;
+    const value = compute(key);
+    if (kept.size >= limit) kept.delete(kept.keys().next().value as string);
+    kept.set(key, value);
+    return value;
+  };
+}
+
+/** The tree of a block expression as typed; names count whether declared or not (validation reports those). */
+const blockExpression = boundedMemo(400, (expr: string): ExprNode | null => {
   const lexed = lexExpression(expr);
   if ("error" in lexed) return null;
   const names = lexed.tokens.flatMap((t) => (t.kind === "name" && t.text !== "s" ? [t.text] : []));
   const parsed = parseExpression(expr, { allowS: true, parameters: names });
-  return parsed.ok ? exprLatex(parsed.ast) : null;
+  return parsed.ok ? parsed.ast : null;
+});
+
+/**
+ * LaTeX of an expression as typed, for drawing it on a block; null when it does not parse. Names are
+ * accepted whether declared or not — undeclared ones are reported by validation, not hidden here.
+ */
+export function expressionLatex(expr: string): string | null {
+  const ast = blockExpression(expr);
+  return ast ? exprLatex(ast) : null;
+}
+
+/**
+ * Numerator and denominator of an expression as plain text (denominator null when the top level is not a
+ * division), for the far-zoom drawing; null when it does not parse. Example: "K/(s+2)" → { num: "K", den: "s + 2" }.
+ */
+export function expressionFraction(expr: string): { num: string; den: string | null } | null {
+  const ast = blockExpression(expr);
+  if (!ast) return null;
+  return ast.kind === "div" ? { num: exprText(ast.left), den: exprText(ast.right) } : { num: exprText(ast), den: null };
 }

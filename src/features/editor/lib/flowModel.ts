@@ -54,9 +54,9 @@ export const fallbackPosition = (index: number): Point => ({ x: 48 + (index % 6)
 
 const blockAriaLabel = (b: Block) => `${TYPE_NAME[b.type]} ${b.id}${b.label ? ` (${b.label})` : ""}`;
 
-export function wireAriaLabel(w: EditorWire, target: Block | undefined): string {
+export function wireAriaLabel(w: EditorWire, target: Block | undefined, isBreak = false): string {
   const into = target?.type === "sum" && w.port !== undefined ? ` port ${w.port} (${target.signs[w.port] === "-" ? "minus" : "plus"})` : "";
-  return `Wire ${w.id} from ${w.from} to ${w.to}${into}`;
+  return `Wire ${w.id} from ${w.from} to ${w.to}${into}${isBreak ? ", loop broken here for analysis" : ""}`;
 }
 
 interface Transient {
@@ -94,6 +94,7 @@ export function buildEdges(doc: EditorDoc, marks: Marks, selection: Selection): 
     const target = blocks.get(w.to);
     const side: Side = target?.type === "sum" && w.port !== undefined ? (sumPortPlaces(target.signs.length)[w.port]?.side ?? "left") : "left";
     const highlighted = marks.highlightWires.has(w.id);
+    const isBreak = marks.breakWire === w.id;
     return {
       id: w.id,
       type: "signal",
@@ -102,8 +103,8 @@ export function buildEdges(doc: EditorDoc, marks: Marks, selection: Selection): 
       sourceHandle: OUT_HANDLE,
       targetHandle: inHandle(target?.type === "sum" ? w.port : undefined),
       selected: selected.has(w.id),
-      data: { highlighted, problem: marks.wireProblems.get(w.id) ?? null, isBreak: marks.breakWire === w.id, side },
-      ariaLabel: wireAriaLabel(w, target),
+      data: { highlighted, problem: marks.wireProblems.get(w.id) ?? null, isBreak, side },
+      ariaLabel: wireAriaLabel(w, target, isBreak),
       domAttributes: stepAttrs(highlighted),
     };
   });

@@ -2,7 +2,7 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import type { Point } from "@/features/editor/commands/types";
 import { sumDiameter, sumPortPlaces, type Side } from "@/features/editor/geometry/sumPorts";
-import { GAP, roundedPath, wireRoute, type Box } from "@/features/editor/geometry/wireRoute";
+import { GAP, midpointAlong, roundedPath, wireRoute, type Box } from "@/features/editor/geometry/wireRoute";
 
 const box = (x: number, y: number, width = 80, height = 48): Box => ({ x, y, width, height });
 /** Output on the right edge, middle height. */
@@ -64,9 +64,49 @@ describe("wire routing (common practice for block diagrams: orthogonal wires, fe
     expect(pts).toHaveLength(6);
   });
 
+  it("a detour that climbs past a top port straight above the output comes back down into it, not up from below", () => {
+    // Found by the property above: the output's stub ends exactly under the top port.
+    const sourceBox = box(-383, 0);
+    const targetBox = box(-327, 0);
+    const pts = wireRoute({ source: outOf(sourceBox), target: inOf(targetBox, "top"), side: "top", sourceBox, targetBox });
+    expect(pts).toEqual([
+      { x: -303, y: 24 },
+      { x: -287, y: 24 },
+      { x: -287, y: -GAP },
+      { x: -287, y: 0 },
+    ]);
+  });
+
   it("the SVG path follows the polyline with its corners rounded, less on short segments", () => {
     expect(roundedPath([{ x: 0, y: 0 }, { x: 100, y: 0 }, { x: 100, y: 50 }])).toBe("M 0 0 L 94 0 Q 100 0 100 6 L 100 50");
     expect(roundedPath([{ x: 0, y: 0 }, { x: 4, y: 0 }, { x: 4, y: 50 }])).toBe("M 0 0 L 2 0 Q 4 0 4 2 L 4 50");
+  });
+});
+
+describe("the middle of a wire (common practice: the point at half the arc length of the polyline)", () => {
+  it("lies on the route, half its length from each end (property)", () => {
+    const length = (pts: Point[]) => pts.slice(1).reduce((sum, p, i) => sum + Math.abs(p.x - pts[i].x) + Math.abs(p.y - pts[i].y), 0);
+    fc.assert(
+      fc.property(coord, coord, coord, coord, fc.constantFrom<Side>("left", "top", "bottom"), (sx, sy, tx, ty, side) => {
+        const sourceBox = box(sx, sy);
+        const targetBox = box(tx, ty);
+        const pts = wireRoute({ source: outOf(sourceBox), target: inOf(targetBox, side), side, sourceBox, targetBox });
+        const mid = midpointAlong(pts);
+        // The segment holding the midpoint, found independently: the first one whose span contains it.
+        const k = pts.slice(1).findIndex((p, i) => Math.min(p.x, pts[i].x) <= mid.x && mid.x <= Math.max(p.x, pts[i].x) && Math.min(p.y, pts[i].y) <= mid.y && mid.y <= Math.max(p.y, pts[i].y));
+        expect(k).toBeGreaterThanOrEqual(0);
+        const before = [...pts.slice(0, k + 1), { x: mid.x, y: mid.y }];
+        expect(length(before)).toBeCloseTo(length(pts) / 2, 6);
+        if (pts[k].x !== pts[k + 1].x || pts[k].y !== pts[k + 1].y) expect(mid.horizontal).toBe(pts[k].y === pts[k + 1].y);
+      }),
+      { numRuns: 300 },
+    );
+  });
+
+  it("of an L: 10 along then 30 down is 40 long, so the middle is 10 down the vertical leg", () => {
+    expect(midpointAlong([{ x: 0, y: 0 }, { x: 10, y: 0 }, { x: 10, y: 30 }])).toEqual({ x: 10, y: 10, horizontal: false });
+    expect(midpointAlong([{ x: 0, y: 0 }, { x: 40, y: 0 }])).toEqual({ x: 20, y: 0, horizontal: true });
+    expect(midpointAlong([{ x: 5, y: 5 }])).toEqual({ x: 5, y: 5, horizontal: true });
   });
 });
 

@@ -17,6 +17,13 @@ describe("canvas model of a document", () => {
     expect(edges[3].ariaLabel).toBe("Wire w4 from G to e port 1 (minus)");
   });
 
+  it("the wire where the analysis breaks the loop says so in its accessible name, not by colour alone (WCAG 1.4.1)", () => {
+    const edges = buildEdges(unityLoop(), problemMarks([], null, "w4"), { blocks: [], wires: [] });
+    expect(edges.filter((e) => e.data?.isBreak).map((e) => e.id)).toEqual(["w4"]);
+    expect(edges[3].ariaLabel).toBe("Wire w4 from G to e port 1 (minus), loop broken here for analysis");
+    expect(edges[1].ariaLabel).toBe("Wire w2 from e to G");
+  });
+
   it("marks what a reduction step consumed with aria-current=step, and problems by worst severity", () => {
     const step = { index: 0, rule: "feedback" as const, description: "", consumedBlocks: ["G"], consumedWires: ["w2", "w4"], produced: "eq1", expr: "", latex: "" };
     const marks = problemMarks(

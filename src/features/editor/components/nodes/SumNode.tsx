@@ -1,8 +1,9 @@
-import { memo, type CSSProperties } from "react";
+import { Fragment, memo, type CSSProperties } from "react";
 import { Handle, Position, type NodeProps } from "@xyflow/react";
 import { toggleSign } from "@/features/editor/commands/sum";
 import { useEditorActions } from "@/features/editor/components/EditorContext";
 import { Caption } from "@/features/editor/components/nodes/Caption";
+import { useFarView } from "@/features/editor/components/nodes/farView";
 import { OutPort } from "@/features/editor/components/nodes/Ports";
 import { handleClass, strokeColor } from "@/features/editor/components/nodes/nodeStyle";
 import { sumDiameter, sumPortPlaces, type PortPlace } from "@/features/editor/geometry/sumPorts";
@@ -10,12 +11,15 @@ import { inHandle, type NodeOf } from "@/features/editor/lib/flowModel";
 
 const POSITION = { left: Position.Left, top: Position.Top, bottom: Position.Bottom } as const;
 
-/** Where a port's handle sits on the circle's bounding square, and where its sign is drawn just inside. */
+/**
+ * Where a port's handle sits on the circle's bounding square, and where its 12-px sign box is drawn just inside
+ * (centred by negative margins, not a transform: see handleClass).
+ */
 function placeStyles({ side, fraction }: PortPlace): { handle: CSSProperties; sign: CSSProperties } {
   const along = `${fraction * 100}%`;
-  if (side === "left") return { handle: { top: along }, sign: { top: along, left: 5, transform: "translateY(-50%)" } };
-  if (side === "top") return { handle: { left: along }, sign: { left: along, top: 3, transform: "translateX(-50%)" } };
-  return { handle: { left: along }, sign: { left: along, bottom: 3, transform: "translateX(-50%)" } };
+  if (side === "left") return { handle: { top: along }, sign: { top: along, left: 3, marginTop: -6 } };
+  if (side === "top") return { handle: { left: along }, sign: { left: along, top: 2, marginLeft: -6 } };
+  return { handle: { left: along }, sign: { left: along, bottom: 2, marginLeft: -6 } };
 }
 
 /** A summing junction: a circle with one input per sign, each sign drawn beside its port and flipped by a click. */
@@ -25,6 +29,7 @@ export const SumNode = memo(function SumNode({ id, data, selected }: NodeProps<N
   const size = sumDiameter(signs.length);
   const places = sumPortPlaces(signs.length);
   const stroke = strokeColor(selected, data.highlighted, data.problem);
+  const far = useFarView();
   return (
     <div className="relative" style={{ width: size, height: size }}>
       <Caption block={data.block} />
@@ -37,20 +42,22 @@ export const SumNode = memo(function SumNode({ id, data, selected }: NodeProps<N
           boxShadow: selected || data.highlighted ? `0 0 0 3px ${data.highlighted ? "rgba(212,137,28,0.35)" : "rgba(29,92,99,0.25)"}` : undefined,
         }}
       />
-      {/* A faint cross marks the junction without naming any particular drawing convention. */}
-      <svg aria-hidden className="absolute inset-0 size-full" viewBox="0 0 10 10">
-        <path d="M3.4 5 H6.6 M5 3.4 V6.6" stroke="#b9b2a3" strokeWidth="0.5" strokeLinecap="round" />
-      </svg>
+      {/* A faint cross marks the junction without naming any particular drawing convention (too faint to see far out). */}
+      {!far && (
+        <svg aria-hidden className="absolute inset-0 size-full" viewBox="0 0 10 10">
+          <path d="M3.4 5 H6.6 M5 3.4 V6.6" stroke="#b9b2a3" strokeWidth="0.5" strokeLinecap="round" />
+        </svg>
+      )}
       {places.map((place, port) => {
         const styles = placeStyles(place);
         const sign = signs[port];
         const shown = sign === "+" ? "+" : "−";
         const name = `Sign of port ${port} of ${id}: ${sign === "+" ? "plus" : "minus"}`;
         return (
-          <div key={port}>
+          <Fragment key={port}>
             <Handle type="target" id={inHandle(port)} position={POSITION[place.side]} className={handleClass} style={styles.handle} />
             {readOnly ? (
-              <span aria-label={name} className="absolute font-mono text-xs leading-none font-semibold" style={styles.sign}>
+              <span aria-label={name} className="absolute flex size-3 items-center justify-center font-mono text-xs leading-none font-semibold" style={styles.sign}>
                 {shown}
               </span>
             ) : (
@@ -59,13 +66,13 @@ export const SumNode = memo(function SumNode({ id, data, selected }: NodeProps<N
                 aria-label={`${name}. Flip it`}
                 title="Flip this sign"
                 onClick={() => act("Flip sign", (d) => toggleSign(d, id, port))}
-                className="nodrag absolute z-10 rounded-sm px-0.5 font-mono text-xs leading-none font-semibold text-ink hover:bg-signal-tint"
+                className="nodrag absolute z-10 flex size-3 items-center justify-center rounded-sm font-mono text-xs leading-none font-semibold text-ink hover:bg-signal-tint"
                 style={styles.sign}
               >
                 {shown}
               </button>
             )}
-          </div>
+          </Fragment>
         );
       })}
       <OutPort style={{ top: "50%" }} />

@@ -17,4 +17,8 @@ export function strokeColor(selected: boolean, highlighted: boolean, problem: Se
   return "#4d5663";
 }
 
-export const handleClass = "!size-2.5 !rounded-[2px] !border-[1.5px] !border-ink-soft !bg-paper-raised";
+/**
+ * A port: 10 px square centred on the block's edge by negative margins instead of the library's translate,
+ * which would give each of a large diagram's ~1,300 ports its own transform to composite on every pan frame.
+ */
+export const handleClass = "!size-2.5 !-m-[5px] !transform-none !rounded-[2px] !border-[1.5px] !border-ink-soft !bg-paper-raised";
