@@ -25,3 +25,20 @@ export function makeDoc(
     }),
   };
 }
+
+/**
+ * Unity negative feedback around (s − 1)/(s + 2) · 1/(s − 1): the unstable mode s = 1 cancels in T(s) = 1/(s + 3)
+ * but stays in the loop (common practice: unstable pole-zero cancellation).
+ */
+export const hiddenUnstableLoop = (): DiagramDocument =>
+  makeDoc(
+    [
+      { id: "r", type: "input" },
+      { id: "e", type: "sum", signs: ["+", "-"] },
+      { id: "c", type: "transfer", expr: "(s - 1)/(s + 2)" },
+      { id: "g", type: "transfer", expr: "1/(s - 1)" },
+      { id: "b", type: "branch" },
+      { id: "y", type: "output" },
+    ],
+    ["r->e:0", "e->c", "c->g", "g->b", "b->y", "b->e:1"],
+  );

@@ -3,7 +3,7 @@ import { analyzeAt } from "@shared/analysis/analyze";
 import { analyzeDocument } from "@shared/analysis/analyzeDocument";
 import { prepareAnalysis } from "@shared/analysis/prepare";
 import { analysisResultSchema } from "@shared/analysis/schema";
-import { makeDoc } from "../../support/docBuilder";
+import { hiddenUnstableLoop, makeDoc } from "../../support/docBuilder";
 
 /** Unity negative feedback around a transfer expression. */
 const feedback = (g: string, parameters: Record<string, number> = {}) =>
@@ -49,17 +49,7 @@ describe("analysis of a document", () => {
   });
 
   it("a hidden unstable mode is reported, not shown as a pole, and the characteristic verdict differs (common practice: unstable pole-zero cancellation)", () => {
-    const doc = makeDoc(
-      [
-        { id: "r", type: "input" },
-        { id: "e", type: "sum", signs: ["+", "-"] },
-        { id: "c", type: "transfer", expr: "(s - 1)/(s + 2)" },
-        { id: "g", type: "transfer", expr: "1/(s - 1)" },
-        { id: "b", type: "branch" },
-        { id: "y", type: "output" },
-      ],
-      ["r->e:0", "e->c", "c->g", "g->b", "b->y", "b->e:1"],
-    );
+    const doc = hiddenUnstableLoop();
     const a = analyzeAt(prepared(doc));
     expect(a.poles.map((p) => p.re)).toEqual([-3]);
     expect(a.stability.verdict).toBe("stable");

@@ -8,7 +8,7 @@ import { RouthView } from "@/features/editor/components/analysis/RouthView";
 import { StabilityView } from "@/features/editor/components/analysis/StabilityView";
 import { SteadyStateView } from "@/features/editor/components/analysis/SteadyStateView";
 import { SweepView } from "@/features/editor/components/analysis/SweepView";
-import { makeDoc } from "../../../../support/docBuilder";
+import { hiddenUnstableLoop, makeDoc } from "../../../../support/docBuilder";
 
 const prepared = (doc: unknown) => {
   const p = prepareAnalysis(doc);
@@ -54,17 +54,7 @@ describe("StabilityView", () => {
   });
 
   it("an unstable pole cancelled by a zero: the alert names the hidden mode and the diagram verdict (common practice: unstable pole-zero cancellation)", () => {
-    const doc = makeDoc(
-      [
-        { id: "r", type: "input" },
-        { id: "e", type: "sum", signs: ["+", "-"] },
-        { id: "c", type: "transfer", expr: "(s - 1)/(s + 2)" },
-        { id: "g", type: "transfer", expr: "1/(s - 1)" },
-        { id: "b", type: "branch" },
-        { id: "y", type: "output" },
-      ],
-      ["r->e:0", "e->c", "c->g", "g->b", "b->y", "b->e:1"],
-    );
+    const doc = hiddenUnstableLoop();
     const html = renderToStaticMarkup(<StabilityView analysis={analyzeAt(prepared(doc))} />);
     expect(headings(html)).toEqual(["Stable"]);
     expect(html).toMatch(/<li role="alert"[^>]*>.*Unstable hidden mode/);
