@@ -1,5 +1,5 @@
 import { DIAGRAM_FORMAT, DIAGRAM_VERSION, type DiagramDocument } from "@shared/diagram/schema";
-import { freshId, wireIds } from "@/features/editor/commands/ids";
+import { idSource, wireIds } from "@/features/editor/commands/ids";
 import type { EditorDoc } from "@/features/editor/commands/types";
 
 /** A diagram with nothing on it yet. */
@@ -14,6 +14,6 @@ export const emptyDocument = (): EditorDoc => ({
 
 /** Gives each id-less wire a fresh id `w<n>`; wires that have one keep it. Everything else is kept as loaded. */
 export function withWireIds(doc: DiagramDocument): EditorDoc {
-  const taken = wireIds(doc);
-  return { ...doc, wires: doc.wires.map((w) => (w.id === undefined ? { ...w, id: freshId("w", taken) } : { ...w, id: w.id })) };
+  const fresh = idSource(wireIds(doc));
+  return { ...doc, wires: doc.wires.map((w) => (w.id === undefined ? { ...w, id: fresh("w") } : { ...w, id: w.id })) };
 }

@@ -1,5 +1,5 @@
 import type { Block } from "@shared/diagram/schema";
-import { BLOCK_ID_PREFIX, blockIds, freshId, wireIds } from "@/features/editor/commands/ids";
+import { BLOCK_ID_PREFIX, blockIds, idSource, wireIds } from "@/features/editor/commands/ids";
 import { done, refuse, type EditorDoc, type EditorWire, type Outcome, type Point, type Selection } from "@/features/editor/commands/types";
 
 /** A copied piece of a diagram: blocks, the wires between them, and where they stood. */
@@ -40,13 +40,13 @@ export function deleteSelection(doc: EditorDoc, sel: Selection): Outcome {
  */
 export function paste(doc: EditorDoc, fragment: Fragment, offset: Point = PASTE_OFFSET): Outcome {
   if (fragment.blocks.length === 0) return refuse("The clipboard holds no blocks: copy a selection first");
-  const takenBlocks = blockIds(doc);
-  const takenWires = wireIds(doc);
-  const rename = new Map(fragment.blocks.map((b) => [b.id, freshId(BLOCK_ID_PREFIX[b.type], takenBlocks)]));
+  const freshBlock = idSource(blockIds(doc));
+  const freshWire = idSource(wireIds(doc));
+  const rename = new Map(fragment.blocks.map((b) => [b.id, freshBlock(BLOCK_ID_PREFIX[b.type])]));
   const blocks = fragment.blocks.map((b) => ({ ...b, id: rename.get(b.id) as string }));
   const wires = fragment.wires.map((w) => ({
     ...w,
-    id: freshId("w", takenWires),
+    id: freshWire("w"),
     from: rename.get(w.from) as string,
     to: rename.get(w.to) as string,
   }));

@@ -2,6 +2,7 @@ import { useState, type DragEvent, type PointerEvent as ReactPointerEvent, type 
 import {
   Background,
   BackgroundVariant,
+  ControlButton,
   Controls,
   MiniMap,
   ReactFlow,
@@ -14,6 +15,7 @@ import {
   type OnNodesChange,
 } from "@xyflow/react";
 import "@xyflow/react/dist/base.css";
+import { Map as MapIcon } from "lucide-react";
 import type { BlockType } from "@shared/diagram/schema";
 import { GRID } from "@/features/editor/commands/blocks";
 import type { ConnectArgs } from "@/features/editor/commands/wires";
@@ -26,6 +28,7 @@ import { SignalEdgeView, WireMarkers } from "@/features/editor/components/Signal
 import { BLOCK_MIME } from "@/features/editor/components/BlockRail";
 import type { FlowNode, SignalEdge } from "@/features/editor/lib/flowModel";
 import { fitZoomEstimate } from "@/features/editor/geometry/viewport";
+import { useOverviewMap } from "@/features/editor/hooks/useOverviewMap";
 
 // Module-level so the canvas never sees new type tables (which would remount every node).
 const nodeTypes = {
@@ -78,6 +81,8 @@ export function DiagramCanvas({ nodes, edges, onNodesChange, onEdgesChange, read
       { min: MIN_ZOOM, max: 1, block: TYPICAL_BLOCK },
     ),
   }));
+
+  const overview = useOverviewMap(nodes.length);
 
   const onConnect = (c: Connection) => onConnectWire({ from: c.source, to: c.target, port: portOf(c.targetHandle) });
 
@@ -136,16 +141,22 @@ export function DiagramCanvas({ nodes, edges, onNodesChange, onEdgesChange, read
           className="bg-paper"
         >
           <CanvasGrid />
-          <Controls showInteractive={false} showFitView={false} position="bottom-left" />
-          <MiniMap
-            pannable
-            zoomable
-            position="bottom-right"
-            ariaLabel="Overview of the whole diagram"
-            nodeColor={(n) => ((n as FlowNode).data.highlighted ? "#d4891c" : n.selected ? "#1d5c63" : "#b9b2a3")}
-            maskColor="rgba(235, 232, 224, 0.7)"
-            className="!border !border-rule !bg-paper-raised"
-          />
+          <Controls showInteractive={false} showFitView={false} position="bottom-left">
+            <ControlButton aria-label="Overview map" aria-pressed={overview.shown} title={overview.shown ? "Hide the overview map" : "Show the overview map"} onClick={overview.toggle}>
+              <MapIcon aria-hidden />
+            </ControlButton>
+          </Controls>
+          {overview.shown && (
+            <MiniMap
+              pannable
+              zoomable
+              position="bottom-right"
+              ariaLabel="Overview of the whole diagram"
+              nodeColor={(n) => ((n as FlowNode).data.highlighted ? "#d4891c" : n.selected ? "#1d5c63" : "#b9b2a3")}
+              maskColor="rgba(235, 232, 224, 0.7)"
+              className="!border !border-rule !bg-paper-raised"
+            />
+          )}
           {children}
         </ReactFlow>
       </FarViewProvider>

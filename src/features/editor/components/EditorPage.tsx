@@ -1,4 +1,4 @@
-import { useState } from "react";
+import { useEffect, useState } from "react";
 import { Link } from "react-router-dom";
 import { useQueryClient } from "@tanstack/react-query";
 import { ReactFlowProvider } from "@xyflow/react";
@@ -11,6 +11,7 @@ import { editorDiagramQuery, useEditorDiagram } from "@/features/editor/api/getE
 import { emptyDocument, withWireIds } from "@/features/editor/commands/document";
 import type { EditorDoc } from "@/features/editor/commands/types";
 import { EditorSession } from "@/features/editor/components/EditorSession";
+import { warmReduceWorker } from "@/features/editor/hooks/useLiveResult";
 import { href } from "@/lib/paths";
 
 type Opened = { ok: true; doc: EditorDoc; baseVersion: number } | { ok: false; problems: Problem[]; baseVersion: number };
@@ -30,6 +31,8 @@ export function EditorPage({ id }: { id: string }) {
   const queryClient = useQueryClient();
   // A session lives until the user reloads on purpose; background refetches only feed the "newer version" notice.
   const [session, setSession] = useState<{ key: number; opened: Opened } | null>(null);
+  // The engine loads in its worker while the diagram is fetched, not after the canvas has rendered.
+  useEffect(warmReduceWorker, []);
 
   if (detail.isPending) return <Loading label="Loading the diagram…" />;
   if (detail.isError) return <LoadError what="this diagram" error={detail.error} onRetry={() => detail.refetch()} />;

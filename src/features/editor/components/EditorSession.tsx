@@ -67,7 +67,11 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
   // Slider values, band, swept parameter and break live here, not in the document: analysing never dirties it.
   const [analysisSettings, setAnalysisSettings] = useState<AnalysisSettings>({ values: {}, band: 0.02, sweepParameter: null, sweepShown: false, break: null });
   const changeAnalysis = useCallback((change: Partial<AnalysisSettings>) => setAnalysisSettings((s) => ({ ...s, ...change })), []);
-  const analysis = useLiveAnalysis(doc, { ...analysisSettings, input: view.transfer?.input ?? null, output: view.transfer?.output ?? null });
+  const analysis = useLiveAnalysis(
+    doc,
+    { ...analysisSettings, input: view.transfer?.input ?? null, output: view.transfer?.output ?? null },
+    live.outcome !== null || live.crash !== null,
+  );
   const usedBreak = analysis.result?.breakWire ?? null;
   const marks = useMemo(() => problemMarks(view.problems, footprint, usedBreak?.id ?? null), [view.problems, footprint, usedBreak?.id]);
 

@@ -1,5 +1,6 @@
 import { ViewportPortal } from "@xyflow/react";
 import type { ReductionStep } from "@shared/reduce/result";
+import { isLarge } from "@/features/editor/components/LargeTex";
 import { Tex } from "@/features/editor/components/Tex";
 import type { FlowNode } from "@/features/editor/lib/flowModel";
 
@@ -16,7 +17,8 @@ export function StepBadge({ step, blocks, nodes }: { step: ReductionStep; blocks
         style={{ transform: `translate(${left}px, ${bottom + 28}px)` }}
       >
         <span className="mr-1 font-mono text-xs text-ink-soft">{step.produced} =</span>
-        <Tex latex={step.latex} />
+        {/* A large formula stays text here; the steps panel typesets it on request. */}
+        {isLarge(step.latex) ? <span className="inline-block max-w-md truncate align-bottom font-mono text-xs">{step.expr}</span> : <Tex latex={step.latex} />}
       </div>
     </ViewportPortal>
   );

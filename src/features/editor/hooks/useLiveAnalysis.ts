@@ -38,10 +38,11 @@ export interface LiveAnalysis {
 const EMPTY: LiveAnalysis = { result: null, problems: [], parameters: [], crash: null, pending: true, ms: null };
 
 /**
- * Analyses the chosen pair in a Web Worker: ~250 ms after the last document change, at once when a slider,
- * the pair, the break, the band or the swept parameter changes (the worker's queue of one keeps that live).
+ * Analyses the chosen pair in a Web Worker once `ready` (the closed-loop result is known): the first time at once,
+ * then ~250 ms after the last document change, and at once when a slider, the pair, the break, the band or the
+ * swept parameter changes (the worker's queue of one keeps that live).
  */
-export function useLiveAnalysis(doc: EditorDoc, opts: AnalysisOptions): LiveAnalysis {
+export function useLiveAnalysis(doc: EditorDoc, opts: AnalysisOptions, ready: boolean): LiveAnalysis {
   const [state, setState] = useState<LiveAnalysis>(EMPTY);
   const channel = useRef<AnalysisChannel | null>(null);
   const latest = useRef({ doc, opts });
@@ -49,6 +50,8 @@ export function useLiveAnalysis(doc: EditorDoc, opts: AnalysisOptions): LiveAnal
   const debouncing = useRef(false);
 
   useEffect(() => {
+    // The worker too starts only then: loading its engine would compete with the reduction for the CPU.
+    if (!ready) return;
     const c = new AnalysisChannel(
       () => new AnalysisWorker(),
       (r) =>
@@ -63,7 +66,7 @@ export function useLiveAnalysis(doc: EditorDoc, opts: AnalysisOptions): LiveAnal
     );
     channel.current = c;
     return () => c.dispose();
-  }, []);
+  }, [ready]);
 
   const send = () => {
     const { doc: d, opts: o } = latest.current;
@@ -80,27 +83,31 @@ export function useLiveAnalysis(doc: EditorDoc, opts: AnalysisOptions): LiveAnal
     channel.current?.request(query);
   };
 
+  const { input, output, break: brk, values, band, sweepParameter, sweepShown } = opts;
+  const sentFirst = useRef(false);
   useEffect(() => {
-    debouncing.current = true;
+    // Option changes go straight through, once the first request is out (declared first: it skips that commit).
+    if (!sentFirst.current) return;
     setState((s) => (s.pending ? s : { ...s, pending: true }));
+    send();
+  }, [input, output, brk, values, band, sweepParameter, sweepShown]);
+
+  useEffect(() => {
+    // Nothing before the closed-loop result is known: on two cores the analysis would slow it down.
+    if (!ready) return;
+    setState((s) => (s.pending ? s : { ...s, pending: true }));
+    if (!sentFirst.current) {
+      sentFirst.current = true;
+      send();
+      return;
+    }
+    debouncing.current = true;
     const timer = window.setTimeout(() => {
       debouncing.current = false;
       send();
     }, LIVE_DEBOUNCE_MS);
     return () => window.clearTimeout(timer);
-  }, [doc]);
-
-  const { input, output, break: brk, values, band, sweepParameter, sweepShown } = opts;
-  const mounted = useRef(false);
-  useEffect(() => {
-    // The first request goes out with the document's debounce; later option changes go straight through.
-    if (!mounted.current) {
-      mounted.current = true;
-      return;
-    }
-    setState((s) => (s.pending ? s : { ...s, pending: true }));
-    send();
-  }, [input, output, brk, values, band, sweepParameter, sweepShown]);
+  }, [doc, ready]);
 
   return state;
 }

@@ -41,7 +41,12 @@ describe("fresh ids", () => {
     expect(new Set(ids).size).toBe(2000);
     expect(ids.filter((_, i) => kept.has(i + 1))).toEqual(["w3", "w10", "w1500"]);
     const reference = new Set(["w3", "w10", "w1500"]);
-    const expected = wires.map((w) => w.id ?? (() => { const id = smallestFree("w", reference); reference.add(id); return id; })());
+    const expected: string[] = [];
+    for (const w of wires) {
+      const id = w.id ?? smallestFree("w", reference);
+      reference.add(id);
+      expected.push(id);
+    }
     expect(ids).toEqual(expected);
   });
 });

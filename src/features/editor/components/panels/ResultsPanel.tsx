@@ -1,7 +1,7 @@
 import { useId } from "react";
 import { toast } from "sonner";
 import { Button } from "@/components/Button";
-import { Tex } from "@/features/editor/components/Tex";
+import { LargeTex } from "@/features/editor/components/LargeTex";
 import { pairKey, type ResultView } from "@/features/editor/lib/resultView";
 import { resultLatex, resultPlainText, transferText } from "@/features/editor/lib/resultText";
 import type { LiveResult } from "@/features/editor/hooks/useLiveResult";
@@ -57,7 +57,7 @@ export function ResultsPanel({ live, view, stale, onPair }: Props) {
               From <span className="font-mono">{transfer.input}</span> to <span className="font-mono">{transfer.output}</span>
             </p>
             <div className="overflow-x-auto py-1">
-              <Tex display latex={`T(s) = ${transfer.latex}`} />
+              <LargeTex display latex={`T(s) = ${transfer.latex}`} what="T(s)" plain={<span className="text-xs text-ink-soft">A large result: its text is below.</span>} />
             </div>
             <output aria-label="Closed-loop transfer function as text" className="block font-mono text-xs break-all text-ink-soft">
               {transferText(transfer)}
@@ -66,7 +66,11 @@ export function ResultsPanel({ live, view, stale, onPair }: Props) {
           <section aria-label="Characteristic polynomial" className="text-sm">
             <p className="text-xs text-ink-soft">Characteristic polynomial (all modes of the loop, nothing cancelled)</p>
             <div className="overflow-x-auto">
-              <Tex latex={`\\Delta(s) = ${result.characteristicLatex}`} />
+              <LargeTex
+                latex={`\\Delta(s) = ${result.characteristicLatex}`}
+                what="Δ(s)"
+                plain={<span className="font-mono text-xs break-all">Δ(s) = {result.characteristic}</span>}
+              />
             </div>
           </section>
           <Cancellations transfer={transfer} />

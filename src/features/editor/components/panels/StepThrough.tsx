@@ -1,16 +1,8 @@
 import { ChevronLeft, ChevronRight } from "lucide-react";
 import type { ReductionStep } from "@shared/reduce/result";
 import { Button } from "@/components/Button";
-import { Tex } from "@/features/editor/components/Tex";
-
-const RULE_NAME: Record<ReductionStep["rule"], string> = {
-  series: "Series",
-  parallel: "Parallel",
-  feedback: "Feedback loop",
-  "move-sum": "Move summing junction",
-  "move-pickoff": "Move pickoff point",
-  "eliminate-node": "Eliminate signal",
-};
+import { LargeTex } from "@/features/editor/components/LargeTex";
+import { RULE_NAME, StepList } from "@/features/editor/components/panels/StepList";
 
 interface Props {
   steps: ReductionStep[];
@@ -51,25 +43,11 @@ export function StepThrough({ steps, current, onChange }: Props) {
           </p>
           <p className="mt-1">
             Produces <span className="font-mono">{step.produced}</span> ={" "}
-            <Tex latex={step.latex} />
+            <LargeTex latex={step.latex} what={`step ${(current ?? 0) + 1}`} plain={<span className="font-mono text-xs break-all">{step.expr}</span>} />
           </p>
         </section>
       )}
-      <ol className="flex flex-col gap-0.5 text-sm" aria-label="Reduction steps">
-        {steps.map((s, i) => (
-          <li key={`${s.index}-${i}`}>
-            <button
-              type="button"
-              aria-current={i === current ? "step" : undefined}
-              onClick={() => onChange(i)}
-              className="w-full rounded px-2 py-1 text-left hover:bg-paper-sunk aria-[current=step]:bg-trace-tint aria-[current=step]:font-medium"
-            >
-              <span className="mr-2 font-mono text-xs text-ink-faint">{i + 1}.</span>
-              {RULE_NAME[s.rule]} → <span className="font-mono">{s.produced}</span>
-            </button>
-          </li>
-        ))}
-      </ol>
+      <StepList steps={steps} current={current} onChange={onChange} />
     </div>
   );
 }
