@@ -36,7 +36,10 @@ export interface DiagramVersionView {
   createdBy: string;
 }
 
+/** The latest version as a diagram's page opens it: without the stored result (GET …/versions/:n has it; the editor recomputes it live). */
+export type LatestVersionView = Omit<DiagramVersionView, "result">;
+
 export interface DiagramDetail {
   diagram: DiagramSummary & { role: "owner" | "editor" | "viewer"; teamName: string };
-  latestVersion: DiagramVersionView | null;
+  latestVersion: LatestVersionView | null;
 }

@@ -52,6 +52,11 @@ describe("saving versions", () => {
     const detail = await owner.client.get(`/api/diagrams/${diagramId}`);
     expect(detail.body.diagram.latestVersion).toBe(1);
     expect(detail.body.latestVersion.number).toBe(1);
+    // The page gets the document without the stored result (it can run to megabytes); the version itself keeps it.
+    expect(detail.body.latestVersion.document.wires[3].note).toBe("kept: readers keep unknown fields");
+    expect(detail.body.latestVersion).not.toHaveProperty("result");
+    const stored = await owner.client.get(`/api/diagrams/${diagramId}/versions/1`);
+    expect(stored.body.version.result).toEqual(checked);
   });
 
   it("answers a stale base version with 409 and the version that won, overwriting nothing", async () => {

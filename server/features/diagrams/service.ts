@@ -11,8 +11,13 @@ import { isUuid } from "@server/http/ids";
 type WithCreator = Diagram & { creator?: User };
 type VersionWithAuthor = DiagramVersion & { author?: User };
 
-async function latestVersions(ids: string[]): Promise<Map<string, VersionWithAuthor>> {
+/** Columns a list needs; a diagram's page adds the document. Never the stored result: it can run to megabytes. */
+const LIST_COLUMNS = ["id", "diagramId", "number", "createdBy", "createdAt"];
+const PAGE_COLUMNS = [...LIST_COLUMNS, "document", "message"];
+
+async function latestVersions(ids: string[], attributes = LIST_COLUMNS): Promise<Map<string, VersionWithAuthor>> {
   const rows = (await DiagramVersion.findAll({
+    attributes,
     where: { diagramId: ids },
     include: [{ model: User, as: "author", attributes: ["name"] }],
     order: [["diagramId", "ASC"], ["number", "DESC"]],
@@ -65,7 +70,7 @@ export async function diagramDetail(d: Diagram, role: Role): Promise<DiagramDeta
   const [full, team, latest] = await Promise.all([
     Diagram.findByPk(d.id, withCreator) as Promise<WithCreator>,
     Team.findByPk(d.teamId),
-    latestVersions([d.id]).then((m) => m.get(d.id)),
+    latestVersions([d.id], PAGE_COLUMNS).then((m) => m.get(d.id)),
   ]);
   return {
     diagram: { ...summary(full, latest), role, teamName: team?.name ?? "" },
@@ -73,7 +78,6 @@ export async function diagramDetail(d: Diagram, role: Role): Promise<DiagramDeta
       ? {
           number: latest.number,
           document: latest.document,
-          result: latest.result,
           message: latest.message,
           createdAt: latest.createdAt.toISOString(),
           createdBy: latest.author?.name ?? "",

@@ -1,6 +1,6 @@
 import { lazy, Suspense, useCallback, useMemo, useRef, useState } from "react";
 import { useReactFlow } from "@xyflow/react";
-import type { DiagramDetail, DiagramVersionView } from "@shared/api/diagrams";
+import type { DiagramDetail, LatestVersionView } from "@shared/api/diagrams";
 import type { Problem } from "@shared/diagram/problems";
 import { Panel } from "@/components/Panel";
 import type { EditorDoc, Point, Selection } from "@/features/editor/commands/types";
@@ -38,7 +38,7 @@ interface Props {
   initialDoc: EditorDoc;
   baseVersion: number;
   /** The latest version the server knows now (refetched in the background). */
-  latestNow: DiagramVersionView | null;
+  latestNow: LatestVersionView | null;
   onReload: () => Promise<void>;
 }
 

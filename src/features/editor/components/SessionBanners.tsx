@@ -1,4 +1,4 @@
-import type { DiagramDetail, DiagramVersionView } from "@shared/api/diagrams";
+import type { DiagramDetail, LatestVersionView } from "@shared/api/diagrams";
 import { Button } from "@/components/Button";
 import type { Draft } from "@/features/editor/lib/draft";
 import { formatDateTime } from "@/lib/format";
@@ -7,7 +7,7 @@ interface Props {
   diagram: DiagramDetail["diagram"];
   readOnly: boolean;
   base: number;
-  latestNow: DiagramVersionView | null;
+  latestNow: LatestVersionView | null;
   draft: Draft | null;
   onRestore: () => void;
   onDiscardDraft: () => void;

@@ -2,7 +2,7 @@ import { useState } from "react";
 import { useNavigate } from "react-router-dom";
 import { useQueryClient } from "@tanstack/react-query";
 import { toast } from "sonner";
-import type { DiagramDetail, DiagramVersionView } from "@shared/api/diagrams";
+import type { DiagramDetail, DiagramVersionView, LatestVersionView } from "@shared/api/diagrams";
 import { editorDiagramQuery } from "@/features/editor/api/getEditorDiagram";
 import { useSaveAsNewDiagram } from "@/features/editor/api/saveAsNewDiagram";
 import { useSaveVersion } from "@/features/editor/api/saveVersion";
@@ -12,7 +12,7 @@ import { href } from "@/lib/paths";
 
 type Dialog =
   | { kind: "save" }
-  | { kind: "conflict"; message: string; latest: DiagramVersionView | null; versionMessage: string };
+  | { kind: "conflict"; message: string; latest: LatestVersionView | null; versionMessage: string };
 
 interface Args {
   diagram: DiagramDetail["diagram"];

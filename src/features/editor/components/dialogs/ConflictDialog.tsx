@@ -1,5 +1,5 @@
 import { useState } from "react";
-import type { DiagramVersionView } from "@shared/api/diagrams";
+import type { LatestVersionView } from "@shared/api/diagrams";
 import { Button } from "@/components/Button";
 import { FormError, TextField } from "@/components/Field";
 import { Dialog } from "@/features/editor/components/dialogs/Dialog";
@@ -8,7 +8,7 @@ import { formatDateTime } from "@/lib/format";
 interface Props {
   message: string;
   baseVersion: number;
-  latest: DiagramVersionView | null;
+  latest: LatestVersionView | null;
   defaultTitle: string;
   pending: boolean;
   error?: string;
