@@ -1,7 +1,7 @@
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import { analysisResultSchema } from "@shared/analysis/schema";
-import { makeDoc } from "../support/docBuilder";
+import { unityFeedback } from "../support/docBuilder";
 import { runCli, tempFiles, SPAWN_TIMEOUT, STACK_TRACE } from "../support/cliRun";
 
 // The `analyze` command as teams' CI calls it: a real process (node + tsx), stdout, stderr and exit status.
@@ -9,18 +9,7 @@ const analyze = (...args: string[]) => runCli("analyze", ...args);
 const { dir, file } = tempFiles("loopwright-analyze-");
 
 // Unity negative feedback around 2/(s+1)^3: closed forms for the margins (see the margins tests).
-const loop = makeDoc(
-  [
-    { id: "r", type: "input" },
-    { id: "e", type: "sum", signs: ["+", "-"] },
-    { id: "g", type: "transfer", expr: "K/(s + 1)^3" },
-    { id: "b", type: "branch" },
-    { id: "y", type: "output" },
-  ],
-  ["r->e:0", "e->g", "g->b", "b->y", "b->e:1"],
-  { K: 2 },
-  "Third-order loop",
-);
+const loop = unityFeedback("K/(s + 1)^3", { K: 2 }, "Third-order loop");
 
 describe("analyze CLI", { timeout: SPAWN_TIMEOUT }, () => {
   it("--json prints the documented shape: poles, stable, dcGain, step, margins (GM = 20·log10 4 at √3, common practice), routh, steadyState, nyquist", async () => {

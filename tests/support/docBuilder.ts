@@ -42,3 +42,21 @@ export const hiddenUnstableLoop = (): DiagramDocument =>
     ],
     ["r->e:0", "e->c", "c->g", "g->b", "b->y", "b->e:1"],
   );
+
+/**
+ * Unity negative feedback around one transfer block g: r → e(+, −) → g → pickoff b → y, with b fed back into e.
+ * Example: unityFeedback("K/(s*(s + 2))", { K: 4 }) closes to K/(s^2 + 2s + K).
+ */
+export const unityFeedback = (g: string, parameters: DiagramDocument["parameters"] = {}, title?: string): DiagramDocument =>
+  makeDoc(
+    [
+      { id: "r", type: "input" },
+      { id: "e", type: "sum", signs: ["+", "-"] },
+      { id: "g", type: "transfer", expr: g },
+      { id: "b", type: "branch" },
+      { id: "y", type: "output" },
+    ],
+    ["r->e:0", "e->g", "g->b", "b->y", "b->e:1"],
+    parameters,
+    title,
+  );

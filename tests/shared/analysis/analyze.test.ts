@@ -3,21 +3,8 @@ import { analyzeAt } from "@shared/analysis/analyze";
 import { analyzeDocument } from "@shared/analysis/analyzeDocument";
 import { prepareAnalysis } from "@shared/analysis/prepare";
 import { analysisResultSchema } from "@shared/analysis/schema";
-import { hiddenUnstableLoop, makeDoc } from "../../support/docBuilder";
+import { hiddenUnstableLoop, makeDoc, unityFeedback } from "../../support/docBuilder";
 
-/** Unity negative feedback around a transfer expression. */
-const feedback = (g: string, parameters: Record<string, number> = {}) =>
-  makeDoc(
-    [
-      { id: "r", type: "input" },
-      { id: "e", type: "sum", signs: ["+", "-"] },
-      { id: "g", type: "transfer", expr: g },
-      { id: "b", type: "branch" },
-      { id: "y", type: "output" },
-    ],
-    ["r->e:0", "e->g", "g->b", "b->y", "b->e:1"],
-    parameters,
-  );
 
 const prepared = (doc: unknown) => {
   const p = prepareAnalysis(doc);
@@ -27,7 +14,7 @@ const prepared = (doc: unknown) => {
 
 describe("analysis of a document", () => {
   it("K/(s(s+7)(s+11)) with K = 100: stable, stable range 0 < K < 1386, type 1 with Kv = K/77 (from memory: Nise, Examples 6.9 and 7.x)", () => {
-    const a = analyzeAt(prepared(feedback("K/(s*(s + 7)*(s + 11))", { K: 100 })));
+    const a = analyzeAt(prepared(unityFeedback("K/(s*(s + 7)*(s + 11))", { K: 100 })));
     expect(a.stability.verdict).toBe("stable");
     expect(a.stableSets.map((s) => s.text)).toEqual(["0 < K < 1386"]);
     expect(a.steadyState.systemType).toBe(1);
@@ -39,7 +26,7 @@ describe("analysis of a document", () => {
   });
 
   it("K beyond the range: the slider value K = 2000 gives an unstable loop, null step metrics and negative margins (Nise, Example 6.9)", () => {
-    const p = prepared(feedback("K/(s*(s + 7)*(s + 11))", { K: 100 }));
+    const p = prepared(unityFeedback("K/(s*(s + 7)*(s + 11))", { K: 100 }));
     const a = analyzeAt(p, { values: { K: 2000 }, stableSets: false });
     expect(a.stability.verdict).toBe("unstable");
     expect(a.step.overshootPercent).toBeNull();
@@ -98,16 +85,16 @@ describe("analysis of a document", () => {
   });
 
   it("T(0) = 0: metrics null and said so", () => {
-    const a = analyzeAt(prepared(feedback("s/((s + 1)*(s + 2))")));
+    const a = analyzeAt(prepared(unityFeedback("s/((s + 1)*(s + 2))")));
     expect(a.step.settlingTime).toBeNull();
     expect(a.notes.join(" ")).toMatch(/T\(0\) = 0/);
   });
 
   it("analyzeDocument: the result parses with the published schema; an unknown break is a problem with its code", () => {
-    const out = analyzeDocument(feedback("4/((s + 1)*(s + 2))"));
+    const out = analyzeDocument(unityFeedback("4/((s + 1)*(s + 2))"));
     if (!out.ok) throw new Error("expected success");
     expect(analysisResultSchema.parse(out.result).stable).toBe("stable");
-    const bad = analyzeDocument(feedback("4/((s + 1)*(s + 2))"), { break: "nope" });
+    const bad = analyzeDocument(unityFeedback("4/((s + 1)*(s + 2))"), { break: "nope" });
     expect(bad.ok).toBe(false);
     if (!bad.ok) expect(bad.problems[0]).toMatchObject({ code: "unknown-break-wire", field: "break" });
   });

@@ -1,19 +1,9 @@
 import { describe, expect, it } from "vitest";
 import { prepareAnalysis } from "@shared/analysis/prepare";
 import { parameterRange, rootLocus, stepOverlay, sweepValues } from "@shared/analysis/sweep";
-import { makeDoc } from "../../support/docBuilder";
+import { unityFeedback } from "../../support/docBuilder";
 
-const doc = makeDoc(
-  [
-    { id: "r", type: "input" },
-    { id: "e", type: "sum", signs: ["+", "-"] },
-    { id: "g", type: "transfer", expr: "K/(s*(s + 7)*(s + 11))" },
-    { id: "b", type: "branch" },
-    { id: "y", type: "output" },
-  ],
-  ["r->e:0", "e->g", "g->b", "b->y", "b->e:1"],
-  { K: { value: 100, min: 10, max: 3000 } },
-);
+const doc = unityFeedback("K/(s*(s + 7)*(s + 11))", { K: { value: 100, min: 10, max: 3000 } });
 const p = (() => {
   const out = prepareAnalysis(doc);
   if (!out.ok) throw new Error("bad test document");

@@ -8,7 +8,7 @@ import { RouthView } from "@/features/editor/components/analysis/RouthView";
 import { StabilityView } from "@/features/editor/components/analysis/StabilityView";
 import { SteadyStateView } from "@/features/editor/components/analysis/SteadyStateView";
 import { SweepView } from "@/features/editor/components/analysis/SweepView";
-import { hiddenUnstableLoop, makeDoc } from "../../../../support/docBuilder";
+import { hiddenUnstableLoop, makeDoc, unityFeedback } from "../../../../support/docBuilder";
 
 const prepared = (doc: unknown) => {
   const p = prepareAnalysis(doc);
@@ -16,18 +16,6 @@ const prepared = (doc: unknown) => {
   return p.prepared;
 };
 
-const feedback = (g: string, parameters = {}) =>
-  makeDoc(
-    [
-      { id: "r", type: "input" },
-      { id: "e", type: "sum", signs: ["+", "-"] },
-      { id: "g", type: "transfer", expr: g },
-      { id: "b", type: "branch" },
-      { id: "y", type: "output" },
-    ],
-    ["r->e:0", "e->g", "g->b", "b->y", "b->e:1"],
-    parameters,
-  );
 
 const open = (g: string) => makeDoc([{ id: "r", type: "input" }, { id: "g", type: "transfer", expr: g }, { id: "y", type: "output" }], ["r->g", "g->y"]);
 
@@ -37,7 +25,7 @@ const text = (html: string) =>
 
 const headings = (html: string) => [...html.matchAll(/<h3[^>]*>([^<]*)<\/h3>/g)].map((m) => m[1]);
 
-const nise = prepared(feedback("K/(s*(s + 7)*(s + 11))", { K: { value: 100, min: 10, max: 3000 } }));
+const nise = prepared(unityFeedback("K/(s*(s + 7)*(s + 11))", { K: { value: 100, min: 10, max: 3000 } }));
 const niseAt100: Analysis = analyzeAt(nise);
 
 describe("StabilityView", () => {
