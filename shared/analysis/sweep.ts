@@ -7,6 +7,7 @@ import type { DiagramDocument } from "@shared/diagram/schema";
 import { AnalysisError } from "@shared/analysis/errors";
 import { transferAt } from "@shared/analysis/nominal";
 import type { PreparedAnalysis } from "@shared/analysis/prepare";
+import { rangeValueAt } from "@shared/analysis/scale";
 import { sampleResponse } from "@shared/analysis/stepMetrics";
 import { timeResponse } from "@shared/analysis/timeResponse";
 
@@ -25,12 +26,8 @@ export function parameterRange(doc: DiagramDocument, name: string): [number, num
 }
 
 /** n values across [lo, hi]: logarithmic when both ends are positive and a decade or more apart, else linear. */
-export function sweepValues([lo, hi]: [number, number], n: number): number[] {
-  const log = lo > 0 && hi / lo >= 10;
-  return Array.from({ length: n }, (_, i) => {
-    const f = n === 1 ? 0 : i / (n - 1);
-    return log ? lo * (hi / lo) ** f : lo + (hi - lo) * f;
-  });
+export function sweepValues(range: [number, number], n: number): number[] {
+  return Array.from({ length: n }, (_, i) => rangeValueAt(range, n === 1 ? 0 : i / (n - 1)));
 }
 
 export interface RootLocus {

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { sweepValues } from "@shared/analysis/sweep";
-import { isLogRange, SLIDER_STEPS, sliderToValue, valueToSlider } from "@/features/editor/lib/sliderScale";
+import { isLogRange } from "@shared/analysis/scale";
+import { SLIDER_STEPS, sliderToValue, valueToSlider } from "@/features/editor/lib/sliderScale";
 
 const positions = Array.from({ length: SLIDER_STEPS + 1 }, (_, i) => i);
 

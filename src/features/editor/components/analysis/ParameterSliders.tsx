@@ -1,7 +1,8 @@
 import { useId, useState } from "react";
 import { Button } from "@/components/Button";
 import { formatNumber } from "@/features/editor/lib/analysisFormat";
-import { isLogRange, SLIDER_STEPS, sliderToValue, valueToSlider } from "@/features/editor/lib/sliderScale";
+import { isLogRange } from "@shared/analysis/scale";
+import { SLIDER_STEPS, sliderToValue, valueToSlider } from "@/features/editor/lib/sliderScale";
 import type { ParameterInfo } from "@/features/editor/worker/analysisProtocol";
 
 interface Props {
