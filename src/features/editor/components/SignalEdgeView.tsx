@@ -1,5 +1,5 @@
 import { memo, useMemo } from "react";
-import { BaseEdge, useInternalNode, type EdgeProps, type InternalNode } from "@xyflow/react";
+import { BaseEdge, useStore, type EdgeProps, type InternalNode, type ReactFlowState } from "@xyflow/react";
 import { midpointAlong, roundedPath, wireRoute, type Box, type WirePlace } from "@/features/editor/geometry/wireRoute";
 import type { SignalEdge } from "@/features/editor/lib/flowModel";
 
@@ -19,6 +19,10 @@ const boxOf = (n: InternalNode | undefined): Box => ({
   width: n?.measured.width ?? 0,
   height: n?.measured.height ?? 0,
 });
+
+/** A block's box as plain numbers: the wire redraws when a box moves or resizes, not when the store renews the node object. */
+const sameBox = (a: Box, b: Box) => a.x === b.x && a.y === b.y && a.width === b.width && a.height === b.height;
+const useBox = (id: string) => useStore((s: ReactFlowState) => boxOf(s.nodeLookup.get(id)), sameBox);
 
 /**
  * Where the analysis breaks the loop: the wire cut by a gap between two bars across it, and a small tag,
@@ -43,12 +47,12 @@ function BreakMark({ at, stroke }: { at: WirePlace; stroke: string }) {
 export const SignalEdgeView = memo(function SignalEdgeView(props: EdgeProps<SignalEdge>) {
   const { id, source, target, sourceX, sourceY, targetX, targetY, data, selected } = props;
   const side = data?.side ?? "left";
-  const sourceBox = boxOf(useInternalNode(source));
-  const targetBox = boxOf(useInternalNode(target));
-  // Routing reruns only when an end moved or resized, not on every store update that re-renders the wire.
+  const sourceBox = useBox(source);
+  const targetBox = useBox(target);
+  // Routing reruns only when an end moved or resized (useBox keeps a box's object while its numbers stay).
   const points = useMemo(
     () => wireRoute({ source: { x: sourceX, y: sourceY }, target: { x: targetX, y: targetY }, side, sourceBox, targetBox }),
-    [sourceX, sourceY, targetX, targetY, side, ...Object.values(sourceBox), ...Object.values(targetBox)],
+    [sourceX, sourceY, targetX, targetY, side, sourceBox, targetBox],
   );
   const path = useMemo(() => roundedPath(points), [points]);
   const look = data?.highlighted ? LOOK.step : selected ? LOOK.selected : data?.problem === "error" ? LOOK.fault : LOOK.plain;

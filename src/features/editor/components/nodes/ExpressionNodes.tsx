@@ -1,6 +1,6 @@
-import { memo } from "react";
 import type { NodeProps } from "@xyflow/react";
 import { Caption } from "@/features/editor/components/nodes/Caption";
+import { blockMemo } from "@/features/editor/components/nodes/blockMemo";
 import { useFarView } from "@/features/editor/components/nodes/farView";
 import { Formula, PlainFraction } from "@/features/editor/components/nodes/Formula";
 import { InPort, OutPort } from "@/features/editor/components/nodes/Ports";
@@ -9,7 +9,7 @@ import { Tex } from "@/features/editor/components/Tex";
 import type { NodeOf } from "@/features/editor/lib/flowModel";
 
 /** A transfer function G(s): a box holding its fraction. */
-export const TransferNode = memo(function TransferNode({ data, selected }: NodeProps<NodeOf<"transfer">>) {
+export const TransferNode = blockMemo(function TransferNode({ data, selected }: NodeProps<NodeOf<"transfer">>) {
   return (
     <div className={`relative flex min-h-12 min-w-20 items-center justify-center rounded-sm border-2 px-3 py-1.5 ${frameClass(selected, data.highlighted, data.problem)}`}>
       <Caption block={data.block} />
@@ -21,7 +21,7 @@ export const TransferNode = memo(function TransferNode({ data, selected }: NodeP
 });
 
 /** An integrator: a box with 1/s and a doubled left edge, so it reads apart from a transfer block at a glance. */
-export const IntegratorNode = memo(function IntegratorNode({ data, selected }: NodeProps<NodeOf<"integrator">>) {
+export const IntegratorNode = blockMemo(function IntegratorNode({ data, selected }: NodeProps<NodeOf<"integrator">>) {
   const far = useFarView();
   return (
     <div className={`relative flex h-12 w-16 items-center justify-center rounded-sm border-2 border-l-[5px] border-double ${frameClass(selected, data.highlighted, data.problem)}`}>
@@ -34,7 +34,7 @@ export const IntegratorNode = memo(function IntegratorNode({ data, selected }: N
 });
 
 /** A static gain: a triangle pointing the way the signal goes, its expression inside. */
-export const GainNode = memo(function GainNode({ data, selected }: NodeProps<NodeOf<"gain">>) {
+export const GainNode = blockMemo(function GainNode({ data, selected }: NodeProps<NodeOf<"gain">>) {
   const stroke = strokeColor(selected, data.highlighted, data.problem);
   const fill = data.highlighted ? "#f8ecd6" : "#fcfbf8";
   return (

@@ -1,8 +1,9 @@
-import { Fragment, memo, type CSSProperties } from "react";
+import { Fragment, type CSSProperties } from "react";
 import { Handle, Position, type NodeProps } from "@xyflow/react";
 import { toggleSign } from "@/features/editor/commands/sum";
 import { useEditorActions } from "@/features/editor/components/EditorContext";
 import { Caption } from "@/features/editor/components/nodes/Caption";
+import { blockMemo } from "@/features/editor/components/nodes/blockMemo";
 import { useFarView } from "@/features/editor/components/nodes/farView";
 import { OutPort } from "@/features/editor/components/nodes/Ports";
 import { handleClass, strokeColor } from "@/features/editor/components/nodes/nodeStyle";
@@ -23,7 +24,7 @@ function placeStyles({ side, fraction }: PortPlace): { handle: CSSProperties; si
 }
 
 /** A summing junction: a circle with one input per sign, each sign drawn beside its port and flipped by a click. */
-export const SumNode = memo(function SumNode({ id, data, selected }: NodeProps<NodeOf<"sum">>) {
+export const SumNode = blockMemo(function SumNode({ id, data, selected }: NodeProps<NodeOf<"sum">>) {
   const { act, readOnly } = useEditorActions();
   const { signs } = data.block;
   const size = sumDiameter(signs.length);

@@ -1,6 +1,6 @@
-import { memo } from "react";
 import type { NodeProps } from "@xyflow/react";
 import { Caption } from "@/features/editor/components/nodes/Caption";
+import { blockMemo } from "@/features/editor/components/nodes/blockMemo";
 import { InPort, OutPort } from "@/features/editor/components/nodes/Ports";
 import { frameClass } from "@/features/editor/components/nodes/nodeStyle";
 import type { NodeOf } from "@/features/editor/lib/flowModel";
@@ -8,7 +8,7 @@ import type { NodeOf } from "@/features/editor/lib/flowModel";
 const terminal = "relative flex h-9 min-w-14 items-center justify-center border-2 px-3 font-mono text-sm";
 
 /** An external signal entering the loop: a tab with a flat right edge pointing into the diagram. */
-export const InputNode = memo(function InputNode({ data, selected }: NodeProps<NodeOf<"input">>) {
+export const InputNode = blockMemo(function InputNode({ data, selected }: NodeProps<NodeOf<"input">>) {
   return (
     <div className={`${terminal} rounded-l-full rounded-r-sm ${frameClass(selected, data.highlighted, data.problem)}`}>
       <span aria-hidden className="mr-1 text-[10px] font-sans font-semibold tracking-wide text-signal uppercase">in</span>
@@ -19,7 +19,7 @@ export const InputNode = memo(function InputNode({ data, selected }: NodeProps<N
 });
 
 /** A signal the user observes: the mirror tab. */
-export const OutputNode = memo(function OutputNode({ data, selected }: NodeProps<NodeOf<"output">>) {
+export const OutputNode = blockMemo(function OutputNode({ data, selected }: NodeProps<NodeOf<"output">>) {
   return (
     <div className={`${terminal} rounded-l-sm rounded-r-full ${frameClass(selected, data.highlighted, data.problem)}`}>
       <InPort />
@@ -30,7 +30,7 @@ export const OutputNode = memo(function OutputNode({ data, selected }: NodeProps
 });
 
 /** A pickoff point: a dot the signal passes through unchanged to several wires. */
-export const BranchNode = memo(function BranchNode({ data, selected }: NodeProps<NodeOf<"branch">>) {
+export const BranchNode = blockMemo(function BranchNode({ data, selected }: NodeProps<NodeOf<"branch">>) {
   const fill = data.highlighted ? "bg-trace" : selected ? "bg-signal" : data.problem === "error" ? "bg-fault" : "bg-ink";
   return (
     <div className="relative flex size-4 items-center justify-center">
