@@ -1,5 +1,4 @@
 import { lazy, Suspense, useCallback, useMemo, useRef, useState } from "react";
-import { useReactFlow } from "@xyflow/react";
 import type { DiagramDetail, LatestVersionView } from "@shared/api/diagrams";
 import type { Problem } from "@shared/diagram/problems";
 import { Panel } from "@/components/Panel";
@@ -19,9 +18,11 @@ import { ProblemList } from "@/features/editor/components/panels/ProblemList";
 import { PropertiesPanel } from "@/features/editor/components/panels/PropertiesPanel";
 import { ResultsPanel } from "@/features/editor/components/panels/ResultsPanel";
 import { StepThrough } from "@/features/editor/components/panels/StepThrough";
+import { boundsOf, documentBoxes } from "@/features/editor/geometry/blockBox";
 import { useCanvasCommands } from "@/features/editor/hooks/useCanvasCommands";
 import { useDraft } from "@/features/editor/hooks/useDraft";
 import { useEditorHistory } from "@/features/editor/hooks/useEditorHistory";
+import { useFitBox } from "@/features/editor/hooks/useFitBox";
 import { useFlowState } from "@/features/editor/hooks/useFlowState";
 import { useLiveAnalysis, type AnalysisSettings } from "@/features/editor/hooks/useLiveAnalysis";
 import { useLiveResult } from "@/features/editor/hooks/useLiveResult";
@@ -52,7 +53,7 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
   const dirty = doc !== savedDoc;
   const draft = useDraft(diagram.id, base, doc, dirty && !readOnly, initialDoc);
   const guard = useUnsavedGuard(dirty && !readOnly);
-  const flow = useReactFlow();
+  const fitBox = useFitBox();
 
   const [notice, setNotice] = useState<Notice | null>(null);
   const pointer = useRef<Point | null>(null);
@@ -138,7 +139,7 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
     const sel: Selection = p.blockId ? { blocks: [p.blockId], wires: [] } : wire ? { blocks: [], wires: [wire.id] } : { blocks: [], wires: [] };
     setSelection(sel);
     const around = p.blockId ? [p.blockId] : wire ? [wire.from, wire.to] : [];
-    if (around.length) void flow.fitView({ nodes: around.map((id) => ({ id })), duration: 250, maxZoom: 1.3, padding: 0.6 });
+    if (around.length) fitBox(boundsOf(documentBoxes(doc, canvasState.measured, around)), { duration: 250, maxZoom: 1.3, padding: 0.6 });
     if (p.field === "expr") window.setTimeout(() => firstField.current?.focus(), 50);
   };
 

@@ -1,6 +1,7 @@
 import { memo, useMemo } from "react";
 import { BaseEdge, useStore, type EdgeProps, type InternalNode, type ReactFlowState } from "@xyflow/react";
-import { midpointAlong, roundedPath, wireRoute, type Box, type WirePlace } from "@/features/editor/geometry/wireRoute";
+import { midpointAlong, roundedPath, sameBox, wireRoute, type Box, type WirePlace } from "@/features/editor/geometry/wireRoute";
+import type { Severity } from "@shared/diagram/problems";
 import type { SignalEdge } from "@/features/editor/lib/flowModel";
 
 /** Stroke colours and the matching arrowhead markers (defined once in WireMarkers). */
@@ -13,6 +14,10 @@ const LOOK = {
 
 const PAPER = "#f5f3ee";
 
+/** A wire's colour and arrowhead: reduction highlight wins over selection, which wins over a fault mark. */
+export const wireLook = (highlighted: boolean, selected: boolean, problem: Severity | null) =>
+  highlighted ? LOOK.step : selected ? LOOK.selected : problem === "error" ? LOOK.fault : LOOK.plain;
+
 const boxOf = (n: InternalNode | undefined): Box => ({
   x: n?.internals.positionAbsolute.x ?? 0,
   y: n?.internals.positionAbsolute.y ?? 0,
@@ -21,14 +26,13 @@ const boxOf = (n: InternalNode | undefined): Box => ({
 });
 
 /** A block's box as plain numbers: the wire redraws when a box moves or resizes, not when the store renews the node object. */
-const sameBox = (a: Box, b: Box) => a.x === b.x && a.y === b.y && a.width === b.width && a.height === b.height;
 const useBox = (id: string) => useStore((s: ReactFlowState) => boxOf(s.nodeLookup.get(id)), sameBox);
 
 /**
  * Where the analysis breaks the loop: the wire cut by a gap between two bars across it, and a small tag,
  * so the mark reads without colour.
  */
-function BreakMark({ at, stroke }: { at: WirePlace; stroke: string }) {
+export function BreakMark({ at, stroke }: { at: WirePlace; stroke: string }) {
   const tag = at.horizontal ? ({ x: at.x, y: at.y - 11, anchor: "middle" } as const) : ({ x: at.x + 10, y: at.y + 3, anchor: "start" } as const);
   return (
     <g aria-hidden className="pointer-events-none">
@@ -55,7 +59,7 @@ export const SignalEdgeView = memo(function SignalEdgeView(props: EdgeProps<Sign
     [sourceX, sourceY, targetX, targetY, side, sourceBox, targetBox],
   );
   const path = useMemo(() => roundedPath(points), [points]);
-  const look = data?.highlighted ? LOOK.step : selected ? LOOK.selected : data?.problem === "error" ? LOOK.fault : LOOK.plain;
+  const look = wireLook(data?.highlighted ?? false, selected ?? false, data?.problem ?? null);
   return (
     <>
       <BaseEdge

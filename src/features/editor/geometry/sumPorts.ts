@@ -11,7 +11,16 @@ export interface PortPlace {
  * Port 0 enters from the left (the reference), port 1 from below (the feedback path), port 2 from above
  * (a disturbance); further ports share the left side. Adding a port never moves an existing one.
  */
-export function sumPortPlaces(count: number): PortPlace[] {
+export function sumPortPlaces(count: number): readonly PortPlace[] {
+  let places = placesByCount.get(count);
+  if (!places) placesByCount.set(count, (places = Object.freeze(portPlaces(count))));
+  return places;
+}
+
+// Every wire into a junction asks for its port's place; a junction's count of ports rarely changes.
+const placesByCount = new Map<number, readonly PortPlace[]>();
+
+function portPlaces(count: number): PortPlace[] {
   const leftPorts = [0, ...Array.from({ length: Math.max(0, count - 3) }, (_, i) => i + 3)].filter((p) => p < count);
   return Array.from({ length: count }, (_, port) => {
     if (port === 1) return { side: "bottom", fraction: 0.5 };

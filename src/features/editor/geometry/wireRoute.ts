@@ -8,6 +8,9 @@ export interface Box {
   height: number;
 }
 
+/** Whether two boxes have the same place and size. */
+export const sameBox = (a: Box, b: Box) => a.x === b.x && a.y === b.y && a.width === b.width && a.height === b.height;
+
 export interface WireEnds {
   /** Where the wire leaves the source's output (on its right side). */
   source: Point;

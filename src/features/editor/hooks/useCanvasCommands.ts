@@ -7,6 +7,8 @@ import { copySelection, deleteSelection, duplicate, paste, PASTE_OFFSET, selectA
 import { connect, type ConnectArgs } from "@/features/editor/commands/wires";
 import type { EditorDoc, Point, Selection } from "@/features/editor/commands/types";
 import type { Act } from "@/features/editor/components/EditorContext";
+import { boundsOf, documentBoxes } from "@/features/editor/geometry/blockBox";
+import { useFitBox, WHOLE_DIAGRAM } from "@/features/editor/hooks/useFitBox";
 import { useShortcuts } from "@/features/editor/hooks/useShortcuts";
 import { autoLayout } from "@/features/editor/lib/autoLayout";
 import { fallbackPosition, TYPE_NAME } from "@/features/editor/lib/flowModel";
@@ -29,11 +31,11 @@ interface Args {
   steps: { count: number; at: number | null; go: (i: number | null) => void };
 }
 
-const FIT = { padding: 0.25, maxZoom: 1.2, duration: 200 } as const;
 
 /** The editor's verbs, shared by the toolbar, the rail, the canvas and the keyboard. */
 export function useCanvasCommands(a: Args) {
   const flow = useReactFlow();
+  const fitBox = useFitBox();
   const clipboard = useRef<{ fragment: Fragment; pastes: number } | null>(null);
   const [layingOut, setLayingOut] = useState(false);
   const { doc, act, selection } = a;
@@ -84,7 +86,7 @@ export function useCanvasCommands(a: Args) {
     clipboard.current = { fragment: copySelection(doc, selection), pastes: 0 };
     return true;
   };
-  const fit = () => void flow.fitView(FIT);
+  const fit = () => fitBox(boundsOf(documentBoxes(doc, a.measured)), { ...WHOLE_DIAGRAM, duration: 200 });
 
   const layout = async () => {
     if (doc.blocks.length === 0) return;

@@ -1,7 +1,10 @@
 import { useState } from "react";
 
-/** Up to this many blocks the overview map is shown unless the user hid it: above, redrawing it costs pan frames. */
-export const OVERVIEW_MAP_BLOCKS = 150;
+/**
+ * Above this many blocks a diagram counts as large: its overview map starts hidden (redrawing it costs pan
+ * frames) and the canvas mounts live blocks only near the view.
+ */
+export const LARGE_DIAGRAM_BLOCKS = 150;
 const KEY = "loopwright:overview-map";
 
 function storedChoice(): boolean | null {
@@ -15,7 +18,7 @@ function storedChoice(): boolean | null {
 
 /** Whether the canvas shows its overview map: the user's last choice in this browser, else by diagram size. */
 export function useOverviewMap(blockCount: number): { shown: boolean; toggle: () => void } {
-  const [shown, setShown] = useState(() => storedChoice() ?? blockCount <= OVERVIEW_MAP_BLOCKS);
+  const [shown, setShown] = useState(() => storedChoice() ?? blockCount <= LARGE_DIAGRAM_BLOCKS);
   const toggle = () =>
     setShown((was) => {
       try {

@@ -7,13 +7,13 @@ export const FAR_ZOOM = 0.45;
 const isFar = (s: ReactFlowState) => s.transform[2] < FAR_ZOOM;
 const FarView = createContext(false);
 
-/**
- * One store subscription for the whole canvas, re-rendering only when the zoom crosses FAR_ZOOM; blocks read
- * the flag from context, so a pan frame does not run a selector per block.
- */
-export function FarViewProvider({ children }: { children: ReactNode }) {
-  return <FarView.Provider value={useStore(isFar)}>{children}</FarView.Provider>;
+/** Whether the canvas is zoomed out past legibility; one store subscription, changing only when the zoom crosses FAR_ZOOM. */
+export const useZoomedFar = (): boolean => useStore(isFar);
+
+/** Hands the canvas's one far-view flag to its blocks through context, so a pan frame does not run a selector per block. */
+export function FarViewProvider({ far, children }: { far: boolean; children: ReactNode }) {
+  return <FarView.Provider value={far}>{children}</FarView.Provider>;
 }
 
-/** Whether the canvas is zoomed out past legibility. */
+/** Whether the canvas is zoomed out past legibility, for the blocks inside FarViewProvider. */
 export const useFarView = (): boolean => useContext(FarView);

@@ -1,0 +1,160 @@
+import { memo, useMemo, type KeyboardEvent, type MouseEvent } from "react";
+import { ViewportPortal } from "@xyflow/react";
+import type { Block } from "@shared/diagram/schema";
+import type { Severity } from "@shared/diagram/problems";
+import { boundsOf, inPoint, nodeBox, outPoint } from "@/features/editor/geometry/blockBox";
+import { midpointAlong, roundedPath, wireRoute, type Box } from "@/features/editor/geometry/wireRoute";
+import { strokeColor } from "@/features/editor/components/nodes/nodeStyle";
+import { BreakMark, wireLook } from "@/features/editor/components/SignalEdgeView";
+import type { FlowNode, SignalEdge } from "@/features/editor/lib/flowModel";
+
+export interface OverviewPick {
+  id: string;
+  /** Shift, Ctrl or Cmd held: add to the selection or take the block out of it. */
+  additive: boolean;
+}
+
+interface Props {
+  nodes: FlowNode[];
+  edges: SignalEdge[];
+  onPick: (pick: OverviewPick) => void;
+  /** Zoom in on this box, where the full blocks take over. */
+  onOpen: (box: Box) => void;
+}
+
+const portOf = (handle: string | null | undefined) => (handle && handle !== "in" ? Number(handle.slice(2)) : undefined);
+const MARGIN = 48;
+
+interface ShapeProps extends Box {
+  block: Block;
+  label: string;
+  selected: boolean;
+  highlighted: boolean;
+  problem: Severity | null;
+  onPick: Props["onPick"];
+  onOpen: Props["onOpen"];
+}
+
+/** One block as an outline of its kind with its id; selectable by click or keyboard, double-click zooms in on it. */
+const OverviewBlock = memo(function OverviewBlock({ block, x, y, width: w, height: h, label, selected, highlighted, problem, onPick, onOpen }: ShapeProps) {
+  const stroke = strokeColor(selected, highlighted, problem);
+  const paint = {
+    fill: highlighted ? "#f8ecd6" : "#fcfbf8",
+    stroke,
+    strokeWidth: selected || highlighted ? 4 : 2,
+    strokeDasharray: problem === "error" && !selected && !highlighted ? "6 4" : undefined,
+  };
+  const shape =
+    block.type === "sum" ? (
+      <circle cx={x + w / 2} cy={y + h / 2} r={w / 2} {...paint} />
+    ) : block.type === "branch" ? (
+      <circle cx={x + w / 2} cy={y + h / 2} r={6} fill={stroke} />
+    ) : block.type === "gain" ? (
+      <polygon points={`${x},${y} ${x + w},${y + h / 2} ${x},${y + h}`} {...paint} />
+    ) : (
+      <rect x={x} y={y} width={w} height={h} rx={block.type === "input" || block.type === "output" ? h / 2 : 2} {...paint} />
+    );
+  const pick = (additive: boolean) => onPick({ id: block.id, additive });
+  const onKeyDown = (e: KeyboardEvent) => {
+    if (e.key !== "Enter" && e.key !== " ") return;
+    e.preventDefault();
+    pick(e.shiftKey);
+  };
+  return (
+    <g
+      role="button"
+      tabIndex={0}
+      aria-label={label}
+      aria-pressed={selected}
+      data-overview-block={block.id}
+      className="pointer-events-auto cursor-pointer outline-none"
+      onClick={(e: MouseEvent) => pick(e.shiftKey || e.metaKey || e.ctrlKey)}
+      onDoubleClick={() => onOpen({ x, y, width: w, height: h })}
+      onKeyDown={onKeyDown}
+    >
+      <title>{"expr" in block ? `${label}: ${block.expr}` : label}</title>
+      {shape}
+      {block.type !== "branch" && (
+        <text x={x + w / 2} y={y + h / 2} dy="0.35em" textAnchor="middle" fontSize={13} fontFamily="'IBM Plex Mono', monospace" fill="#4d5663">
+          {block.label ?? block.id}
+        </text>
+      )}
+    </g>
+  );
+});
+
+interface WireProps {
+  d: string;
+  marker: string;
+  stroke: string;
+  wide: boolean;
+  breakAt: ReturnType<typeof midpointAlong> | null;
+}
+
+const OverviewWire = memo(function OverviewWire({ d, marker, stroke, wide, breakAt }: WireProps) {
+  return (
+    <>
+      <path data-overview-wire d={d} fill="none" stroke={stroke} strokeWidth={wide ? 3 : 1.6} markerEnd={`url(#${marker})`} />
+      {breakAt && <BreakMark at={breakAt} stroke={stroke} />}
+    </>
+  );
+});
+
+/**
+ * A large diagram zoomed far out, drawn as one light picture instead of hundreds of live blocks and wires:
+ * outlines with ids, wires on the same routes, and the same selection, step and problem marks. Blocks are
+ * selected here; moving and wiring happen once zoomed in.
+ */
+export const OverviewLayer = memo(function OverviewLayer({ nodes, edges, onPick, onOpen }: Props) {
+  const boxes = useMemo(() => new Map(nodes.map((n) => [n.id, nodeBox(n)])), [nodes]);
+  const blocks = useMemo(() => new Map(nodes.map((n) => [n.id, n.data.block])), [nodes]);
+  const wires = useMemo(
+    () =>
+      edges.flatMap((e) => {
+        const sourceBox = boxes.get(e.source);
+        const targetBox = boxes.get(e.target);
+        const target = blocks.get(e.target);
+        if (!sourceBox || !targetBox || !target) return [];
+        const entry = inPoint(target, targetBox, portOf(e.targetHandle));
+        const points = wireRoute({ source: outPoint(sourceBox), target: entry.at, side: entry.side, sourceBox, targetBox });
+        const look = wireLook(e.data?.highlighted ?? false, e.selected ?? false, e.data?.problem ?? null);
+        return [{ id: e.id, d: roundedPath(points), look, wide: Boolean(e.data?.highlighted || e.selected), breakAt: e.data?.isBreak ? midpointAlong(points) : null }];
+      }),
+    [edges, boxes, blocks],
+  );
+  const bounds = boundsOf(boxes.values());
+  if (!bounds) return null;
+  const frame = { x: bounds.x - MARGIN, y: bounds.y - MARGIN, width: bounds.width + 2 * MARGIN, height: bounds.height + 2 * MARGIN };
+  return (
+    <ViewportPortal>
+      <svg
+        role="group"
+        aria-label={`Overview of ${nodes.length} blocks: select a block here, double-click it or zoom in to edit`}
+        className="pointer-events-none absolute overflow-visible"
+        style={{ left: frame.x, top: frame.y }}
+        width={frame.width}
+        height={frame.height}
+        viewBox={`${frame.x} ${frame.y} ${frame.width} ${frame.height}`}
+      >
+        <g aria-hidden>
+          {wires.map((w) => (
+            <OverviewWire key={w.id} d={w.d} marker={w.look.marker} stroke={w.look.stroke} wide={w.wide} breakAt={w.breakAt} />
+          ))}
+        </g>
+        {nodes.map((n) => (
+          <OverviewBlock
+            key={n.id}
+            block={n.data.block}
+            {...boxes.get(n.id)!}
+            label={n.ariaLabel ?? n.id}
+            selected={n.selected ?? false}
+            highlighted={n.data.highlighted}
+            problem={n.data.problem}
+            onPick={onPick}
+            onOpen={onOpen}
+          />
+        ))}
+      </svg>
+    </ViewportPortal>
+  );
+});

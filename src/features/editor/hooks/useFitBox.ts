@@ -1,0 +1,26 @@
+import { getViewportForBounds, useReactFlow, useStoreApi } from "@xyflow/react";
+import type { Box } from "@/features/editor/geometry/wireRoute";
+
+export interface FitOptions {
+  /** Room around the box, as a fraction of the view. */
+  padding: number;
+  maxZoom: number;
+  duration?: number;
+}
+
+/** The whole diagram in view: the first view of a diagram and the fit command. */
+export const WHOLE_DIAGRAM: FitOptions = { padding: 0.25, maxZoom: 1.2 };
+
+/**
+ * Moves the view to show a box of the diagram. Works from the document's boxes rather than the canvas's
+ * mounted blocks, so it also fits a large diagram whose blocks are drawn only as an overview.
+ */
+export function useFitBox(): (box: Box | null, options: FitOptions) => void {
+  const store = useStoreApi();
+  const flow = useReactFlow();
+  return (box, { padding, maxZoom, duration }) => {
+    const { width, height, minZoom } = store.getState();
+    if (!box || !width || !height) return;
+    void flow.setViewport(getViewportForBounds(box, width, height, minZoom, maxZoom, padding), duration ? { duration } : undefined);
+  };
+}
