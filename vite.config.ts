@@ -17,6 +17,8 @@ export default defineConfig({
     // The editor route carries KaTeX, the canvas library and the exact algebra (~850 kB raw, ~260 kB gzip);
     // it is split from the first page, which stays small.
     chunkSizeWarningLimit: 1000,
+    // Read by the server to announce a page's chunks in the HTML of its link (server/http/clientPages.ts).
+    manifest: true,
   },
   server: {
     port: 5173,

@@ -13,6 +13,7 @@ import { systemRouter } from "@server/features/system/router";
 import { teamsRouter } from "@server/features/teams/router";
 import { versionsRouter } from "@server/features/versions/router";
 import type { EngineBudget } from "@server/engine/checkDocument";
+import { clientPages } from "@server/http/clientPages";
 import { originCheck } from "@server/http/csrf";
 import { errorHandler, unknownApiRoute } from "@server/http/errors";
 import { authLimiter } from "@server/http/rateLimit";
@@ -71,9 +72,10 @@ export function createApp(deps: AppDeps): Express {
   const clientDir = resolve(config.clientDir);
   if (existsSync(join(clientDir, "index.html"))) {
     app.use(express.static(clientDir, { index: false, maxAge: "1h" }));
+    const page = clientPages(clientDir);
     // SPA fallback: every other GET that wants HTML gets the client, which routes it.
     app.get(/^\/(?!api\/|dev\/).*/, (req, res, next) =>
-      req.accepts("html") ? res.sendFile("index.html", { root: clientDir }) : next(),
+      req.accepts("html") ? void res.type("html").set("Cache-Control", "no-cache").send(page(req.path)) : next(),
     );
   }
   app.use(errorHandler(log));

@@ -10,7 +10,15 @@ let t: TestApp;
 beforeAll(async () => {
   const dir = join(mkdtempSync(join(tmpdir(), "lw-")), ".data", "client");
   mkdirSync(join(dir, "assets"), { recursive: true });
-  writeFileSync(join(dir, "index.html"), "<!doctype html><title>Loopwright</title>");
+  writeFileSync(join(dir, "index.html"), "<!doctype html><head><title>Loopwright</title></head>");
+  // Shaped like Vite's build manifest (its documented fields: file, isEntry, imports, css).
+  mkdirSync(join(dir, ".vite"));
+  const manifest = {
+    "index.html": { file: "assets/index-1.js", isEntry: true, imports: ["_shared-3.js"] },
+    "src/app/routes/DiagramRoute.tsx": { file: "assets/DiagramRoute-2.js", isDynamicEntry: true, imports: ["index.html", "_shared-3.js"], css: ["assets/DiagramRoute-2.css"] },
+    "_shared-3.js": { file: "assets/shared-3.js" },
+  };
+  writeFileSync(join(dir, ".vite", "manifest.json"), JSON.stringify(manifest));
   writeFileSync(join(dir, "assets", "app.js"), "console.log(1)");
   t = await startTestApp({ CLIENT_DIR: dir });
 });
@@ -24,4 +32,18 @@ it("serves the client for app routes, its assets, and JSON 404s under /api", asy
   const api = await request(t.app).get("/api/nothing").set("Accept", "text/html");
   expect(api.status).toBe(404);
   expect(api.body.error.code).toBe("not_found");
+});
+
+it("announces the editor's chunks in the HTML of a diagram's link, and only there", async () => {
+  const diagram = await request(t.app).get("/diagrams/4b1e").set("Accept", "text/html");
+  expect(diagram.status).toBe(200);
+  expect(diagram.text).toContain('<link rel="modulepreload" crossorigin href="/assets/DiagramRoute-2.js">');
+  expect(diagram.text).toContain('<link rel="modulepreload" crossorigin href="/assets/shared-3.js">');
+  expect(diagram.text).toContain('<link rel="stylesheet" crossorigin href="/assets/DiagramRoute-2.css">');
+  // The entry is already the page's own script.
+  expect(diagram.text).not.toContain("index-1.js");
+  const team = await request(t.app).get("/teams/123").set("Accept", "text/html");
+  expect(team.text).not.toContain("modulepreload");
+  // The manifest itself is not served (dot-folders are not static files; the path gets the plain page).
+  expect((await request(t.app).get("/.vite/manifest.json")).text).not.toContain("isEntry");
 });

@@ -35,7 +35,10 @@ interface ShapeProps extends Box {
   onOpen: Props["onOpen"];
 }
 
-/** One block as an outline of its kind with its id; selectable by click or keyboard, double-click zooms in on it. */
+/**
+ * One block as an outline of its kind with its id; selectable by click or keyboard, double-click zooms in on
+ * it. Like a live block it is "nopan": a press on it does not start a pan or the canvas's own double-click zoom.
+ */
 const OverviewBlock = memo(function OverviewBlock({ block, x, y, width: w, height: h, label, selected, highlighted, problem, onPick, onOpen }: ShapeProps) {
   const stroke = strokeColor(selected, highlighted, problem);
   const paint = {
@@ -67,7 +70,7 @@ const OverviewBlock = memo(function OverviewBlock({ block, x, y, width: w, heigh
       aria-label={label}
       aria-pressed={selected}
       data-overview-block={block.id}
-      className="pointer-events-auto cursor-pointer outline-none"
+      className="nopan pointer-events-auto cursor-pointer outline-none"
       onClick={(e: MouseEvent) => pick(e.shiftKey || e.metaKey || e.ctrlKey)}
       onDoubleClick={() => onOpen({ x, y, width: w, height: h })}
       onKeyDown={onKeyDown}
