@@ -10,11 +10,20 @@ interface ManifestChunk {
 }
 type Manifest = Record<string, ManifestChunk>;
 
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
 /**
- * Pages opened by link whose code is announced in the HTML. The path mirrors the client's route table
- * (src/lib/paths.ts), which the server cannot import.
+ * Pages opened by link whose code, and data, are announced in the HTML. The path mirrors the client's route
+ * table (src/lib/paths.ts), which the server cannot import; the data URLs are the requests the page waits
+ * for: the session check and the diagram (only for a well-formed id, which is then safe to write into the HTML).
  */
-const PAGE_CHUNKS = [{ path: /^\/diagrams\/[^/]+\/?$/, source: "src/app/routes/DiagramRoute.tsx" }];
+const PAGES = [
+  {
+    path: /^\/diagrams\/([^/]+)\/?$/,
+    source: "src/app/routes/DiagramRoute.tsx",
+    data: (id: string) => (UUID.test(id) ? ["/api/auth/me", `/api/diagrams/${id}`] : []),
+  },
+];
 
 /** Preload tags for a page chunk and the chunks it imports, the entry's own excluded (it is already in the page). */
 function preloadTags(manifest: Manifest, source: string): string[] {
@@ -33,14 +42,23 @@ function preloadTags(manifest: Manifest, source: string): string[] {
 }
 
 /**
- * The client's index.html for a path: for a page listed above, with its code chunks announced in the head
- * (from the build's manifest), so the browser fetches and compiles them while the entry script still runs
- * instead of only when the router asks. Without a manifest every path gets the plain page.
+ * The client's index.html for a path: for a page listed above, with its code chunks (from the build's
+ * manifest) and its first data request announced in the head, so the browser fetches them while the entry
+ * script still runs instead of only when the router and the page ask. Other paths get the plain page.
  */
 export function clientPages(clientDir: string): (path: string) => string {
   const html = readFileSync(join(clientDir, "index.html"), "utf8");
   const manifestFile = join(clientDir, ".vite", "manifest.json");
   const manifest: Manifest = existsSync(manifestFile) ? JSON.parse(readFileSync(manifestFile, "utf8")) : {};
-  const pages = PAGE_CHUNKS.map(({ path, source }) => ({ path, html: html.replace("</head>", `${preloadTags(manifest, source).join("")}</head>`) }));
-  return (path) => pages.find((p) => p.path.test(path))?.html ?? html;
+  const pages = PAGES.map((page) => ({ ...page, code: preloadTags(manifest, page.source).join("") }));
+  return (path) => {
+    for (const page of pages) {
+      const match = page.path.exec(path);
+      if (!match) continue;
+      // Same mode and credentials as the page's own fetches (cors, same-origin), so the browser reuses the answers.
+      const dataTags = page.data(match[1]).map((url) => `<link rel="preload" as="fetch" crossorigin="anonymous" href="${url}">`);
+      return html.replace("</head>", `${page.code}${dataTags.join("")}</head>`);
+    }
+    return html;
+  };
 }

@@ -1,17 +1,9 @@
-import { useState } from "react";
-import { QueryClientProvider } from "@tanstack/react-query";
+import { QueryClientProvider, type QueryClient } from "@tanstack/react-query";
 import { RouterProvider } from "react-router-dom";
 import { Toaster } from "sonner";
-import { makeQueryClient } from "@/app/queryClient";
-import { preloadDiagramPage } from "@/app/preloadDiagramPage";
 import { router } from "@/app/router";
 
-export function App() {
-  const [queryClient] = useState(() => {
-    const client = makeQueryClient();
-    preloadDiagramPage(client, window.location.pathname);
-    return client;
-  });
+export function App({ queryClient }: { queryClient: QueryClient }) {
   return (
     <QueryClientProvider client={queryClient}>
       <RouterProvider router={router} />

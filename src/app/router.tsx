@@ -1,7 +1,8 @@
 import { lazy } from "react";
-import { createBrowserRouter, matchPath, Navigate } from "react-router-dom";
+import { createBrowserRouter, Navigate } from "react-router-dom";
 import { AppShell } from "@/app/layout/AppShell";
 import { RequireAuth } from "@/app/RequireAuth";
+import { loadDiagramRoute } from "@/app/routes/loadDiagramRoute";
 import { RouteError } from "@/app/routes/RouteError";
 import { paths } from "@/lib/paths";
 
@@ -12,10 +13,7 @@ const InviteRoute = lazy(() => import("@/app/routes/InviteRoute").then((m) => ({
 const TeamsRoute = lazy(() => import("@/app/routes/TeamsRoute").then((m) => ({ default: m.TeamsRoute })));
 const TeamRoute = lazy(() => import("@/app/routes/TeamRoute").then((m) => ({ default: m.TeamRoute })));
 const MembersRoute = lazy(() => import("@/app/routes/MembersRoute").then((m) => ({ default: m.MembersRoute })));
-const loadDiagramRoute = () => import("@/app/routes/DiagramRoute");
 const DiagramRoute = lazy(() => loadDiagramRoute().then((m) => ({ default: m.DiagramRoute })));
-// Opening a diagram by its link: fetch the editor's chunk while the session is still being checked.
-if (matchPath(paths.diagram, window.location.pathname)) void loadDiagramRoute();
 const NotFoundRoute = lazy(() => import("@/app/routes/NotFoundRoute").then((m) => ({ default: m.NotFoundRoute })));
 
 export const router = createBrowserRouter([

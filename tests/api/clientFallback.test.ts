@@ -34,14 +34,22 @@ it("serves the client for app routes, its assets, and JSON 404s under /api", asy
   expect(api.body.error.code).toBe("not_found");
 });
 
-it("announces the editor's chunks in the HTML of a diagram's link, and only there", async () => {
-  const diagram = await request(t.app).get("/diagrams/4b1e").set("Accept", "text/html");
+it("announces the editor's chunks and the diagram's data in the HTML of a diagram's link, and only there", async () => {
+  const id = "4b1e7f3a-9c2d-4e5f-8a6b-1c2d3e4f5a6b";
+  const diagram = await request(t.app).get(`/diagrams/${id}`).set("Accept", "text/html");
   expect(diagram.status).toBe(200);
   expect(diagram.text).toContain('<link rel="modulepreload" crossorigin href="/assets/DiagramRoute-2.js">');
   expect(diagram.text).toContain('<link rel="modulepreload" crossorigin href="/assets/shared-3.js">');
   expect(diagram.text).toContain('<link rel="stylesheet" crossorigin href="/assets/DiagramRoute-2.css">');
+  expect(diagram.text).toContain(`<link rel="preload" as="fetch" crossorigin="anonymous" href="/api/diagrams/${id}">`);
+  expect(diagram.text).toContain('<link rel="preload" as="fetch" crossorigin="anonymous" href="/api/auth/me">');
   // The entry is already the page's own script.
   expect(diagram.text).not.toContain("index-1.js");
+  // An id that is not one is never written into the page; the code is still announced.
+  const odd = await request(t.app).get('/diagrams/"><script>x').set("Accept", "text/html");
+  expect(odd.text).not.toContain("<script>x");
+  expect(odd.text).not.toContain('as="fetch"');
+  expect(odd.text).toContain("DiagramRoute-2.js");
   const team = await request(t.app).get("/teams/123").set("Accept", "text/html");
   expect(team.text).not.toContain("modulepreload");
   // The manifest itself is not served (dot-folders are not static files; the path gets the plain page).

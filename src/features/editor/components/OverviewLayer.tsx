@@ -3,7 +3,7 @@ import { ViewportPortal } from "@xyflow/react";
 import type { Block } from "@shared/diagram/schema";
 import type { Severity } from "@shared/diagram/problems";
 import { boundsOf, inPoint, nodeBox, outPoint } from "@/features/editor/geometry/blockBox";
-import { midpointAlong, roundedPath, wireRoute, type Box } from "@/features/editor/geometry/wireRoute";
+import { arrowHead, midpointAlong, roundedPath, wireRoute, type Box } from "@/features/editor/geometry/wireRoute";
 import { strokeColor } from "@/features/editor/components/nodes/nodeStyle";
 import { BreakMark, wireLook } from "@/features/editor/components/SignalEdgeView";
 import type { FlowNode, SignalEdge } from "@/features/editor/lib/flowModel";
@@ -75,7 +75,6 @@ const OverviewBlock = memo(function OverviewBlock({ block, x, y, width: w, heigh
       onDoubleClick={() => onOpen({ x, y, width: w, height: h })}
       onKeyDown={onKeyDown}
     >
-      <title>{"expr" in block ? `${label}: ${block.expr}` : label}</title>
       {shape}
       {block.type !== "branch" && (
         <text x={x + w / 2} y={y + h / 2} dy="0.35em" textAnchor="middle" fontSize={13} fontFamily="'IBM Plex Mono', monospace" fill="#4d5663">
@@ -86,19 +85,15 @@ const OverviewBlock = memo(function OverviewBlock({ block, x, y, width: w, heigh
   );
 });
 
-interface WireProps {
-  d: string;
-  marker: string;
-  stroke: string;
-  wide: boolean;
-  breakAt: ReturnType<typeof midpointAlong> | null;
-}
+type Look = ReturnType<typeof wireLook>;
 
-const OverviewWire = memo(function OverviewWire({ d, marker, stroke, wide, breakAt }: WireProps) {
+/** All wires of one look as two paths (routes, arrowheads): a few elements to lay out and paint instead of two per wire. */
+const WireBundle = memo(function WireBundle({ look, routes, heads, count }: { look: Look; routes: string; heads: string; count: number }) {
+  const wide = look === wireLook(true, false, null) || look === wireLook(false, true, null);
   return (
     <>
-      <path data-overview-wire d={d} fill="none" stroke={stroke} strokeWidth={wide ? 3 : 1.6} markerEnd={`url(#${marker})`} />
-      {breakAt && <BreakMark at={breakAt} stroke={stroke} />}
+      <path data-overview-wires={count} d={routes} fill="none" stroke={look.stroke} strokeWidth={wide ? 3 : 1.6} />
+      <path d={heads} fill={look.stroke} />
     </>
   );
 });
@@ -121,10 +116,21 @@ export const OverviewLayer = memo(function OverviewLayer({ nodes, edges, onPick,
         const entry = inPoint(target, targetBox, portOf(e.targetHandle));
         const points = wireRoute({ source: outPoint(sourceBox), target: entry.at, side: entry.side, sourceBox, targetBox });
         const look = wireLook(e.data?.highlighted ?? false, e.selected ?? false, e.data?.problem ?? null);
-        return [{ id: e.id, d: roundedPath(points), look, wide: Boolean(e.data?.highlighted || e.selected), breakAt: e.data?.isBreak ? midpointAlong(points) : null }];
+        return [{ id: e.id, points, look, isBreak: e.data?.isBreak ?? false }];
       }),
     [edges, boxes, blocks],
   );
+  const bundles = useMemo(() => {
+    const byLook = new Map<Look, { routes: string[]; heads: string[] }>();
+    for (const w of wires) {
+      const bundle = byLook.get(w.look) ?? { routes: [], heads: [] };
+      bundle.routes.push(roundedPath(w.points));
+      bundle.heads.push(arrowHead(w.points));
+      byLook.set(w.look, bundle);
+    }
+    return [...byLook].map(([look, b]) => ({ look, routes: b.routes.join(" "), heads: b.heads.join(" "), count: b.routes.length }));
+  }, [wires]);
+  const broken = wires.find((w) => w.isBreak);
   const bounds = boundsOf(boxes.values());
   if (!bounds) return null;
   const frame = { x: bounds.x - MARGIN, y: bounds.y - MARGIN, width: bounds.width + 2 * MARGIN, height: bounds.height + 2 * MARGIN };
@@ -140,9 +146,10 @@ export const OverviewLayer = memo(function OverviewLayer({ nodes, edges, onPick,
         viewBox={`${frame.x} ${frame.y} ${frame.width} ${frame.height}`}
       >
         <g aria-hidden>
-          {wires.map((w) => (
-            <OverviewWire key={w.id} d={w.d} marker={w.look.marker} stroke={w.look.stroke} wide={w.wide} breakAt={w.breakAt} />
+          {bundles.map((b) => (
+            <WireBundle key={b.look.marker} {...b} />
           ))}
+          {broken && <BreakMark at={midpointAlong(broken.points)} stroke={broken.look.stroke} />}
         </g>
         {nodes.map((n) => (
           <OverviewBlock

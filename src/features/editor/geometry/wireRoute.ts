@@ -87,6 +87,23 @@ export function roundedPath(points: Point[], radius = 6): string {
   return `${d} L ${end.x} ${end.y}`;
 }
 
+/**
+ * A closed arrowhead at the end of a polyline, pointing along its last segment, in the shape of the canvas's
+ * wire marker (9 px long). Example: ending at (100, 0) from the left → "M 92.5 -3.37 L 100 0 L 92.5 3.38 L 94.38 0 Z" (halves round up).
+ */
+export function arrowHead(points: Point[]): string {
+  if (points.length < 2) return "";
+  const tip = points[points.length - 1];
+  const from = points[points.length - 2];
+  const length = Math.hypot(tip.x - from.x, tip.y - from.y) || 1;
+  const [ux, uy] = [(tip.x - from.x) / length, (tip.y - from.y) / length];
+  // Corners in the head's own frame (along the wire, across it), from the marker's 12-unit drawing scaled to 9 px.
+  const at = (along: number, across: number) => `${round2(tip.x + ux * along - uy * across)} ${round2(tip.y + uy * along + ux * across)}`;
+  return `M ${at(-7.5, -3.375)} L ${at(0, 0)} L ${at(-7.5, 3.375)} L ${at(-5.625, 0)} Z`;
+}
+
+const round2 = (v: number) => Math.round(v * 100) / 100 + 0;
+
 function towards(from: Point, to: Point, distance: number): Point {
   const length = Math.hypot(to.x - from.x, to.y - from.y) || 1;
   return { x: from.x + ((to.x - from.x) / length) * distance, y: from.y + ((to.y - from.y) / length) * distance };

@@ -2,7 +2,7 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import type { Point } from "@/features/editor/commands/types";
 import { sumDiameter, sumPortPlaces, type Side } from "@/features/editor/geometry/sumPorts";
-import { GAP, midpointAlong, roundedPath, wireRoute, type Box } from "@/features/editor/geometry/wireRoute";
+import { arrowHead, GAP, midpointAlong, roundedPath, wireRoute, type Box } from "@/features/editor/geometry/wireRoute";
 
 const box = (x: number, y: number, width = 80, height = 48): Box => ({ x, y, width, height });
 /** Output on the right edge, middle height. */
@@ -123,5 +123,21 @@ describe("summing junction ports", () => {
     expect(sumPortPlaces(2).map((p) => p.side)).toEqual(["left", "bottom"]);
     expect(sumDiameter(2)).toBe(48);
     expect(sumDiameter(16)).toBeGreaterThan(sumDiameter(8));
+  });
+});
+
+describe("arrowhead at a wire's end (the canvas marker's shape: tip, two barbs 7.5 back and 3.375 out, notch 5.625 back)", () => {
+  // Coordinates to 0.01, halves rounded up (Math.round): ±3.375 prints as −3.37 and 3.38.
+  it("points along a horizontal last segment", () => {
+    expect(arrowHead([{ x: 0, y: 0 }, { x: 100, y: 0 }])).toBe("M 92.5 -3.37 L 100 0 L 92.5 3.38 L 94.38 0 Z");
+  });
+
+  it("points up a vertical segment into the bottom port of a junction", () => {
+    // Travelling up (−y): "back" is +y, and "across" turns with the direction.
+    expect(arrowHead([{ x: 0, y: 50 }, { x: 0, y: 10 }])).toBe("M -3.37 17.5 L 0 10 L 3.38 17.5 L 0 15.63 Z");
+  });
+
+  it("is empty for fewer than two points", () => {
+    expect(arrowHead([{ x: 1, y: 1 }])).toBe("");
   });
 });
