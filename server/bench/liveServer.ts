@@ -69,7 +69,8 @@ export async function startLiveServer(databaseUrl: string): Promise<LiveServer> 
     rmSync(clientDir, { recursive: true, force: true });
   };
   try {
-    runOrThrow(bin("vite"), ["build", "--outDir", clientDir, "--emptyOutDir", "--logLevel", "error"], "the client build failed");
+    // BENCH_NO_MINIFY=1: readable function names in profiles of the benchmarked page.
+    runOrThrow(bin("vite"), ["build", ...(process.env.BENCH_NO_MINIFY ? ["--minify", "false"] : []), "--outDir", clientDir, "--emptyOutDir", "--logLevel", "error"], "the client build failed");
     runOrThrow(bin("tsx"), ["server/db/migrateCli.ts"], "migrating the bench database failed", { ...process.env, DATABASE_URL: databaseUrl });
     server = spawn(bin("tsx"), ["server/main.ts"], {
       stdio: ["ignore", "ignore", "inherit"],
