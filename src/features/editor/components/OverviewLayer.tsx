@@ -1,5 +1,5 @@
 import { memo, useMemo, type KeyboardEvent, type MouseEvent } from "react";
-import { ViewportPortal } from "@xyflow/react";
+import { useStore, ViewportPortal, type ReactFlowState } from "@xyflow/react";
 import type { Block } from "@shared/diagram/schema";
 import type { Severity } from "@shared/diagram/problems";
 import { boundsOf, inPoint, nodeBox, outPoint } from "@/features/editor/geometry/blockBox";
@@ -24,9 +24,14 @@ interface Props {
 
 const portOf = (handle: string | null | undefined) => (handle && handle !== "in" ? Number(handle.slice(2)) : undefined);
 const MARGIN = 48;
+/** Zoom from which a 13-px id is at least 4 px tall on screen. */
+const IDS_FROM_ZOOM = 0.3;
+const legibleIds = (s: ReactFlowState) => s.transform[2] >= IDS_FROM_ZOOM;
 
 interface ShapeProps extends Box {
   block: Block;
+  /** Print the id: off when zoomed out so far that it would be under 4 px tall. */
+  named: boolean;
   label: string;
   selected: boolean;
   highlighted: boolean;
@@ -39,7 +44,7 @@ interface ShapeProps extends Box {
  * One block as an outline of its kind with its id; selectable by click or keyboard, double-click zooms in on
  * it. Like a live block it is "nopan": a press on it does not start a pan or the canvas's own double-click zoom.
  */
-const OverviewBlock = memo(function OverviewBlock({ block, x, y, width: w, height: h, label, selected, highlighted, problem, onPick, onOpen }: ShapeProps) {
+const OverviewBlock = memo(function OverviewBlock({ block, named, x, y, width: w, height: h, label, selected, highlighted, problem, onPick, onOpen }: ShapeProps) {
   const stroke = strokeColor(selected, highlighted, problem);
   const paint = {
     fill: highlighted ? "#f8ecd6" : "#fcfbf8",
@@ -76,7 +81,7 @@ const OverviewBlock = memo(function OverviewBlock({ block, x, y, width: w, heigh
       onKeyDown={onKeyDown}
     >
       {shape}
-      {block.type !== "branch" && (
+      {named && block.type !== "branch" && (
         <text x={x + w / 2} y={y + h / 2} dy="0.35em" textAnchor="middle" fontSize={13} fontFamily="'IBM Plex Mono', monospace" fill="#4d5663">
           {block.label ?? block.id}
         </text>
@@ -104,6 +109,7 @@ const WireBundle = memo(function WireBundle({ look, routes, heads, count }: { lo
  * selected here; moving and wiring happen once zoomed in.
  */
 export const OverviewLayer = memo(function OverviewLayer({ nodes, edges, onPick, onOpen }: Props) {
+  const named = useStore(legibleIds);
   const boxes = useMemo(() => new Map(nodes.map((n) => [n.id, nodeBox(n)])), [nodes]);
   const blocks = useMemo(() => new Map(nodes.map((n) => [n.id, n.data.block])), [nodes]);
   const wires = useMemo(
@@ -159,6 +165,7 @@ export const OverviewLayer = memo(function OverviewLayer({ nodes, edges, onPick,
             label={n.ariaLabel ?? n.id}
             selected={n.selected ?? false}
             highlighted={n.data.highlighted}
+            named={named}
             problem={n.data.problem}
             onPick={onPick}
             onOpen={onOpen}
