@@ -26,8 +26,8 @@ import type { Point } from "@/features/editor/commands/types";
 import { BranchNode, InputNode, OutputNode } from "@/features/editor/components/nodes/TerminalNodes";
 import { GainNode, IntegratorNode, TransferNode } from "@/features/editor/components/nodes/ExpressionNodes";
 import { SumNode } from "@/features/editor/components/nodes/SumNode";
-import { FAR_ZOOM, FarViewProvider, useFarView, useZoomedFar } from "@/features/editor/components/nodes/farView";
-import { OverviewLayer, type OverviewPick } from "@/features/editor/components/OverviewLayer";
+import { FAR_ZOOM, FarViewProvider, useFarView, useZoomBelow } from "@/features/editor/components/nodes/farView";
+import { OverviewLayer, OVERVIEW_ZOOM, type OverviewPick } from "@/features/editor/components/OverviewLayer";
 import { SignalEdgeView, WireMarkers } from "@/features/editor/components/SignalEdgeView";
 import { BLOCK_MIME } from "@/features/editor/components/BlockRail";
 import type { FlowNode, SignalEdge } from "@/features/editor/lib/flowModel";
@@ -91,22 +91,23 @@ export function DiagramCanvas({ nodes, edges, onNodesChange, onEdgesChange, read
   // in its far form rather than typeset first and redrawn.
   const [opening] = useState(() => openingViewport(nodes, { width: window.innerWidth, height: window.innerHeight }));
 
-  // A large diagram keeps live blocks only where the user can see them: zoomed far out it is drawn as one
+  // A large diagram keeps live blocks only where the user can see them: zoomed out it is drawn as one
   // overview picture; nearer, blocks not measured yet mount only inside the region around the view.
   const large = nodes.length > LARGE_DIAGRAM_BLOCKS;
   // Until the pan-zoom starts, the store still holds zoom 1: the first render goes by the opening view instead.
   const started = useStore(panZoomStarted);
-  const zoomedFar = useZoomedFar();
+  const zoomedFar = useZoomBelow(FAR_ZOOM);
+  const zoomedOut = useZoomBelow(OVERVIEW_ZOOM);
   const far = started ? zoomedFar : opening.zoom < FAR_ZOOM;
-  const overviewOnly = large && far;
+  const overviewOnly = large && (started ? zoomedOut : opening.zoom < OVERVIEW_ZOOM);
   const region = useStore(
     useCallback(
       (s: ReactFlowState) => {
-        if (!large || far) return NOWHERE;
+        if (!large || overviewOnly) return NOWHERE;
         const view = s.width ? s : { width: window.innerWidth, height: window.innerHeight };
         return revealRegion(started ? s.transform : [opening.x, opening.y, opening.zoom], view);
       },
-      [large, far, started, opening],
+      [large, overviewOnly, started, opening],
     ),
     sameBox,
   );

@@ -10,17 +10,17 @@ export interface Size {
 const REGION_STEP = 400;
 
 /**
- * The part of the diagram (flow coordinates) worth mounting live blocks for: the view widened by half its
- * size on each side, snapped outward to REGION_STEP. Example: view 1000×500 at zoom 1 and offset 0 →
- * x −800…1600, y −400…800.
+ * The part of the diagram (flow coordinates) worth mounting live blocks for: the view snapped outward to
+ * REGION_STEP, which leaves a margin of up to one step for a block's corner and for the first frames of a pan.
+ * Example: view 1000×500 at zoom 1 and offset (−100, −100) → x 0…1200, y 0…800.
  */
 export function revealRegion([tx, ty, zoom]: readonly [number, number, number], view: Size): Box {
-  const w = view.width / zoom;
-  const h = view.height / zoom;
-  const x0 = Math.floor((-tx / zoom - w / 2) / REGION_STEP) * REGION_STEP;
-  const y0 = Math.floor((-ty / zoom - h / 2) / REGION_STEP) * REGION_STEP;
-  const x1 = Math.ceil((-tx / zoom + w * 1.5) / REGION_STEP) * REGION_STEP;
-  const y1 = Math.ceil((-ty / zoom + h * 1.5) / REGION_STEP) * REGION_STEP;
+  const snapDown = (v: number) => Math.floor(v / REGION_STEP) * REGION_STEP;
+  const snapUp = (v: number) => Math.ceil(v / REGION_STEP) * REGION_STEP;
+  const x0 = snapDown(-tx / zoom);
+  const y0 = snapDown(-ty / zoom);
+  const x1 = snapUp((view.width - tx) / zoom);
+  const y1 = snapUp((view.height - ty) / zoom);
   return { x: x0, y: y0, width: x1 - x0, height: y1 - y0 };
 }
 
