@@ -238,9 +238,14 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
       </div>
       <div className="mt-4">
         <Panel title="Analysis">
-          <Suspense fallback={<p className="text-sm text-ink-soft">Loading the analysis…</p>}>
-            <AnalysisPanel live={analysis} settings={analysisSettings} onSettings={changeAnalysis} onPickProblem={pickProblem} />
-          </Suspense>
+          {/* Its code (charts included) is fetched once the first result is in, not while the canvas is first drawn. */}
+          {live.outcome ? (
+            <Suspense fallback={<p className="text-sm text-ink-soft">Loading the analysis…</p>}>
+              <AnalysisPanel live={analysis} settings={analysisSettings} onSettings={changeAnalysis} onPickProblem={pickProblem} />
+            </Suspense>
+          ) : (
+            <p className="text-sm text-ink-soft">The analysis starts once the closed loop is computed.</p>
+          )}
         </Panel>
       </div>
       <div className="mt-4">
