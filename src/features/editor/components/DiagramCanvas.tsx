@@ -30,7 +30,7 @@ import { FAR_ZOOM, FarViewProvider, useFarView, useZoomBelow } from "@/features/
 import { OverviewLayer, OVERVIEW_ZOOM, type OverviewPick } from "@/features/editor/components/OverviewLayer";
 import { SignalEdgeView, WireMarkers } from "@/features/editor/components/SignalEdgeView";
 import { BLOCK_MIME } from "@/features/editor/components/BlockRail";
-import type { FlowNode, SignalEdge } from "@/features/editor/lib/flowModel";
+import { portOfHandle, type FlowNode, type SignalEdge } from "@/features/editor/lib/flowModel";
 import { boundsOf, nodeBox } from "@/features/editor/geometry/blockBox";
 import { inBox, revealRegion } from "@/features/editor/geometry/viewport";
 import { sameBox, type Box } from "@/features/editor/geometry/wireRoute";
@@ -68,7 +68,6 @@ function CanvasGrid() {
   return <Background variant={BackgroundVariant.Dots} gap={far ? GRID * 4 : GRID} size={far ? 4 : 1.2} color="#b9b2a3" />;
 }
 
-const portOf = (handle: string | null | undefined) => (handle && handle.startsWith("in") && handle !== "in" ? Number(handle.slice(2)) : undefined);
 
 interface Props {
   nodes: FlowNode[];
@@ -148,7 +147,7 @@ export function DiagramCanvas({ nodes, edges, onNodesChange, onEdgesChange, read
 
   const overview = useOverviewMap(nodes.length);
 
-  const onConnect = (c: Connection) => onConnectWire({ from: c.source, to: c.target, port: portOf(c.targetHandle) });
+  const onConnect = (c: Connection) => onConnectWire({ from: c.source, to: c.target, port: portOfHandle(c.targetHandle) });
 
   // A drop on a block without a fitting handle (an input block, an output's body) still gets its reason.
   const onConnectEnd = (event: MouseEvent | TouchEvent, state: FinalConnectionState) => {
@@ -157,7 +156,7 @@ export function DiagramCanvas({ nodes, edges, onNodesChange, onEdgesChange, read
     const over = document.elementFromPoint(at.clientX, at.clientY)?.closest(".react-flow__node")?.getAttribute("data-id");
     if (!over || over === state.fromNode.id) return;
     if (state.fromHandle.type === "source") onConnectWire({ from: state.fromNode.id, to: over });
-    else onConnectWire({ from: over, to: state.fromNode.id, port: portOf(state.fromHandle.id) });
+    else onConnectWire({ from: over, to: state.fromNode.id, port: portOfHandle(state.fromHandle.id) });
   };
 
   const onDragOver = (e: DragEvent) => {

@@ -6,7 +6,7 @@ import { boundsOf, inPoint, nodeBox, outPoint } from "@/features/editor/geometry
 import { arrowHead, midpointAlong, roundedPath, wireRoute, type Box } from "@/features/editor/geometry/wireRoute";
 import { strokeColor } from "@/features/editor/components/nodes/nodeStyle";
 import { BreakMark, wireLook } from "@/features/editor/components/SignalEdgeView";
-import type { FlowNode, SignalEdge } from "@/features/editor/lib/flowModel";
+import { portOfHandle, type FlowNode, type SignalEdge } from "@/features/editor/lib/flowModel";
 
 export interface OverviewPick {
   id: string;
@@ -22,7 +22,6 @@ interface Props {
   onOpen: (box: Box) => void;
 }
 
-const portOf = (handle: string | null | undefined) => (handle && handle !== "in" ? Number(handle.slice(2)) : undefined);
 const MARGIN = 48;
 /**
  * Below this zoom a large diagram is drawn as the overview. Above it the view holds at most ~150 blocks of a
@@ -97,9 +96,17 @@ const OverviewBlock = memo(function OverviewBlock({ block, named, x, y, width: w
 
 type Look = ReturnType<typeof wireLook>;
 
+interface BundleProps {
+  look: Look;
+  /** Drawn wider: the wires of the step shown or of the selection. */
+  wide: boolean;
+  routes: string;
+  heads: string;
+  count: number;
+}
+
 /** All wires of one look as two paths (routes, arrowheads): a few elements to lay out and paint instead of two per wire. */
-const WireBundle = memo(function WireBundle({ look, routes, heads, count }: { look: Look; routes: string; heads: string; count: number }) {
-  const wide = look === wireLook(true, false, null) || look === wireLook(false, true, null);
+const WireBundle = memo(function WireBundle({ look, wide, routes, heads, count }: BundleProps) {
   return (
     <>
       <path data-overview-wires={count} d={routes} fill="none" stroke={look.stroke} strokeWidth={wide ? 3 : 1.6} />
@@ -124,22 +131,24 @@ export const OverviewLayer = memo(function OverviewLayer({ nodes, edges, onPick,
         const targetBox = boxes.get(e.target);
         const target = blocks.get(e.target);
         if (!sourceBox || !targetBox || !target) return [];
-        const entry = inPoint(target, targetBox, portOf(e.targetHandle));
+        const entry = inPoint(target, targetBox, portOfHandle(e.targetHandle));
         const points = wireRoute({ source: outPoint(sourceBox), target: entry.at, side: entry.side, sourceBox, targetBox });
-        const look = wireLook(e.data?.highlighted ?? false, e.selected ?? false, e.data?.problem ?? null);
-        return [{ id: e.id, points, look, isBreak: e.data?.isBreak ?? false }];
+        const [highlighted, selected] = [e.data?.highlighted ?? false, e.selected ?? false];
+        const look = wireLook(highlighted, selected, e.data?.problem ?? null);
+        return [{ id: e.id, points, look, wide: highlighted || selected, isBreak: e.data?.isBreak ?? false }];
       }),
     [edges, boxes, blocks],
   );
   const bundles = useMemo(() => {
-    const byLook = new Map<Look, { routes: string[]; heads: string[] }>();
+    // One look, one width: the look already says whether the wire is highlighted or selected.
+    const byLook = new Map<Look, { wide: boolean; routes: string[]; heads: string[] }>();
     for (const w of wires) {
-      const bundle = byLook.get(w.look) ?? { routes: [], heads: [] };
+      const bundle = byLook.get(w.look) ?? { wide: w.wide, routes: [], heads: [] };
       bundle.routes.push(roundedPath(w.points));
       bundle.heads.push(arrowHead(w.points));
       byLook.set(w.look, bundle);
     }
-    return [...byLook].map(([look, b]) => ({ look, routes: b.routes.join(" "), heads: b.heads.join(" "), count: b.routes.length }));
+    return [...byLook].map(([look, b]) => ({ look, wide: b.wide, routes: b.routes.join(" "), heads: b.heads.join(" "), count: b.routes.length }));
   }, [wires]);
   const broken = wires.find((w) => w.isBreak);
   const bounds = boundsOf(boxes.values());

@@ -47,6 +47,8 @@ export const TYPE_NAME: Record<BlockType, string> = {
 };
 
 export const inHandle = (port: number | undefined) => (port === undefined ? "in" : `in${port}`);
+/** The junction port an input handle stands for ("in2" → 2); undefined for a single-input block's "in". */
+export const portOfHandle = (handle: string | null | undefined) => (handle && handle.startsWith("in") && handle !== "in" ? Number(handle.slice(2)) : undefined);
 export const OUT_HANDLE = "out";
 
 /** Where a block without a stored position is placed: a loose grid in document order. */

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { buildEdges, buildNodes, fallbackPosition } from "@/features/editor/lib/flowModel";
+import { buildEdges, buildNodes, fallbackPosition, inHandle, portOfHandle } from "@/features/editor/lib/flowModel";
 import { problemMarks, stepFootprint } from "@/features/editor/lib/marks";
 import { unityLoop } from "../support";
 
@@ -57,5 +57,16 @@ describe("canvas model of a document", () => {
     expect([...second.blocks].sort()).toEqual(["c", "h", "p"]);
     expect([...second.wires].sort()).toEqual(["w3", "w5", "w6"]);
     expect([...stepFootprint(steps, 0).blocks].sort()).toEqual(["c", "p"]);
+  });
+});
+
+describe("input handle ids and junction ports (the editor's own naming: in, in0, in1, …)", () => {
+  it("read back the port each handle was named for", () => {
+    for (const port of [0, 1, 2, 7]) expect(portOfHandle(inHandle(port))).toBe(port);
+  });
+  it("have no port for a single-input block's handle, an output or nothing", () => {
+    expect(portOfHandle(inHandle(undefined))).toBeUndefined();
+    expect(portOfHandle("out")).toBeUndefined();
+    expect(portOfHandle(null)).toBeUndefined();
   });
 });
