@@ -1,4 +1,4 @@
-import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState, type DragEvent, type PointerEvent as ReactPointerEvent, type ReactNode, type RefObject } from "react";
+import { useCallback, useState, type DragEvent, type PointerEvent as ReactPointerEvent, type ReactNode, type RefObject } from "react";
 import {
   Background,
   BackgroundVariant,
@@ -7,7 +7,6 @@ import {
   MiniMap,
   ReactFlow,
   useReactFlow,
-  useStore,
   type Connection,
   type EdgeTypes,
   getViewportForBounds,
@@ -15,7 +14,6 @@ import {
   type NodeTypes,
   type OnEdgesChange,
   type OnNodesChange,
-  type ReactFlowState,
 } from "@xyflow/react";
 import "@xyflow/react/dist/base.css";
 import { Map as MapIcon } from "lucide-react";
@@ -26,16 +24,17 @@ import type { Point } from "@/features/editor/commands/types";
 import { BranchNode, InputNode, OutputNode } from "@/features/editor/components/nodes/TerminalNodes";
 import { GainNode, IntegratorNode, TransferNode } from "@/features/editor/components/nodes/ExpressionNodes";
 import { SumNode } from "@/features/editor/components/nodes/SumNode";
-import { FAR_ZOOM, FarViewProvider, useFarView, useZoomBelow } from "@/features/editor/components/nodes/farView";
-import { OverviewLayer, OVERVIEW_ZOOM, type OverviewPick } from "@/features/editor/components/OverviewLayer";
+import { FarViewProvider, useFarView } from "@/features/editor/components/nodes/farView";
+import { OverviewLayer } from "@/features/editor/components/OverviewLayer";
 import { SignalEdgeView, WireMarkers } from "@/features/editor/components/SignalEdgeView";
 import { BLOCK_MIME } from "@/features/editor/components/BlockRail";
 import { portOfHandle, type FlowNode, type SignalEdge } from "@/features/editor/lib/flowModel";
 import { boundsOf, nodeBox } from "@/features/editor/geometry/blockBox";
-import { inBox, revealRegion } from "@/features/editor/geometry/viewport";
-import { sameBox, type Box } from "@/features/editor/geometry/wireRoute";
+import type { Box } from "@/features/editor/geometry/wireRoute";
 import { useFitBox, WHOLE_DIAGRAM } from "@/features/editor/hooks/useFitBox";
-import { LARGE_DIAGRAM_BLOCKS, useOverviewMap } from "@/features/editor/hooks/useOverviewMap";
+import { useLiveCanvas } from "@/features/editor/hooks/useLiveCanvas";
+import { useOverviewMap } from "@/features/editor/hooks/useOverviewMap";
+import { useOverviewPick } from "@/features/editor/hooks/useOverviewPick";
 
 // Module-level so the canvas never sees new type tables (which would remount every node).
 const nodeTypes = {
@@ -50,11 +49,6 @@ const nodeTypes = {
 const edgeTypes = { signal: SignalEdgeView } satisfies EdgeTypes;
 
 const MIN_ZOOM = 0.2;
-const NO_EDGES: SignalEdge[] = [];
-const hide = (n: FlowNode): FlowNode => ({ ...n, hidden: true });
-const NOWHERE: Box = { x: 0, y: 0, width: 0, height: 0 };
-const paneReady = (s: ReactFlowState) => s.width > 0 && s.height > 0;
-const panZoomStarted = (s: ReactFlowState) => s.panZoom !== null;
 
 /** The whole diagram fitted into a view of this size: where the canvas opens before it has measured anything. */
 function openingViewport(nodes: FlowNode[], view: { width: number; height: number }) {
@@ -67,7 +61,6 @@ function CanvasGrid() {
   const far = useFarView();
   return <Background variant={BackgroundVariant.Dots} gap={far ? GRID * 4 : GRID} size={far ? 4 : 1.2} color="#b9b2a3" />;
 }
-
 
 interface Props {
   nodes: FlowNode[];
@@ -90,59 +83,8 @@ export function DiagramCanvas({ nodes, edges, onNodesChange, onEdgesChange, read
   // in its far form rather than typeset first and redrawn.
   const [opening] = useState(() => openingViewport(nodes, { width: window.innerWidth, height: window.innerHeight }));
 
-  // A large diagram keeps live blocks only where the user can see them: zoomed out it is drawn as one
-  // overview picture; nearer, blocks not measured yet mount only inside the region around the view.
-  const large = nodes.length > LARGE_DIAGRAM_BLOCKS;
-  // Until the pan-zoom starts, the store still holds zoom 1: the first render goes by the opening view instead.
-  const started = useStore(panZoomStarted);
-  const zoomedFar = useZoomBelow(FAR_ZOOM);
-  const zoomedOut = useZoomBelow(OVERVIEW_ZOOM);
-  const far = started ? zoomedFar : opening.zoom < FAR_ZOOM;
-  const overviewOnly = large && (started ? zoomedOut : opening.zoom < OVERVIEW_ZOOM);
-  const region = useStore(
-    useCallback(
-      (s: ReactFlowState) => {
-        if (!large || overviewOnly) return NOWHERE;
-        const view = s.width ? s : { width: window.innerWidth, height: window.innerHeight };
-        return revealRegion(started ? s.transform : [opening.x, opening.y, opening.zoom], view);
-      },
-      [large, overviewOnly, started, opening],
-    ),
-    sameBox,
-  );
-  const live = useMemo(() => {
-    if (!large) return { nodes, edges };
-    if (overviewOnly) return { nodes: nodes.map(hide), edges: NO_EDGES };
-    const shown = new Set<string>();
-    const liveNodes = nodes.map((n) => {
-      if (n.measured?.width || inBox(n.position, region)) return shown.add(n.id), n;
-      return hide(n);
-    });
-    return { nodes: liveNodes, edges: edges.filter((e) => shown.has(e.source) && shown.has(e.target)) };
-  }, [nodes, edges, large, overviewOnly, region]);
-
-  // The library fits only blocks it has mounted and measured; a large diagram is fitted from its boxes once the pane has a size.
-  const ready = useStore(paneReady);
-  useEffect(() => {
-    if (large && ready) fitBox(boundsOf(nodes.map(nodeBox)), WHOLE_DIAGRAM);
-    // Once, when the pane first has a size; later fits are the user's.
-  }, [ready]);
-
-  // Picks read the latest selection through a ref, so the overview's blocks keep one handler and stay memoised.
-  const current = useRef({ nodes, edges });
-  useLayoutEffect(() => {
-    current.current = { nodes, edges };
-  });
-  const onPick = useCallback(
-    ({ id, additive }: OverviewPick) => {
-      const { nodes: all, edges: wires } = current.current;
-      const was = all.find((n) => n.id === id)?.selected ?? false;
-      const others = additive ? [] : all.filter((n) => n.selected && n.id !== id).map((n) => ({ type: "select" as const, id: n.id, selected: false }));
-      onNodesChange([...others, { type: "select", id, selected: additive ? !was : true }]);
-      if (!additive) onEdgesChange(wires.filter((e) => e.selected).map((e) => ({ type: "select" as const, id: e.id, selected: false })));
-    },
-    [onNodesChange, onEdgesChange],
-  );
+  const { live, far, large, overviewOnly } = useLiveCanvas(nodes, edges, opening);
+  const onPick = useOverviewPick(nodes, edges, onNodesChange, onEdgesChange);
   const onOpen = useCallback((box: Box) => fitBox(box, { padding: 2, maxZoom: 1, duration: 250 }), [fitBox]);
 
   const overview = useOverviewMap(nodes.length);
