@@ -25,20 +25,24 @@ const PAGES = [
   },
 ];
 
-/** Preload tags for a page chunk and the chunks it imports, the entry's own excluded (it is already in the page). */
+/** A chunk's key and every chunk it imports, recursively. */
+function withImports(manifest: Manifest, key: string, into = new Set<string>()): Set<string> {
+  if (!manifest[key] || into.has(key)) return into;
+  into.add(key);
+  for (const dep of manifest[key].imports ?? []) withImports(manifest, dep, into);
+  return into;
+}
+
+/** Preload tags for a page chunk and the chunks it imports, less those the entry script already brings. */
 function preloadTags(manifest: Manifest, source: string): string[] {
-  const seen = new Set<string>();
-  const tags: string[] = [];
-  const visit = (key: string) => {
-    const chunk = manifest[key];
-    if (!chunk || chunk.isEntry || seen.has(key)) return;
-    seen.add(key);
-    tags.push(`<link rel="modulepreload" crossorigin href="/${chunk.file}">`);
-    for (const css of chunk.css ?? []) tags.push(`<link rel="stylesheet" crossorigin href="/${css}">`);
-    for (const dep of chunk.imports ?? []) visit(dep);
-  };
-  visit(source);
-  return tags;
+  const inPage = new Set<string>();
+  for (const [key, chunk] of Object.entries(manifest)) if (chunk.isEntry) withImports(manifest, key, inPage);
+  return [...withImports(manifest, source)]
+    .filter((key) => !inPage.has(key))
+    .flatMap((key) => [
+      `<link rel="modulepreload" crossorigin href="/${manifest[key].file}">`,
+      ...(manifest[key].css ?? []).map((css) => `<link rel="stylesheet" crossorigin href="/${css}">`),
+    ]);
 }
 
 /**

@@ -15,8 +15,9 @@ beforeAll(async () => {
   mkdirSync(join(dir, ".vite"));
   const manifest = {
     "index.html": { file: "assets/index-1.js", isEntry: true, imports: ["_shared-3.js"] },
-    "src/app/routes/DiagramRoute.tsx": { file: "assets/DiagramRoute-2.js", isDynamicEntry: true, imports: ["index.html", "_shared-3.js"], css: ["assets/DiagramRoute-2.css"] },
+    "src/app/routes/DiagramRoute.tsx": { file: "assets/DiagramRoute-2.js", isDynamicEntry: true, imports: ["index.html", "_shared-3.js", "_editor-4.js"], css: ["assets/DiagramRoute-2.css"] },
     "_shared-3.js": { file: "assets/shared-3.js" },
+    "_editor-4.js": { file: "assets/editor-4.js", imports: ["_shared-3.js"] },
   };
   writeFileSync(join(dir, ".vite", "manifest.json"), JSON.stringify(manifest));
   writeFileSync(join(dir, "assets", "app.js"), "console.log(1)");
@@ -39,12 +40,13 @@ it("announces the editor's chunks and the diagram's data in the HTML of a diagra
   const diagram = await request(t.app).get(`/diagrams/${id}`).set("Accept", "text/html");
   expect(diagram.status).toBe(200);
   expect(diagram.text).toContain('<link rel="modulepreload" crossorigin href="/assets/DiagramRoute-2.js">');
-  expect(diagram.text).toContain('<link rel="modulepreload" crossorigin href="/assets/shared-3.js">');
+  expect(diagram.text).toContain('<link rel="modulepreload" crossorigin href="/assets/editor-4.js">');
   expect(diagram.text).toContain('<link rel="stylesheet" crossorigin href="/assets/DiagramRoute-2.css">');
   expect(diagram.text).toContain(`<link rel="preload" as="fetch" crossorigin="anonymous" href="/api/diagrams/${id}">`);
   expect(diagram.text).toContain('<link rel="preload" as="fetch" crossorigin="anonymous" href="/api/auth/me">');
-  // The entry is already the page's own script.
+  // The entry, and what it imports, are already the page's own scripts.
   expect(diagram.text).not.toContain("index-1.js");
+  expect(diagram.text).not.toContain("shared-3.js");
   // An id that is not one is never written into the page; the code is still announced.
   const odd = await request(t.app).get('/diagrams/"><script>x').set("Accept", "text/html");
   expect(odd.text).not.toContain("<script>x");
