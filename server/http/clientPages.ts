@@ -47,7 +47,7 @@ function preloadTags(manifest: Manifest, source: string): string[] {
 
 /**
  * The client's index.html for a path: for a page listed above, with its code chunks (from the build's
- * manifest) and its first data request announced in the head, so the browser fetches them while the entry
+ * manifest) and its first data requests announced in the head, so the browser fetches them while the entry
  * script still runs instead of only when the router and the page ask. Other paths get the plain page.
  */
 export function clientPages(clientDir: string): (path: string) => string {
