@@ -1,5 +1,5 @@
 import { expect, test, type Page } from "@playwright/test";
-import { createTeam, signUp, uniqueEmail } from "./helpers";
+import { createTeam, seedDiagram, signUp, uniqueEmail } from "./helpers";
 
 /** Unity negative feedback around K/(s(s+2)), K = 4: r → e(+, −) → G → y, with G fed back into e's minus port. */
 const LOOP = {
@@ -28,29 +28,6 @@ const overshootFor = (K: number) => {
   return 100 * Math.exp((-zeta * Math.PI) / Math.sqrt(1 - zeta * zeta));
 };
 
-/** Creates the diagram through the API (as a signed-in editor) and returns its editor path. */
-async function createLoop(page: Page, teamId: string): Promise<string> {
-  const id = await page.evaluate(
-    async ({ teamId, document }) => {
-      const made = await fetch(`/api/teams/${teamId}/diagrams`, {
-        method: "POST",
-        headers: { "content-type": "application/json" },
-        body: JSON.stringify({ title: document.title }),
-      });
-      const { diagram } = (await made.json()) as { diagram: { id: string } };
-      const saved = await fetch(`/api/diagrams/${diagram.id}/versions`, {
-        method: "POST",
-        headers: { "content-type": "application/json" },
-        body: JSON.stringify({ baseVersion: 0, message: "Seeded by the analysis test", document }),
-      });
-      if (saved.status !== 201) throw new Error(`saving the version gave ${saved.status}`);
-      return diagram.id;
-    },
-    { teamId, document: LOOP },
-  );
-  return `/diagrams/${id}`;
-}
-
 const percentIn = async (page: Page, row: string) => {
   const text = (await page.getByRole("row", { name: new RegExp(`^${row}`) }).getByRole("cell").first().textContent()) ?? "";
   return Number(text.replace("\u2212", "-").replace(/[^\d.-]/g, ""));
@@ -61,7 +38,7 @@ test("analyses the loop: verdict, Routh array, overshoot, a live K slider and a 
   await page.setViewportSize({ width: 1400, height: 1000 });
   await signUp(page, "Ana Lyst", uniqueEmail("analyst"));
   const teamId = await createTeam(page, `Valve loop ${Date.now()}`);
-  await page.goto(await createLoop(page, teamId));
+  await page.goto(`/diagrams/${await seedDiagram(page, teamId, LOOP, "Seeded by the analysis test")}`);
   await expect(page.getByRole("application", { name: "Diagram canvas" })).toBeVisible({ timeout: 60_000 });
 
   const panel = page.getByRole("region", { name: "Analysis", exact: true });

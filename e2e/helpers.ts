@@ -23,3 +23,16 @@ export async function createTeam(page: Page, name: string) {
   await expect(page.getByRole("heading", { level: 1, name })).toBeVisible();
   return page.url().split("/teams/")[1]!.split(/[/?#]/)[0]!;
 }
+
+/** Creates a diagram in the team through the API with the page's session, its version 1 the given document; returns its id. */
+export async function seedDiagram(page: Page, teamId: string, document: { title: string }, message: string): Promise<string> {
+  const origin = new URL(page.url()).origin;
+  const post = async (path: string, data: unknown) => {
+    const res = await page.request.post(path, { data, headers: { Origin: origin } });
+    expect(res.ok(), `POST ${path}: ${await res.text()}`).toBe(true);
+    return res.json();
+  };
+  const { diagram } = await post(`/api/teams/${teamId}/diagrams`, { title: document.title });
+  await post(`/api/diagrams/${diagram.id}/versions`, { baseVersion: 0, message, document });
+  return diagram.id;
+}

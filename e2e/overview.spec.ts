@@ -1,5 +1,5 @@
-import { expect, test, type Page } from "@playwright/test";
-import { createTeam, signUp, uniqueEmail } from "./helpers";
+import { expect, test } from "@playwright/test";
+import { createTeam, seedDiagram, signUp, uniqueEmail } from "./helpers";
 
 const BLOCKS = 200;
 const COLUMNS = 15;
@@ -13,25 +13,12 @@ function longChain() {
   return { format: "loopwright-diagram", version: 1, title: "Long chain", parameters: {}, blocks, wires, layout };
 }
 
-/** Creates a diagram in the team through the API with the page's session, its first version the long chain. */
-async function seedLongChain(page: Page, teamId: string): Promise<string> {
-  const origin = new URL(page.url()).origin;
-  const post = async (path: string, data: unknown) => {
-    const res = await page.request.post(path, { data, headers: { Origin: origin } });
-    expect(res.ok(), `POST ${path}: ${await res.text()}`).toBe(true);
-    return res.json();
-  };
-  const { diagram } = await post(`/api/teams/${teamId}/diagrams`, { title: "Long chain" });
-  await post(`/api/diagrams/${diagram.id}/versions`, { baseVersion: 0, message: "Seeded", document: longChain() });
-  return diagram.id;
-}
-
 test("a large diagram opens as an overview: a block is picked there, and zooming in brings back live blocks", async ({ page }) => {
   test.setTimeout(120_000);
   await page.setViewportSize({ width: 1400, height: 1000 });
   await signUp(page, "Olga Overview", uniqueEmail("overview"));
   const teamId = await createTeam(page, `Long lines ${Date.now()}`);
-  const id = await seedLongChain(page, teamId);
+  const id = await seedDiagram(page, teamId, longChain(), "Seeded");
   await page.goto(`/diagrams/${id}`);
 
   // Fitted far out, the whole chain is one picture whose blocks are buttons, with no live blocks mounted.

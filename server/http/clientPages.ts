@@ -1,5 +1,6 @@
 import { existsSync, readFileSync } from "node:fs";
 import { join } from "node:path";
+import { isUuid } from "@server/http/ids";
 
 /** One chunk of the client build, as Vite's manifest lists it. */
 interface ManifestChunk {
@@ -10,8 +11,6 @@ interface ManifestChunk {
 }
 type Manifest = Record<string, ManifestChunk>;
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
-
 /**
  * Pages opened by link whose code, and data, are announced in the HTML. The path mirrors the client's route
  * table (src/lib/paths.ts), which the server cannot import; the data URLs are the requests the page waits
@@ -21,7 +20,7 @@ const PAGES = [
   {
     path: /^\/diagrams\/([^/]+)\/?$/,
     source: "src/app/routes/DiagramRoute.tsx",
-    data: (id: string) => (UUID.test(id) ? ["/api/auth/me", `/api/diagrams/${id}`] : []),
+    data: (id: string) => (isUuid(id) ? ["/api/auth/me", `/api/diagrams/${id}`] : []),
   },
 ];
 

@@ -18,7 +18,7 @@ import { ProblemList } from "@/features/editor/components/panels/ProblemList";
 import { PropertiesPanel } from "@/features/editor/components/panels/PropertiesPanel";
 import { ResultsPanel } from "@/features/editor/components/panels/ResultsPanel";
 import { StepThrough } from "@/features/editor/components/panels/StepThrough";
-import { boundsOf, documentBoxes } from "@/features/editor/geometry/blockBox";
+import { boundsOf, nodeBox } from "@/features/editor/geometry/blockBox";
 import { useCanvasCommands } from "@/features/editor/hooks/useCanvasCommands";
 import { useDraft } from "@/features/editor/hooks/useDraft";
 import { useEditorHistory } from "@/features/editor/hooks/useEditorHistory";
@@ -124,6 +124,7 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
     selection,
     setSelection,
     measured: canvasState.measured,
+    nodes: canvasState.nodes,
     canvasBox,
     pointer,
     undo: history.undo,
@@ -139,7 +140,7 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
     const sel: Selection = p.blockId ? { blocks: [p.blockId], wires: [] } : wire ? { blocks: [], wires: [wire.id] } : { blocks: [], wires: [] };
     setSelection(sel);
     const around = p.blockId ? [p.blockId] : wire ? [wire.from, wire.to] : [];
-    if (around.length) fitBox(boundsOf(documentBoxes(doc, canvasState.measured, around)), { duration: 250, maxZoom: 1.3, padding: 0.6 });
+    if (around.length) fitBox(boundsOf(canvasState.nodes.filter((n) => around.includes(n.id)).map(nodeBox)), { duration: 250, maxZoom: 1.3, padding: 0.6 });
     if (p.field === "expr") window.setTimeout(() => firstField.current?.focus(), 50);
   };
 

@@ -23,11 +23,6 @@ interface Props {
 }
 
 const MARGIN = 48;
-/**
- * Below this zoom a large diagram is drawn as the overview. Above it the view holds at most ~150 blocks of a
- * dense diagram (1600 × 1000 px of screen), which is what mounting live blocks costs when the user zooms in.
- */
-export const OVERVIEW_ZOOM = 0.6;
 /** Zoom from which a 13-px id is at least 4 px tall on screen. */
 const IDS_FROM_ZOOM = 0.3;
 const legibleIds = (s: ReactFlowState) => s.transform[2] >= IDS_FROM_ZOOM;

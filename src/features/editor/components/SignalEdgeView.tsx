@@ -18,7 +18,8 @@ const PAPER = "#f5f3ee";
 export const wireLook = (highlighted: boolean, selected: boolean, problem: Severity | null) =>
   highlighted ? LOOK.step : selected ? LOOK.selected : problem === "error" ? LOOK.fault : LOOK.plain;
 
-const boxOf = (n: InternalNode | undefined): Box => ({
+/** Where the library has placed and measured a block. */
+const internalBox = (n: InternalNode | undefined): Box => ({
   x: n?.internals.positionAbsolute.x ?? 0,
   y: n?.internals.positionAbsolute.y ?? 0,
   width: n?.measured.width ?? 0,
@@ -26,7 +27,7 @@ const boxOf = (n: InternalNode | undefined): Box => ({
 });
 
 /** A block's box as plain numbers: the wire redraws when a box moves or resizes, not when the store renews the node object. */
-const useBox = (id: string) => useStore((s: ReactFlowState) => boxOf(s.nodeLookup.get(id)), sameBox);
+const useBox = (id: string) => useStore((s: ReactFlowState) => internalBox(s.nodeLookup.get(id)), sameBox);
 
 /**
  * Where the analysis breaks the loop: the wire cut by a gap between two bars across it, and a small tag,

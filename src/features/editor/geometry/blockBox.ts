@@ -1,6 +1,6 @@
 import type { Block } from "@shared/diagram/schema";
-import type { EditorDoc, Point } from "@/features/editor/commands/types";
-import { fallbackPosition, type FlowNode } from "@/features/editor/lib/flowModel";
+import type { Point } from "@/features/editor/commands/types";
+import type { FlowNode } from "@/features/editor/lib/flowModel";
 import { sumDiameter, sumPortPlaces, type Side } from "@/features/editor/geometry/sumPorts";
 import type { Size } from "@/features/editor/geometry/viewport";
 import type { Box } from "@/features/editor/geometry/wireRoute";
@@ -60,12 +60,6 @@ export function boundsOf(boxes: Iterable<Box>): Box | null {
     y1 = Math.max(y1, b.y + b.height);
   }
   return x0 === Infinity ? null : { x: x0, y: y0, width: x1 - x0, height: y1 - y0 };
-}
-
-/** Each block's box in a document (stored place, else the fallback grid), or only those of `ids`. */
-export function documentBoxes(doc: EditorDoc, measured: ReadonlyMap<string, Size>, ids?: readonly string[]): Box[] {
-  const wanted = ids ? new Set(ids) : null;
-  return doc.blocks.flatMap((b, i) => (wanted && !wanted.has(b.id) ? [] : [boxOf(b, doc.layout?.[b.id] ?? fallbackPosition(i), measured.get(b.id))]));
 }
 
 /** A canvas node's box: where it is drawn now (mid-drag included) and its measured or estimated size. */

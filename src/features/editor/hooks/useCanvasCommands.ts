@@ -7,11 +7,11 @@ import { copySelection, deleteSelection, duplicate, paste, PASTE_OFFSET, selectA
 import { connect, type ConnectArgs } from "@/features/editor/commands/wires";
 import type { EditorDoc, Point, Selection } from "@/features/editor/commands/types";
 import type { Act } from "@/features/editor/components/EditorContext";
-import { boundsOf, documentBoxes } from "@/features/editor/geometry/blockBox";
+import { boundsOf, nodeBox } from "@/features/editor/geometry/blockBox";
 import { useFitBox, WHOLE_DIAGRAM } from "@/features/editor/hooks/useFitBox";
 import { useShortcuts } from "@/features/editor/hooks/useShortcuts";
 import { autoLayout } from "@/features/editor/lib/autoLayout";
-import { fallbackPosition, TYPE_NAME } from "@/features/editor/lib/flowModel";
+import { fallbackPosition, TYPE_NAME, type FlowNode } from "@/features/editor/lib/flowModel";
 import { errorMessage } from "@/lib/apiClient";
 
 interface Args {
@@ -21,6 +21,8 @@ interface Args {
   selection: Selection;
   setSelection: (s: Selection) => void;
   measured: ReadonlyMap<string, { width: number; height: number }>;
+  /** The canvas's blocks as drawn now, for fitting the view. */
+  nodes: FlowNode[];
   canvasBox: RefObject<HTMLDivElement | null>;
   pointer: RefObject<Point | null>;
   undo: () => void;
@@ -30,7 +32,6 @@ interface Args {
   focusProperties: () => void;
   steps: { count: number; at: number | null; go: (i: number | null) => void };
 }
-
 
 /** The editor's verbs, shared by the toolbar, the rail, the canvas and the keyboard. */
 export function useCanvasCommands(a: Args) {
@@ -86,7 +87,7 @@ export function useCanvasCommands(a: Args) {
     clipboard.current = { fragment: copySelection(doc, selection), pastes: 0 };
     return true;
   };
-  const fit = () => fitBox(boundsOf(documentBoxes(doc, a.measured)), { ...WHOLE_DIAGRAM, duration: 200 });
+  const fit = () => fitBox(boundsOf(a.nodes.map(nodeBox)), { ...WHOLE_DIAGRAM, duration: 200 });
 
   const layout = async () => {
     if (doc.blocks.length === 0) return;

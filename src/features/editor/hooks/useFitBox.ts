@@ -1,3 +1,4 @@
+import { useCallback } from "react";
 import { getViewportForBounds, useReactFlow, useStoreApi } from "@xyflow/react";
 import type { Box } from "@/features/editor/geometry/wireRoute";
 
@@ -18,9 +19,13 @@ export const WHOLE_DIAGRAM: FitOptions = { padding: 0.25, maxZoom: 1.2 };
 export function useFitBox(): (box: Box | null, options: FitOptions) => void {
   const store = useStoreApi();
   const flow = useReactFlow();
-  return (box, { padding, maxZoom, duration }) => {
-    const { width, height, minZoom } = store.getState();
-    if (!box || !width || !height) return;
-    void flow.setViewport(getViewportForBounds(box, width, height, minZoom, maxZoom, padding), duration ? { duration } : undefined);
-  };
+  // Stable, so the overview's memoised blocks that hold it (double-click to zoom in) do not redraw with the canvas.
+  return useCallback(
+    (box, { padding, maxZoom, duration }) => {
+      const { width, height, minZoom } = store.getState();
+      if (!box || !width || !height) return;
+      void flow.setViewport(getViewportForBounds(box, width, height, minZoom, maxZoom, padding), duration ? { duration } : undefined);
+    },
+    [store, flow],
+  );
 }

@@ -1,13 +1,22 @@
 import { useCallback, useEffect, useMemo } from "react";
 import { useStore, type ReactFlowState, type Viewport } from "@xyflow/react";
 import { FAR_ZOOM, useZoomBelow } from "@/features/editor/components/nodes/farView";
-import { OVERVIEW_ZOOM } from "@/features/editor/components/OverviewLayer";
 import { boundsOf, nodeBox } from "@/features/editor/geometry/blockBox";
 import { inBox, revealRegion } from "@/features/editor/geometry/viewport";
 import { sameBox, type Box } from "@/features/editor/geometry/wireRoute";
 import { useFitBox, WHOLE_DIAGRAM } from "@/features/editor/hooks/useFitBox";
-import { LARGE_DIAGRAM_BLOCKS } from "@/features/editor/hooks/useOverviewMap";
 import type { FlowNode, SignalEdge } from "@/features/editor/lib/flowModel";
+
+/**
+ * Above this many blocks a diagram counts as large: the canvas mounts live blocks only near the view, and its
+ * overview map starts hidden (redrawing it costs pan frames).
+ */
+export const LARGE_DIAGRAM_BLOCKS = 150;
+/**
+ * Below this zoom a large diagram is drawn as the overview. Above it the view holds at most ~150 blocks of a
+ * dense diagram (1600 × 1000 px of screen), which is what mounting live blocks costs when the user zooms in.
+ */
+const OVERVIEW_ZOOM = 0.6;
 
 const NO_EDGES: SignalEdge[] = [];
 const NOWHERE: Box = { x: 0, y: 0, width: 0, height: 0 };

@@ -1,10 +1,6 @@
 import { useState } from "react";
+import { LARGE_DIAGRAM_BLOCKS } from "@/features/editor/hooks/useLiveCanvas";
 
-/**
- * Above this many blocks a diagram counts as large: its overview map starts hidden (redrawing it costs pan
- * frames) and the canvas mounts live blocks only near the view.
- */
-export const LARGE_DIAGRAM_BLOCKS = 150;
 const KEY = "loopwright:overview-map";
 
 function storedChoice(): boolean | null {

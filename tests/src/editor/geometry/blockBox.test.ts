@@ -1,8 +1,10 @@
 import { describe, expect, it } from "vitest";
 import type { Block } from "@shared/diagram/schema";
 import { emptyDocument } from "@/features/editor/commands/document";
-import { boundsOf, boxOf, documentBoxes, estimatedSize, inPoint, outPoint } from "@/features/editor/geometry/blockBox";
+import { boundsOf, boxOf, estimatedSize, inPoint, nodeBox, outPoint } from "@/features/editor/geometry/blockBox";
 import { sumDiameter } from "@/features/editor/geometry/sumPorts";
+import { buildNodes } from "@/features/editor/lib/flowModel";
+import { problemMarks } from "@/features/editor/lib/marks";
 
 const sum = (signs: ("+" | "-")[]): Block => ({ id: "e", type: "sum", signs });
 const box = { x: 100, y: 200, width: 48, height: 48 };
@@ -44,14 +46,17 @@ describe("boxes and their bounds", () => {
     expect(boxOf({ id: "i", type: "integrator" }, { x: 1, y: 2 }, { width: 70, height: 50 })).toEqual({ x: 1, y: 2, width: 70, height: 50 });
   });
 
-  it("take a document's stored places, or only the blocks asked for", () => {
+  it("take the canvas nodes' places from the document, and their measured sizes once known", () => {
     const doc = {
       ...emptyDocument(),
       blocks: [{ id: "i", type: "integrator" } as Block, { id: "p", type: "branch" } as Block],
       layout: { i: { x: 0, y: 0 }, p: { x: 300, y: 100 } },
     };
-    expect(boundsOf(documentBoxes(doc, new Map()))).toEqual({ x: 0, y: 0, width: 316, height: 116 });
-    expect(boundsOf(documentBoxes(doc, new Map([["p", { width: 20, height: 20 }]]), ["p"]))).toEqual({ x: 300, y: 100, width: 20, height: 20 });
+    const nodes = (measured: Map<string, { width: number; height: number }>) =>
+      buildNodes(doc, problemMarks([], null), { selection: { blocks: [], wires: [] }, dragging: new Map(), measured });
+    expect(boundsOf(nodes(new Map()).map(nodeBox))).toEqual({ x: 0, y: 0, width: 316, height: 116 });
+    const p = nodes(new Map([["p", { width: 20, height: 20 }]])).filter((n) => n.id === "p");
+    expect(boundsOf(p.map(nodeBox))).toEqual({ x: 300, y: 100, width: 20, height: 20 });
   });
 
   it("are null for no boxes", () => {
