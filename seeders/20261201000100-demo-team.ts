@@ -5,7 +5,7 @@ import { hashPassword } from "@server/auth/password";
 import { DEMO_PASSWORD, DEMO_TEAM, DEMO_USERS } from "@server/db/demoAccounts";
 import { demoDiagrams } from "@server/db/demoDiagrams";
 import type { CheckedResult } from "@shared/api/versions";
-import { reduceDocument } from "@shared/engine/reduceDocument";
+import { reduceDocument } from "@shared/reduce/reduceDiagram";
 
 /** The same check a save runs, so demo versions carry their result like every other version. */
 function checked(document: unknown): CheckedResult {

@@ -3,9 +3,9 @@ import { q, qAdd, qMul, type Q } from "@shared/algebra/rational";
 import { polyRootsExact } from "@shared/algebra/roots";
 import { analyzeAt } from "@shared/analysis/analyze";
 import { rootsOf } from "@shared/analysis/poles";
-import { prepareAnalysis } from "@shared/analysis/prepare";
 import { parameterRange, rootLocus, sweepValues } from "@shared/analysis/sweep";
 import { upFrom } from "@shared/analysis/upoly";
+import { prepared as prepareDoc } from "../../tests/support/reduced";
 
 /**
  * Analysis benchmark: the time of one slider update (every result recomputed at new parameter values) for a
@@ -57,10 +57,8 @@ const time = (f: () => void): Timing => {
 const pct = (xs: number[], q: number) => [...xs].sort((a, b) => a - b)[Math.min(xs.length - 1, Math.floor(xs.length * q))];
 const fmt = (x: number) => x.toFixed(1).padStart(7);
 
-const prepared = prepareAnalysis(doc);
-if (!prepared.ok) throw new Error(prepared.problems.map((p) => p.message).join("; "));
-const p = prepared.prepared;
-const prep = time(() => prepareAnalysis(doc));
+const p = prepareDoc(doc);
+const prep = time(() => prepareDoc(doc)); // parse, reduce and prepare: what a fresh document costs
 const first = analyzeAt(p);
 console.log(`closed-loop denominator degree ${first.poles.reduce((n, r) => n + r.multiplicity, 0)}; at nominal values: ${first.stability.verdict}, ` +
   `phase margin ${first.loop?.margins.phaseMarginDeg?.toFixed(2)}°, overshoot ${first.step.overshootPercent?.toFixed(2)} %`);

@@ -1,7 +1,7 @@
 import { spawn } from "node:child_process";
 import { cpus } from "node:os";
 import { fileURLToPath } from "node:url";
-import { reduceDocument } from "@shared/engine/reduceDocument";
+import { reduceDocument } from "@shared/reduce/reduceDiagram";
 import { benchDiagram, type BenchFamily } from "@server/bench/diagrams";
 // The sympy reference lives with the tests (tests/reference); resolved through the tsconfig baseUrl.
 import { sympyBench, SympyTimeout, type SympyMethod } from "tests/support/sympy";

@@ -1,5 +1,5 @@
 import type { Problem } from "@shared/diagram/problems";
-import { analyzeDocument } from "@shared/analysis/analyzeDocument";
+import { analyzeDocument } from "@shared/analysis/analyzeDiagram";
 import type { AnalysisResult } from "@shared/analysis/schema";
 import { parseReduceArgs } from "@server/cli/args";
 import { CliExit, readJsonFile, runCommand, usageError as cliUsageError } from "@server/cli/command";
@@ -98,7 +98,7 @@ function run(argv: readonly string[]): string {
     const errors = out.problems.filter((p) => p.severity === "error").length;
     throw new CliExit(1, [`analyze: ${file}: ${errors} problem${errors === 1 ? "" : "s"} prevent analysis`, ...out.problems.map(formatProblem)]);
   }
-  return json ? `${JSON.stringify(out.result, null, 2)}\n` : report(out.result, out.prepared.doc.title);
+  return json ? `${JSON.stringify(out.result, null, 2)}\n` : report(out.result, out.doc.title);
 }
 
 await runCommand("analyze", run);

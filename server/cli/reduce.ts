@@ -29,7 +29,7 @@ async function run(argv: readonly string[]): Promise<string> {
 
   const raw = readJsonFile("reduce", USAGE, file);
   // Loaded only now: --help and command-line mistakes answer without loading the algebra.
-  const { reduceDocument } = await import("@shared/engine/reduceDocument");
+  const { reduceDocument } = await import("@shared/reduce/reduceDiagram");
   const reduced = reduceDocument(raw, { input, output });
   if (!reduced.ok) {
     const pairProblems = reduced.problems.filter((p) => p.code === "unknown-pair-id");

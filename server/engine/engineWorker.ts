@@ -1,5 +1,5 @@
 import { parentPort } from "node:worker_threads";
-import { reduceDocument } from "@shared/engine/reduceDocument";
+import { reduceDocument } from "@shared/reduce/reduceDiagram";
 import type { CheckedResult } from "@shared/api/versions";
 
 export type EngineJob = { id: number; document: unknown; timeLimitMs: number };

@@ -1,13 +1,14 @@
 // One analysis of the chosen pair at given parameter values (the nominal ones by default): what the results
 // panel shows and the CLI prints. Pure and synchronous, so it runs in the Web Worker as is.
-import { polyParams } from "@shared/algebra/poly";
-import { ratDenominator, ratNumerator } from "@shared/algebra/ratfn";
-import { qDiv, qToNumber, qToString, qZero } from "@shared/algebra/rational";
+import { polyConst, polyParams } from "@shared/algebra/poly";
+import { polyToText } from "@shared/algebra/polytext";
+import { ratDenominator, ratNumerator, ratReduceTracked } from "@shared/algebra/ratfn";
+import { qDiv, qOne, qToNumber, qToString, qZero } from "@shared/algebra/rational";
 import { exactFactors } from "@shared/analysis/factors";
 import { bode, frequencyRange, type BodeData } from "@shared/analysis/frequency";
 import { analyzeLoop, fractionText, zpkOf, type LoopAnalysis } from "@shared/analysis/loopAnalysis";
 import { bandwidth } from "@shared/analysis/margins";
-import { exactValues, parseTransfer, polySubstitute, transferAt } from "@shared/analysis/nominal";
+import { exactValues, polySubstitute, transferAt } from "@shared/analysis/nominal";
 import { dominantPoles, rootsOf, type RootInfo } from "@shared/analysis/poles";
 import type { PreparedAnalysis } from "@shared/analysis/prepare";
 import { routhArray, type RouthArray } from "@shared/analysis/routh";
@@ -60,6 +61,8 @@ export interface Analysis {
   steadyState: SteadyState;
   notes: string[];
 }
+
+const ONE = polyConst(qOne);
 
 /** Largest degree for which the Routh first column is shown with several symbolic parameters. */
 const CONDITIONS_DEGREE = 8;
@@ -137,8 +140,8 @@ function hiddenModes(p: PreparedAnalysis, values: Record<string, number>, atValu
     return { factor, roots: rootsOf(u).flatMap((r) => Array.from({ length: r.multiplicity }, (): [number, number] => [r.re, r.im])), unstable: c.rhp + c.axis > 0, source };
   };
   const fromReduction = p.cancelled.map((c) => {
-    const poly = ratNumerator(parseTransfer(c.factor, "1", p.parameters));
-    return mode(upFromPoly(polySubstitute(poly, exact)), c.factor, "reduction");
+    const poly = ratNumerator(ratReduceTracked(c.factor, ONE).value);
+    return mode(upFromPoly(polySubstitute(poly, exact)), polyToText(c.factor), "reduction");
   });
   return upDeg(atValues) >= 1 ? [...fromReduction, mode(atValues, upText(atValues), "values")] : fromReduction;
 }

@@ -1,12 +1,16 @@
-// The loop gain at a break point, L = −w/u, through the reduction engine itself: the wire is cut, u is
-// injected at its destination port (through that port's sign), w is read at its source, all else closed.
-import { ratNeg, type RatFn } from "@shared/algebra/ratfn";
+// The loop gain at a break point, L = −w/u, from the reducer's own signal-flow graph: the wire's edge is cut,
+// u is injected at its destination (through that edge's gain: the port's sign or the block's transfer), w is
+// read at its source, all else closed. No document is copied and nothing printed is read back.
+import { ratNeg, ratField, type RatFn } from "@shared/algebra/ratfn";
 import { outgoingWires, blocksById, reachable } from "@shared/diagram/graph";
 import type { Problem } from "@shared/diagram/problems";
 import { wireLabel, type DiagramDocument, type Wire } from "@shared/diagram/schema";
-import { reduceDocument } from "@shared/engine/reduceDocument";
+import { createBudget } from "@shared/reduce/budget";
+import { SignalFlowGraph } from "@shared/reduce/graph";
+import { weighRat } from "@shared/reduce/ratView";
+import { reducePairs } from "@shared/reduce/reduce";
+import { reductionProblem, type ExactReduction } from "@shared/reduce/reduceDiagram";
 import { AnalysisError } from "@shared/analysis/errors";
-import { parseTransfer } from "@shared/analysis/nominal";
 
 export interface BreakPoint {
   /** 0-based index in `wires`. */
@@ -52,37 +56,50 @@ export function defaultBreak(doc: DiagramDocument, input: string): BreakPoint | 
   return null;
 }
 
-const freshId = (taken: Set<string>, base: string): string => {
+const freshId = (taken: ReadonlyMap<string, unknown>, base: string): string => {
   let id = base;
   for (let i = 2; taken.has(id); i++) id = `${base}-${i}`;
   return id;
 };
 
 /**
- * The document with the wire cut: a new input block feeds the wire's destination port and a new output block
- * reads its source. Example: cutAt(doc, bp) → { doc, input: "break-u", output: "break-w" }.
+ * The graph with the break wire's edge cut: a new source node u feeds the wire's destination through the
+ * cut edge's gain, and a new node w reads the wire's source. A wire with no edge (into an input block) cuts nothing.
+ * Example: cutGraph(graph, bp) → { graph, input: "break-u", output: "break-w" }.
  */
-export function cutAt(doc: DiagramDocument, bp: BreakPoint): { doc: DiagramDocument; input: string; output: string } {
-  const taken = new Set(doc.blocks.map((b) => b.id));
-  const input = freshId(taken, "break-u");
-  const output = freshId(taken, "break-w");
-  const wires = doc.wires.filter((_, i) => i !== bp.index);
-  const into: Wire = { id: `${input}-wire`, from: input, to: bp.wire.to, ...(bp.wire.port !== undefined ? { port: bp.wire.port } : {}) };
-  const outOf: Wire = { id: `${output}-wire`, from: bp.wire.from, to: output };
-  return {
-    doc: { ...doc, blocks: [...doc.blocks, { id: input, type: "input" }, { id: output, type: "output" }], wires: [...wires, into, outOf] },
-    input,
-    output,
-  };
+export function cutGraph(graph: SignalFlowGraph<RatFn>, bp: BreakPoint): { graph: SignalFlowGraph<RatFn>; input: string; output: string } {
+  const label = wireLabel(bp.wire, bp.index);
+  const cut = new SignalFlowGraph<RatFn>();
+  const input = freshId(graph.nodes, "break-u");
+  const output = freshId(graph.nodes, "break-w");
+  let last = -1;
+  for (const n of graph.nodes.values()) {
+    cut.addNode(n.id, n.order, n.own);
+    last = Math.max(last, n.order);
+  }
+  cut.addNode(input, last + 1, null);
+  cut.addNode(output, last + 2, null);
+  for (const e of graph.edges()) {
+    const { seq: _seq, ...draft } = e;
+    if (!e.wires.includes(label)) cut.addEdge(draft);
+    else cut.addEdge({ ...draft, from: input, wires: [`${input}-wire`] });
+  }
+  cut.addEdge({ from: bp.wire.from, to: output, gain: ratField.one, label: null, sign: 1, blocks: [], wires: [`${output}-wire`] });
+  cut.touched.clear();
+  return { graph: cut, input, output };
 }
 
 /**
  * L = −w/u at the break, symbolic in the parameters. Example: unity negative feedback around G gives L = G.
  */
-export function loopGain(doc: DiagramDocument, bp: BreakPoint): { ok: true; L: RatFn } | { ok: false; problems: Problem[] } {
-  const cut = cutAt(doc, bp);
-  const reduced = reduceDocument(cut.doc, { input: cut.input, output: cut.output });
-  if (!reduced.ok) return { ok: false, problems: reduced.problems };
-  const t = reduced.result.transfers[0];
-  return { ok: true, L: ratNeg(parseTransfer(t.numerator, t.denominator, Object.keys(doc.parameters ?? {}))) };
+export function loopGain(reduction: ExactReduction, bp: BreakPoint): { ok: true; L: RatFn } | { ok: false; problems: Problem[] } {
+  const cut = cutGraph(reduction.graph, bp);
+  try {
+    const { transfers } = reducePairs(cut.graph, ratField, [[cut.input, cut.output]], createBudget(), { trace: false, weigh: weighRat });
+    return { ok: true, L: ratNeg(transfers[0].gain) };
+  } catch (err) {
+    const problem = reductionProblem(err);
+    if (!problem) throw err;
+    return { ok: false, problems: [problem] };
+  }
 }

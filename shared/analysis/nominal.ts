@@ -1,30 +1,11 @@
-// From the engine's symbolic transfer (text with parameters) to exact numeric polynomials at given
-// parameter values — the one place parameters are substituted, so sweeps and the CLI agree.
+// From the reducer's exact symbolic transfer to exact numeric polynomials at given parameter values:
+// the one place parameters are substituted, so sweeps and the CLI agree.
 import { qFromString, q, qAdd, qMul, qDiv, qOne, qZero, type Q } from "@shared/algebra/rational";
-import { ratDiv, ratFromExpr, type RatFn } from "@shared/algebra/ratfn";
+import type { RatFn } from "@shared/algebra/ratfn";
 import { S, type ZPoly } from "@shared/algebra/zpoly";
 import { polyAdd, polyConst, polyMul, polyParam, polyS, type Poly } from "@shared/algebra/poly";
-import { DEGREE_LIMIT } from "@shared/algebra/errors";
-import { parseExpression } from "@shared/expr/parse";
 import { AnalysisError } from "@shared/analysis/errors";
 import { upDeg, upDivMod, upFrom, upGcd, upLead, upScale, type UPoly } from "@shared/analysis/upoly";
-
-const ENGINE_TEXT_LIMITS = { exprLength: Number.POSITIVE_INFINITY, exponent: DEGREE_LIMIT };
-
-/**
- * The exact rational function num/den written in the expression syntax (as the engine prints transfers).
- * Throws on text that does not parse (a bug upstream, since the engine wrote it).
- * Example: parseTransfer("K*s + 2*K", "s^2 + s", ["K"]) is K(s + 2)/(s(s + 1)).
- */
-export function parseTransfer(numerator: string, denominator: string, parameters: readonly string[]): RatFn {
-  const read = (text: string) => {
-    // The engine wrote this text: read it back without the limits meant for typed block expressions.
-    const parsed = parseExpression(text, { allowS: true, parameters, limits: ENGINE_TEXT_LIMITS });
-    if (!parsed.ok) throw new Error(`internal: cannot read "${text.slice(0, 200)}": ${parsed.message}`);
-    return ratFromExpr(parsed.ast);
-  };
-  return ratDiv(read(numerator), read(denominator));
-}
 
 /** The exact rational a finite number's shortest decimal text denotes. Example: exactValue(0.1) is 1/10. */
 export function exactValue(x: number, name = "value"): Q {

@@ -1,15 +1,16 @@
-// Everything symbolic an analysis needs, done once per document: the chosen pair's transfer, the
-// characteristic polynomial, the engine's hidden modes and the loop gain at the break. Sweeps then only
-// substitute values (analyzeAt), which is what keeps a slider update fast.
-import { ratDenominator, type RatFn } from "@shared/algebra/ratfn";
-import type { Poly } from "@shared/algebra/poly";
+// Everything symbolic an analysis needs, done once per reduction: the chosen pair's transfer, the
+// characteristic polynomial, the reducer's hidden modes and the loop gain at the break. Sweeps then only
+// substitute values (analyzeAt), which is what keeps a slider update fast. It takes the reducer's exact
+// values and never reads printed text back.
+import { polyConst, type Poly } from "@shared/algebra/poly";
+import { ratDenominator, ratReduceTracked, type RatFn } from "@shared/algebra/ratfn";
+import { qOne } from "@shared/algebra/rational";
 import type { Problem } from "@shared/diagram/problems";
 import { parameterValue, type DiagramDocument } from "@shared/diagram/schema";
-import { reduceDocument } from "@shared/engine/reduceDocument";
-import type { Cancellation } from "@shared/reduce/result";
+import type { ExactCancellation } from "@shared/reduce/modes";
+import type { ExactReduction } from "@shared/reduce/reduceDiagram";
 import { AnalysisError } from "@shared/analysis/errors";
 import { defaultBreak, findBreak, loopGain, type BreakPoint } from "@shared/analysis/loopGain";
-import { parseTransfer } from "@shared/analysis/nominal";
 
 export interface PrepareOptions {
   input?: string;
@@ -27,7 +28,7 @@ export interface PreparedAnalysis {
   nominal: Record<string, number>;
   transfer: RatFn;
   /** Modes the reduction cancelled (factors, symbolic). */
-  cancelled: Cancellation[];
+  cancelled: ExactCancellation[];
   characteristic: Poly;
   loop: { breakPoint: BreakPoint; L: RatFn } | null;
   /** Why there is no loop gain, when there is none. */
@@ -37,27 +38,24 @@ export interface PreparedAnalysis {
 
 export type Prepared = { ok: true; prepared: PreparedAnalysis } | { ok: false; problems: Problem[] };
 
-const firstOf = (doc: unknown, type: "input" | "output"): string | undefined => {
-  const blocks = (doc as { blocks?: unknown })?.blocks;
-  if (!Array.isArray(blocks)) return undefined;
-  const b = blocks.find((x) => (x as { type?: unknown })?.type === type) as { id?: unknown } | undefined;
-  return typeof b?.id === "string" ? b.id : undefined;
-};
+const firstOf = (doc: DiagramDocument, type: "input" | "output"): string | undefined => doc.blocks.find((b) => b.type === type)?.id;
 
 /**
- * Reduces the chosen pair (default: the first input and the first output block in `blocks` order) and the
- * loop at the break. Bad documents give the engine's problems; an unknown break wire gives a problem with
- * code "unknown-break-wire". Example: prepareAnalysis(doc, { break: "w6" }).prepared.loop.L.
+ * The chosen pair (default: the first input and the first output block in `blocks` order) of a reduction,
+ * and the loop at the break. A pair the reduction does not hold gives "unknown-pair-id"; an unknown break
+ * wire gives "unknown-break-wire". Example: prepareAnalysis(reduction, { break: "w6" }).prepared.loop.L.
  */
-export function prepareAnalysis(raw: unknown, opts: PrepareOptions = {}): Prepared {
-  const input = opts.input ?? firstOf(raw, "input");
-  const output = opts.output ?? firstOf(raw, "output");
-  const reduced = reduceDocument(raw, { input, output });
-  if (!reduced.ok) return { ok: false, problems: reduced.problems };
-  const { doc, result } = reduced;
-  const t = result.transfers[0];
-  const parameters = Object.keys(doc.parameters ?? {});
-  const nominal = Object.fromEntries(Object.entries(doc.parameters ?? {}).map(([k, v]) => [k, parameterValue(v)]));
+export function prepareAnalysis(reduction: ExactReduction, opts: PrepareOptions = {}): Prepared {
+  const { doc } = reduction.diagram;
+  const input = opts.input ?? firstOf(doc, "input");
+  const output = opts.output ?? firstOf(doc, "output");
+  const t = reduction.transfers.find((x) => x.input === input && x.output === output);
+  if (!t) {
+    const message = `The reduction holds no pair ${input ?? "(no input)"} → ${output ?? "(no output)"}: choose an input and an output block of the diagram.`;
+    return { ok: false, problems: [{ severity: "error", code: "unknown-pair-id", message }] };
+  }
+  const parameters = Object.keys(doc.parameters);
+  const nominal = Object.fromEntries(Object.entries(doc.parameters).map(([k, v]) => [k, parameterValue(v)]));
   let breakPoint: BreakPoint | null;
   try {
     breakPoint = opts.break !== undefined ? findBreak(doc, opts.break) : defaultBreak(doc, t.input);
@@ -68,11 +66,10 @@ export function prepareAnalysis(raw: unknown, opts: PrepareOptions = {}): Prepar
   let loop: PreparedAnalysis["loop"] = null;
   let loopNote: string | null = breakPoint ? null : "No break point: the chosen input reaches no summing junction with a minus sign. Pick a wire to break for margins and the Nyquist plot.";
   if (breakPoint) {
-    const l = loopGain(doc, breakPoint);
+    const l = loopGain(reduction, breakPoint);
     if (l.ok) loop = { breakPoint, L: l.L };
     else loopNote = `The loop at ${breakPoint.label} cannot be formed: ${l.problems.filter((p) => p.severity === "error").map((p) => p.message).join("; ")}`;
   }
-  const characteristic = ratDenominator(parseTransfer("1", result.characteristic, parameters));
   return {
     ok: true,
     prepared: {
@@ -81,12 +78,13 @@ export function prepareAnalysis(raw: unknown, opts: PrepareOptions = {}): Prepar
       output: t.output,
       parameters,
       nominal,
-      transfer: parseTransfer(t.numerator, t.denominator, parameters),
+      transfer: t.gain,
       cancelled: t.cancelled,
-      characteristic,
+      // The denominator of 1/χ: χ in the same normal form as every other denominator.
+      characteristic: ratDenominator(ratReduceTracked(polyConst(qOne), reduction.characteristic).value),
       loop,
       loopNote,
-      warnings: result.warnings,
+      warnings: reduction.warnings,
     },
   };
 }

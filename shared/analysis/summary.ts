@@ -1,16 +1,16 @@
 // The analysis as `analyze --json` prints it: the issue's fields first, the details the panel also shows after.
 import type { Analysis } from "@shared/analysis/analyze";
 import { flatRoots } from "@shared/analysis/poles";
-import type { PreparedAnalysis } from "@shared/analysis/prepare";
 import type { AnalysisResult } from "@shared/analysis/schema";
 import type { TimeResponse } from "@shared/analysis/timeResponse";
+import type { Problem } from "@shared/diagram/problems";
 
 const response = (r: TimeResponse) => ({ formula: r.formula, latex: r.latex, exact: r.exact });
 
 /**
- * The JSON result of one analysis (matches analysisResultSchema). Example: analysisSummary(a, p).stable === "stable".
+ * The JSON result of one analysis (matches analysisResultSchema). Example: analysisSummary(a, warnings).stable === "stable".
  */
-export function analysisSummary(a: Analysis, p: PreparedAnalysis): AnalysisResult {
+export function analysisSummary(a: Analysis, warnings: Problem[]): AnalysisResult {
   const { riseTime, peakTime, overshootPercent, settlingTime, finalValue } = a.step;
   const m = a.loop?.margins;
   return {
@@ -70,6 +70,6 @@ export function analysisSummary(a: Analysis, p: PreparedAnalysis): AnalysisResul
     loopGain: a.loop ? { numerator: a.loop.L.numerator, denominator: a.loop.L.denominator } : null,
     responses: { step: response(a.responses.step), impulse: response(a.responses.impulse), ramp: response(a.responses.ramp) },
     notes: a.notes,
-    warnings: p.warnings,
+    warnings,
   };
 }

@@ -2,9 +2,8 @@ import type { Field } from "@shared/algebra/field";
 import type { Budget } from "@shared/reduce/budget";
 import { loopDeterminant, reducePairGraph, type WeighGain } from "@shared/reduce/eliminate";
 import type { SignalFlowGraph } from "@shared/reduce/graph";
-import type { ReductionStep } from "@shared/reduce/result";
 import { loopComponents, reachable } from "@shared/reduce/scc";
-import { StepLog, type ShowGain } from "@shared/reduce/trace";
+import { StepLog, type TraceStep } from "@shared/reduce/trace";
 
 /* Field-generic entry points of the reducer, on a signal-flow graph (see buildSignalGraph). */
 
@@ -44,20 +43,20 @@ export interface PairTransfer<T> {
  * Transfer of every (input, output) pair, each with all other inputs zero, with the steps of each pair's
  * reduction (tagged with the pair). Only nodes on a path from the input to the output take part: loops
  * elsewhere do not change this pair's transfer. A pair without a path has transfer 0 and no steps.
+ * Steps carry exact gains (print them with printSteps); without `trace` none are recorded.
  * With `determinant`, the first pair with a path also returns the pivots of its reduction, whose product
  * is det(I − A) over its nodes: that saves a separate determinant run of the same loops. `weigh` sizes a
  * gain (e.g. its degree in s) to order ties between rules (see comparePlans).
- * Example: reducePairs(graph, field, show, [["r", "y"]], budget).transfers[0].gain is T(r → y).
+ * Example: reducePairs(graph, field, [["r", "y"]], budget).transfers[0].gain is T(r → y).
  */
 export function reducePairs<T>(
   graph: SignalFlowGraph<T>,
   field: Field<T>,
-  show: ShowGain<T>,
   pairs: readonly (readonly [string, string])[],
   budget: Budget,
-  opts: { determinant?: boolean; weigh?: WeighGain<T> } = {},
-): { transfers: PairTransfer<T>[]; steps: ReductionStep[] } {
-  const log = new StepLog(show);
+  opts: { determinant?: boolean; weigh?: WeighGain<T>; trace?: boolean } = {},
+): { transfers: PairTransfer<T>[]; steps: TraceStep<T>[] } {
+  const log = opts.trace === false ? null : new StepLog<T>();
   const forward = new Map<string, Set<string>>();
   const backward = new Map<string, Set<string>>();
   const reach = (cache: Map<string, Set<string>>, id: string, dir: "forward" | "backward") => {
@@ -70,7 +69,7 @@ export function reducePairs<T>(
     if (!from.has(output)) return { input, output, gain: field.zero, final: null, nodes: [], pivots: null };
     const to = reach(backward, output, "backward");
     const nodes = [...from].filter((id) => to.has(id));
-    log.beginPair(input, output);
+    log?.beginPair(input, output);
     const reduced = reducePairGraph(graph.subgraph(nodes), field, input, output, log, budget, {
       determinant: wantDet,
       weigh: opts.weigh,
@@ -78,5 +77,5 @@ export function reducePairs<T>(
     wantDet = false;
     return { input, output, ...reduced, nodes };
   });
-  return { transfers, steps: log.steps };
+  return { transfers, steps: log?.steps ?? [] };
 }

@@ -4,6 +4,16 @@ import type { ReductionRule, ReductionStep } from "@shared/reduce/result";
 /** How a gain is printed in a step: plain expression syntax and LaTeX. */
 export type ShowGain<T> = (gain: T) => { expr: string; latex: string };
 
+/** A step as the reducer records it: the exact gain it produced, printed only at the end (printSteps). */
+export type TraceStep<T> = Omit<ReductionStep, "expr" | "latex"> & { gain: T };
+
+/** The trace in the published form. Example: printSteps(steps, showRat)[0].expr === "1/(s + 1)". */
+export const printSteps = <T>(steps: readonly TraceStep<T>[], show: ShowGain<T>): ReductionStep[] =>
+  steps.map(({ gain, ...step }) => {
+    const { expr, latex } = show(gain);
+    return { ...step, expr, latex };
+  });
+
 /** How a step names an edge in its sentence: its label with sign ("c", "−h"), or a bare wire's sign. */
 export const edgeName = <T>(e: SfgEdge<T>): string =>
   e.label === null ? (e.sign < 0 ? "−1" : "1") : e.sign < 0 ? `−${e.label}` : e.label;
@@ -23,11 +33,9 @@ export function times(...names: string[]): string {
  * records what each step consumed. Example: log.record("series", [ec, cp], [], g, (eq) => `… ${eq} …`) → "eq1".
  */
 export class StepLog<T> {
-  readonly steps: ReductionStep[] = [];
+  readonly steps: TraceStep<T>[] = [];
   private nextEq = 1;
   private pair: { input: string; output: string } | null = null;
-
-  constructor(private readonly show: ShowGain<T>) {}
 
   /** Steps recorded from now on belong to this input → output pair. */
   beginPair(input: string, output: string): void {
@@ -50,7 +58,6 @@ export class StepLog<T> {
       for (const w of e.wires) wires.add(w);
     }
     for (const b of extraBlocks) if (b !== null) blocks.add(b);
-    const shown = this.show(gain);
     this.steps.push({
       index: this.steps.length,
       rule,
@@ -58,8 +65,7 @@ export class StepLog<T> {
       consumedBlocks: [...blocks],
       consumedWires: [...wires],
       produced,
-      expr: shown.expr,
-      latex: shown.latex,
+      gain,
       ...(this.pair ?? {}),
     });
     return produced;

@@ -1,6 +1,6 @@
 import { expect, it } from "vitest";
 import { demoDiagrams } from "@server/db/demoDiagrams";
-import { reduceDocument } from "@shared/engine/reduceDocument";
+import { reduceDocument } from "@shared/reduce/reduceDiagram";
 
 // The demo must open as working loops: every seeded document reduces without problems.
 it.each(demoDiagrams.map((d) => [d.title, d.document] as const))("%s reduces cleanly", (_title, document) => {

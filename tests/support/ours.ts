@@ -1,4 +1,4 @@
-import { reduceDocument } from "@shared/engine/reduceDocument";
+import { reduceDocument } from "@shared/reduce/reduceDiagram";
 import type { ReductionResult } from "@shared/reduce/result";
 import { cDiv, type Complex } from "./complex";
 import { evalExpr, type ParamValues } from "./evalExpr";

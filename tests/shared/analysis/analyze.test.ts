@@ -1,16 +1,11 @@
 import { describe, expect, it } from "vitest";
 import { analyzeAt } from "@shared/analysis/analyze";
-import { analyzeDocument } from "@shared/analysis/analyzeDocument";
-import { prepareAnalysis } from "@shared/analysis/prepare";
+import { analyzeDocument } from "@shared/analysis/analyzeDiagram";
+import { prepared } from "../../support/reduced";
 import { analysisResultSchema } from "@shared/analysis/schema";
 import { hiddenUnstableLoop, makeDoc, unityFeedback } from "../../support/docBuilder";
 
 
-const prepared = (doc: unknown) => {
-  const p = prepareAnalysis(doc);
-  if (!p.ok) throw new Error(p.problems.map((x) => x.message).join("; "));
-  return p.prepared;
-};
 
 describe("analysis of a document", () => {
   it("K/(s(s+7)(s+11)) with K = 100: stable, stable range 0 < K < 1386, type 1 with Kv = K/77 (from memory: Nise, Examples 6.9 and 7.x)", () => {
@@ -60,7 +55,7 @@ describe("analysis of a document", () => {
     );
 
   it("a closed loop of degree 61 (above the typed-expression power limit of 50) is analysed (common practice: a polynomial with missing powers has roots off the open left half-plane)", () => {
-    const out = analyzeDocument(twoLags("1/(s^30 + 3)", "1/(s^31 + 2)"), { stableSets: false });
+    const out = analyzeDocument(twoLags("1/(s^30 + 3)", "1/(s^31 + 2)"));
     expect(out.ok).toBe(true);
     if (!out.ok) return;
     // (s^30 + 3)(s^31 + 2) + 1 = s^61 + 3s^31 + 2s^30 + 7: 61 poles, not Hurwitz.
@@ -69,7 +64,7 @@ describe("analysis of a document", () => {
   });
 
   it("a closed loop of degree 101 is refused with a degree-limit problem, not an internal error (common practice: clear refusal)", () => {
-    const out = analyzeDocument(twoLags("1/(s^50 + 3)", "1/((s^50 + 2)*s)"), { stableSets: false });
+    const out = analyzeDocument(twoLags("1/(s^50 + 3)", "1/((s^50 + 2)*s)"));
     expect(out.ok).toBe(false);
     if (!out.ok) expect(out.problems).toEqual([expect.objectContaining({ severity: "error", code: "degree-limit", message: expect.stringMatching(/101/) })]);
   });

@@ -1,8 +1,9 @@
 import { describe, expect, it } from "vitest";
 import { ratToText } from "@shared/algebra/ratfn";
 import { AnalysisError } from "@shared/analysis/errors";
-import { cutAt, defaultBreak, findBreak, loopGain } from "@shared/analysis/loopGain";
+import { cutGraph, defaultBreak, findBreak, loopGain } from "@shared/analysis/loopGain";
 import { makeDoc } from "../../support/docBuilder";
+import { reduced } from "../../support/reduced";
 
 const loop = (signs: ("+" | "-")[], h = "1") =>
   makeDoc(
@@ -19,7 +20,7 @@ const loop = (signs: ("+" | "-")[], h = "1") =>
   );
 
 const L = (doc: ReturnType<typeof loop>, wire: string) => {
-  const out = loopGain(doc, findBreak(doc, wire));
+  const out = loopGain(reduced(doc), findBreak(doc, wire));
   if (!out.ok) throw new Error(out.problems.map((p) => p.message).join("; "));
   return ratToText(out.L);
 };
@@ -57,11 +58,14 @@ describe("loop gain at a break, L = −w/u", () => {
     }
   });
 
-  it("the cut document injects u through the port's sign and reads w at the source", () => {
+  it("the cut graph injects u through the port's sign and reads w at the source", () => {
     const doc = loop(["+", "-"]);
-    const cut = cutAt(doc, findBreak(doc, "w6"));
-    expect(cut.doc.wires.find((w) => w.from === cut.input)).toMatchObject({ to: "e", port: 1 });
-    expect(cut.doc.wires.find((w) => w.to === cut.output)).toMatchObject({ from: "h" });
-    expect(cut.doc.wires).toHaveLength(doc.wires.length + 1);
+    const { graph } = reduced(doc);
+    const cut = cutGraph(graph, findBreak(doc, "w6"));
+    const edges = cut.graph.edges();
+    expect(edges.find((e) => e.from === cut.input)).toMatchObject({ to: "e", sign: -1 });
+    expect(edges.find((e) => e.to === cut.output)).toMatchObject({ from: "h", sign: 1 });
+    expect(edges.some((e) => e.from === "h" && e.to === "e")).toBe(false);
+    expect(edges).toHaveLength(graph.edges().length + 1);
   });
 });

@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { routhArray } from "@shared/analysis/routh";
 import { stabilityOf } from "@shared/analysis/stability";
 import { upInts, upToPoly, type UPoly } from "@shared/analysis/upoly";
-import { parseTransfer } from "@shared/analysis/nominal";
+import { parseTransfer } from "../../support/parseTransfer";
 import { ratDenominator } from "@shared/algebra/ratfn";
 
 /** Ascending integer coefficients from descending ones, as textbooks print them. */

@@ -5,7 +5,7 @@ import { bodeAt, ratEvalComplex } from "@shared/analysis/frequency";
 import { zpkOf } from "@shared/analysis/loopAnalysis";
 import { transferAt } from "@shared/analysis/nominal";
 import { flatRoots, rootsOf } from "@shared/analysis/poles";
-import { prepareAnalysis } from "@shared/analysis/prepare";
+import { prepared } from "../../support/reduced";
 import { responseAt, timeResponse } from "@shared/analysis/timeResponse";
 import { upFrom, upInts, type UPoly } from "@shared/analysis/upoly";
 import { q } from "@shared/algebra/rational";
@@ -69,9 +69,8 @@ function twelfthOrder(): Case {
     ["r->e:0", "e->g1", "g1->g2", "g2->g3", "g3->b", "b->y", "b->e:1"],
     { K: 20000 },
   );
-  const p = prepareAnalysis(doc);
-  if (!p.ok) throw new Error(p.problems.map((x) => x.message).join("; "));
-  const { num, den } = transferAt(p.prepared.transfer, p.prepared.nominal);
+  const p = prepared(doc);
+  const { num, den } = transferAt(p.transfer, p.nominal);
   return { id: "12th-order loop (from a diagram)", num, den, tEnd: 20 };
 }
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { ratDenominator } from "@shared/algebra/ratfn";
-import { parseTransfer } from "@shared/analysis/nominal";
+import { parseTransfer } from "../../support/parseTransfer";
 import { rootCounts, stabilityOf } from "@shared/analysis/stability";
 import { upFromPoly, upInts, upMul, type UPoly } from "@shared/analysis/upoly";
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { ratDenominator } from "@shared/algebra/ratfn";
-import { parseTransfer } from "@shared/analysis/nominal";
+import { parseTransfer } from "../../support/parseTransfer";
 import { stableSet } from "@shared/analysis/stableSet";
 
 const den = (text: string, params: string[]) => ratDenominator(parseTransfer("1", text, params));

@@ -1,14 +1,10 @@
 import { describe, expect, it } from "vitest";
-import { prepareAnalysis } from "@shared/analysis/prepare";
+import { prepared } from "../../support/reduced";
 import { parameterRange, rootLocus, stepOverlay, sweepValues } from "@shared/analysis/sweep";
 import { unityFeedback } from "../../support/docBuilder";
 
 const doc = unityFeedback("K/(s*(s + 7)*(s + 11))", { K: { value: 100, min: 10, max: 3000 } });
-const p = (() => {
-  const out = prepareAnalysis(doc);
-  if (!out.ok) throw new Error("bad test document");
-  return out.prepared;
-})();
+const p = prepared(doc);
 
 describe("parameter sweeps", () => {
   it("the slider range comes from the parameter table, else a decade either side", () => {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { ratDenominator, ratNumerator } from "@shared/algebra/ratfn";
-import { parseTransfer } from "@shared/analysis/nominal";
+import { parseTransfer } from "../../support/parseTransfer";
 import { responseAt, responseSlopeAt, timeResponse, type InputKind, type TimeResponse } from "@shared/analysis/timeResponse";
 import { upEvalFloat, upFromPoly, upInts, type UPoly } from "@shared/analysis/upoly";
 import { cClose, cDiv, cx, type Complex } from "../../support/complex";

@@ -7,12 +7,12 @@ import type { ReductionStep } from "@shared/reduce/result";
  * in that pair, and is consumed at most once; every produced id is new and is consumed later in the pair,
  * except the pair's last step, which produces the final result. Returns the violations (empty when fine).
  */
-export function traceViolations(doc: DiagramDocument, steps: readonly ReductionStep[]): string[] {
+export function traceViolations(doc: DiagramDocument, steps: readonly Omit<ReductionStep, "expr" | "latex">[]): string[] {
   const out: string[] = [];
   const blocks = new Set(doc.blocks.map((b) => b.id));
   const wires = new Set(doc.wires.map((w, i) => wireLabel(w, i)));
   const produced = new Set<string>();
-  const byPair = new Map<string, ReductionStep[]>();
+  const byPair = new Map<string, Omit<ReductionStep, "expr" | "latex">[]>();
   steps.forEach((s, i) => {
     if (s.index !== i) out.push(`step ${i} has index ${s.index}`);
     if (produced.has(s.produced)) out.push(`${s.produced} produced twice`);

@@ -1,7 +1,7 @@
 import { useEffect, useRef, useState } from "react";
 import type { Problem } from "@shared/diagram/problems";
 import type { EditorDoc } from "@/features/editor/commands/types";
-import type { AnalysisAnswer, AnalysisQuery, ParameterInfo } from "@/features/editor/worker/analysisProtocol";
+import type { AnalysisAnswer, AnalysisQuery, ParameterInfo } from "@shared/analysis/answer";
 import { AnalysisChannel } from "@/features/editor/worker/analysisChannel";
 import AnalysisWorker from "@/features/editor/worker/analysis.worker.ts?worker";
 

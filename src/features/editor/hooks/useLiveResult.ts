@@ -1,5 +1,5 @@
 import { useLayoutEffect, useRef, useState } from "react";
-import type { ReduceOutcome } from "@shared/engine/reduceDocument";
+import type { ReduceOutcome } from "@shared/reduce/reduceDiagram";
 import type { EditorDoc } from "@/features/editor/commands/types";
 import { ReduceChannel } from "@/features/editor/worker/reduceChannel";
 import ReduceWorker from "@/features/editor/worker/reduce.worker.ts?worker";

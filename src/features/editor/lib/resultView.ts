@@ -1,5 +1,5 @@
 import type { Problem } from "@shared/diagram/problems";
-import type { ReduceOutcome } from "@shared/engine/reduceDocument";
+import type { ReduceOutcome } from "@shared/reduce/reduceDiagram";
 import type { ReductionResult, ReductionStep, TransferResult } from "@shared/reduce/result";
 
 export const pairKey = (t: Pick<TransferResult, "input" | "output">) => `${t.input}→${t.output}`;

@@ -1,4 +1,4 @@
-import type { AnalysisReply, AnalysisRequest } from "@/features/editor/worker/analysisProtocol";
+import type { AnalysisReply, AnalysisRequest } from "@shared/analysis/answer";
 import { createAnalyzer } from "@/features/editor/worker/analyzeQuery";
 
 // Runs the analysis off the main thread; the analyser keeps the last preparation, so slider moves stay fast.

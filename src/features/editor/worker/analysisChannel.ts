@@ -1,4 +1,4 @@
-import type { AnalysisQuery, AnalysisReply, AnalysisRequest } from "@/features/editor/worker/analysisProtocol";
+import type { AnalysisQuery, AnalysisReply, AnalysisRequest } from "@shared/analysis/answer";
 import { WorkerChannel, type WorkerResult } from "@/features/editor/worker/workerChannel";
 
 export type AnalysisChannelResult = WorkerResult<AnalysisQuery, AnalysisReply>;

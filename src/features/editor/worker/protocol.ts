@@ -1,4 +1,4 @@
-import type { ReduceOutcome } from "@shared/engine/reduceDocument";
+import type { ReduceOutcome } from "@shared/reduce/reduceDiagram";
 
 /** The one message the editor sends its reduction worker: reduce this document. */
 export interface ReduceRequest {

@@ -1,4 +1,4 @@
-import { reduceDocument } from "@shared/engine/reduceDocument";
+import { reduceDocument } from "@shared/reduce/reduceDiagram";
 import { LIVE_LIMITS, type ReduceReply, type ReduceRequest } from "@/features/editor/worker/protocol";
 
 // Runs the exact engine off the main thread so dragging and typing never stall on algebra.

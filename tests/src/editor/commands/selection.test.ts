@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { reduceDocument } from "@shared/engine/reduceDocument";
+import { reduceDocument } from "@shared/reduce/reduceDiagram";
 import { validateDiagram } from "@shared/diagram/validate";
 import { copySelection, deleteSelection, duplicate, paste, selectAll } from "@/features/editor/commands/selection";
 import { withWireIds } from "@/features/editor/commands/document";

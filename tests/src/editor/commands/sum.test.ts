@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { reduceDocument } from "@shared/engine/reduceDocument";
+import { reduceDocument } from "@shared/reduce/reduceDiagram";
 import { addSumPort, removeSumPort, setSign, toggleSign } from "@/features/editor/commands/sum";
 import type { EditorDoc, Outcome } from "@/features/editor/commands/types";
 import { unityLoop } from "../support";

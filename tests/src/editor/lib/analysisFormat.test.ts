@@ -2,7 +2,7 @@ import { execFileSync } from "node:child_process";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { ratDenominator } from "@shared/algebra/ratfn";
-import { parseTransfer } from "@shared/analysis/nominal";
+import { parseTransfer } from "../../../support/parseTransfer";
 import { rootsOf } from "@shared/analysis/poles";
 import { routhArray } from "@shared/analysis/routh";
 import { upFromPoly } from "@shared/analysis/upoly";

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { reduceDocument } from "@shared/engine/reduceDocument";
+import { reduceDocument } from "@shared/reduce/reduceDiagram";
 import { resultLatex, resultPlainText, transferText } from "@/features/editor/lib/resultText";
 import { sympyEqual, unityLoop } from "../support";
 

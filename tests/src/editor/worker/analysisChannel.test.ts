@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import type { AnalysisQuery, AnalysisRequest } from "@/features/editor/worker/analysisProtocol";
+import type { AnalysisQuery, AnalysisRequest } from "@shared/analysis/answer";
 import { AnalysisChannel, type AnalysisChannelResult } from "@/features/editor/worker/analysisChannel";
 import { unityLoop } from "../support";
 

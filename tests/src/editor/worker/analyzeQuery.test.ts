@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { analyzeAt } from "@shared/analysis/analyze";
 import { prepareAnalysis } from "@shared/analysis/prepare";
-import type { AnalysisAnswer, AnalysisQuery } from "@/features/editor/worker/analysisProtocol";
+import type { AnalysisAnswer, AnalysisQuery } from "@shared/analysis/answer";
 import { analysisKey, createAnalyzer, OVERLAY_VALUES } from "@/features/editor/worker/analyzeQuery";
 import { docOf, unityLoop } from "../support";
 

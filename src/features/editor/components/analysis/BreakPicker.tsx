@@ -1,5 +1,5 @@
 import { Button } from "@/components/Button";
-import type { BreakWire } from "@/features/editor/worker/analysisProtocol";
+import type { BreakWire } from "@shared/analysis/answer";
 
 /** Where the analysis broke the loop for margins and the Nyquist plot, and a way back to the default wire. */
 export function BreakInUse({ used, chosen, onDefault }: { used: BreakWire | null; chosen: string | null; onDefault: () => void }) {

@@ -3,7 +3,7 @@ import { Button } from "@/components/Button";
 import { formatNumber } from "@/features/editor/lib/analysisFormat";
 import { isLogRange } from "@shared/analysis/scale";
 import { SLIDER_STEPS, sliderToValue, valueToSlider } from "@/features/editor/lib/sliderScale";
-import type { ParameterInfo } from "@/features/editor/worker/analysisProtocol";
+import type { ParameterInfo } from "@shared/analysis/answer";
 
 interface Props {
   parameters: ParameterInfo[];

@@ -5,7 +5,7 @@ import { sampleResponse } from "@shared/analysis/stepMetrics";
 import type { RootLocus } from "@shared/analysis/sweep";
 import { SPlanePlot, type SPlaneMarker } from "@/features/editor/components/analysis/SPlanePlot";
 import { formatComplex, formatNumber, niceStep, rootRows } from "@/features/editor/lib/analysisFormat";
-import type { SweepData } from "@/features/editor/worker/analysisProtocol";
+import type { SweepData } from "@shared/analysis/answer";
 
 /** Series colours; the legend below the chart uses the same classes (recharts' legend cannot read currentColor). */
 const SERIES = ["text-signal", "text-trace", "text-steady", "text-fault", "text-ink-soft"];

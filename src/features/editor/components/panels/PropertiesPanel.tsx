@@ -9,7 +9,7 @@ import { Connections } from "@/features/editor/components/panels/Connections";
 import { ExpressionField } from "@/features/editor/components/panels/ExpressionField";
 import { SumPorts } from "@/features/editor/components/panels/SumPorts";
 import { TYPE_NAME, wireAriaLabel } from "@/features/editor/lib/flowModel";
-import type { BreakWire } from "@/features/editor/worker/analysisProtocol";
+import type { BreakWire } from "@shared/analysis/answer";
 
 interface Props {
   doc: EditorDoc;

@@ -2,7 +2,7 @@
 import { renderToStaticMarkup } from "react-dom/server";
 import { describe, expect, it } from "vitest";
 import { analyzeAt, type Analysis } from "@shared/analysis/analyze";
-import { prepareAnalysis } from "@shared/analysis/prepare";
+import { prepared } from "../../../../support/reduced";
 import { rootLocus, stepOverlay } from "@shared/analysis/sweep";
 import { RouthView } from "@/features/editor/components/analysis/RouthView";
 import { StabilityView } from "@/features/editor/components/analysis/StabilityView";
@@ -10,11 +10,6 @@ import { SteadyStateView } from "@/features/editor/components/analysis/SteadySta
 import { SweepView } from "@/features/editor/components/analysis/SweepView";
 import { hiddenUnstableLoop, makeDoc, unityFeedback } from "../../../../support/docBuilder";
 
-const prepared = (doc: unknown) => {
-  const p = prepareAnalysis(doc);
-  if (!p.ok) throw new Error(p.problems.map((x) => x.message).join("; "));
-  return p.prepared;
-};
 
 
 const open = (g: string) => makeDoc([{ id: "r", type: "input" }, { id: "g", type: "transfer", expr: g }, { id: "y", type: "output" }], ["r->g", "g->y"]);

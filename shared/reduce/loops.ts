@@ -1,7 +1,7 @@
 import { ratField, type RatFn } from "@shared/algebra/ratfn";
 import type { Problem } from "@shared/diagram/problems";
-import { weighRat } from "@shared/engine/ratView";
-import { loopProblems, type FactoredLoop } from "@shared/engine/wellPosed";
+import { weighRat } from "@shared/reduce/ratView";
+import { loopProblems, type FactoredLoop } from "@shared/reduce/wellPosed";
 import type { Budget } from "@shared/reduce/budget";
 import type { SignalFlowGraph } from "@shared/reduce/graph";
 import { loopDeterminants, type PairTransfer } from "@shared/reduce/reduce";

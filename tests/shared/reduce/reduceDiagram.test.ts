@@ -1,6 +1,6 @@
 import { describe, expect, test } from "vitest";
 import { benchDiagram } from "@server/bench/diagrams";
-import { reduceDocument } from "@shared/engine/reduceDocument";
+import { reduceDocument } from "@shared/reduce/reduceDiagram";
 import { reductionResultSchema } from "@shared/reduce/result";
 import { diagram } from "../reduce/diagramSpec";
 import { traceViolations } from "../reduce/traceCheck";

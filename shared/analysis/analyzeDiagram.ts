@@ -1,16 +1,20 @@
-// The analysis worker's work, as a pure function with a small cache so a slider move skips the symbolic part:
-// prepareAnalysis runs once per (document, pair, break); stable ranges, the root locus and the step overlay
-// are kept for as long as the values they depend on stay the same.
+// The analysis stage's entry, for the editor's worker and the CLI alike. It takes the reducer's exact result;
+// a small cache lets a slider move skip the symbolic part: prepareAnalysis runs once per (reduction, pair,
+// break); stable ranges, the root locus and the step overlay are kept while the values they depend on stay.
 import { AlgebraError } from "@shared/algebra/errors";
 import { polyParams } from "@shared/algebra/poly";
 import { ratDenominator } from "@shared/algebra/ratfn";
 import { analyzeAt, type Analysis } from "@shared/analysis/analyze";
+import type { AnalysisAnswer, AnalysisQuery, BreakWire, ParameterInfo, SweepData } from "@shared/analysis/answer";
 import { AnalysisError } from "@shared/analysis/errors";
 import { prepareAnalysis, type Prepared, type PreparedAnalysis } from "@shared/analysis/prepare";
+import type { AnalysisResult } from "@shared/analysis/schema";
 import { stableSet, type StableSet } from "@shared/analysis/stableSet";
+import { analysisSummary } from "@shared/analysis/summary";
 import { parameterRange, rootLocus, stepOverlay, sweepValues } from "@shared/analysis/sweep";
+import { parseDiagram } from "@shared/diagram/parseDiagram";
 import type { Problem } from "@shared/diagram/problems";
-import type { AnalysisAnswer, AnalysisQuery, BreakWire, ParameterInfo, SweepData } from "@/features/editor/worker/analysisProtocol";
+import { reduceDiagram, type ExactReduction } from "@shared/reduce/reduceDiagram";
 
 /** Points of the root locus and step responses in the overlay. */
 export const LOCUS_POINTS = 200;
@@ -18,21 +22,7 @@ export const OVERLAY_VALUES = 5;
 /** Entries kept per cache before it is emptied (a slider drag visits many values). */
 const CACHE_LIMIT = 64;
 
-/**
- * What the symbolic preparation depends on: the diagram's blocks, wires and parameter table, the pair and
- * the break — not the layout, title or notes, so moving a block on the canvas reuses the preparation.
- */
-export function analysisKey(document: unknown, input: string | null, output: string | null, brk: string | null): string {
-  const d = (document ?? {}) as Record<string, unknown>;
-  return JSON.stringify([d.format, d.version, d.blocks, d.wires, d.parameters, input, output, brk]);
-}
-
-const hasWire = (document: unknown, id: string): boolean => {
-  const wires = (document as { wires?: unknown })?.wires;
-  return Array.isArray(wires) && wires.some((w) => (w as { id?: unknown })?.id === id);
-};
-
-/** The same mapping analyzeDocument makes: a bad parameter value points at its row of the parameter table. */
+/** A failed analysis as a Problem: a bad parameter value points at its row of the parameter table. */
 function problemOf(err: AnalysisError | AlgebraError): Problem {
   const subject = err instanceof AnalysisError && err.code === "bad-value" && err.subject ? { field: `parameters.${err.subject}` } : {};
   return { severity: "error", code: err.code, message: err.message, ...subject };
@@ -67,29 +57,30 @@ class Cache<T> {
   }
 }
 
-/** A stateful analyser: call it with each query; it remembers the last preparation and what hangs off it. */
-export function createAnalyzer(): (q: AnalysisQuery) => AnalysisAnswer {
-  let key: string | null = null;
+/** The analyser: call it with a reduction and a query; it keeps the last preparation and what hangs off it. */
+export type Analyzer = (reduction: ExactReduction, q: AnalysisQuery) => AnalysisAnswer;
+
+/**
+ * A stateful analyser. A new reduction object, pair or break prepares afresh; the same reduction with new
+ * values only substitutes them. Example: createAnalyzer()(reduction, { input: null, …, values: { K: 2 } }).
+ */
+export function createAnalyzer(): Analyzer {
+  let last: { reduction: ExactReduction; input: string | null; output: string | null; brk: string | null } | null = null;
   let prepared: Prepared | null = null;
   let conditions: string[] | null = null;
   const sets = new Cache<StableSet>();
   const sweeps = new Cache<Omit<SweepData, "current">>();
 
-  return (q) => {
+  return (reduction, q) => {
     const notes: string[] = [];
-    let brk = q.break;
-    if (brk !== null && !hasWire(q.document, brk)) {
-      notes.push(`The chosen break wire ${brk} is no longer in the diagram: the loop is broken at the default wire instead.`);
-      brk = null;
-    }
-    const k = analysisKey(q.document, q.input, q.output, brk);
-    const fresh = k !== key;
+    const brk = q.break;
+    const fresh = !last || last.reduction !== reduction || last.input !== q.input || last.output !== q.output || last.brk !== brk;
     if (fresh) {
-      key = null; // set again only once the preparation has not thrown
+      last = null; // set again only once the preparation has not thrown
       sets.clear();
       sweeps.clear();
-      prepared = prepareAnalysis(q.document, { input: q.input ?? undefined, output: q.output ?? undefined, break: brk ?? undefined });
-      key = k;
+      prepared = prepareAnalysis(reduction, { input: q.input ?? undefined, output: q.output ?? undefined, break: brk ?? undefined });
+      last = { reduction, input: q.input, output: q.output, brk };
     }
     if (!prepared?.ok) return { ok: false, problems: prepared?.problems ?? [], parameters: [] };
     const p = prepared.prepared;
@@ -140,4 +131,32 @@ function sweepOf(p: PreparedAnalysis, wanted: string | null, at: Record<string, 
     notes.push(`The sweep of ${parameter} could not be computed: ${err.message}`);
     return null;
   }
+}
+
+export type AnalyzeOutcome =
+  | { ok: true; doc: ExactReduction["diagram"]["doc"]; analysis: Analysis; result: AnalysisResult }
+  | { ok: false; problems: Problem[] };
+
+/**
+ * Untrusted input to the published analysis of one pair (parse, reduce that pair, analyse, summarise): the
+ * CLI's call. Never throws for bad input: every failure is a Problem with a code ("unknown-break-wire",
+ * "degree-limit", the reducer's codes…). Example: analyzeDocument(json, { break: "w6" }).result.margins.
+ */
+export function analyzeDocument(raw: unknown, opts: { input?: string; output?: string; break?: string; values?: Record<string, number>; settlingBand?: number } = {}): AnalyzeOutcome {
+  const parsed = parseDiagram(raw);
+  if (!parsed.ok) return { ok: false, problems: parsed.problems };
+  const reduced = reduceDiagram(parsed.diagram, { input: opts.input, output: opts.output });
+  if (!reduced.ok) return reduced;
+  const { reduction } = reduced;
+  const answer = createAnalyzer()(reduction, {
+    input: opts.input ?? null,
+    output: opts.output ?? null,
+    break: opts.break ?? null,
+    values: opts.values ?? {},
+    settlingBand: opts.settlingBand ?? 0.02,
+    sweepParameter: null,
+    withSweep: false,
+  });
+  if (!answer.ok) return { ok: false, problems: answer.problems };
+  return { ok: true, doc: parsed.diagram.doc, analysis: answer.analysis, result: analysisSummary(answer.analysis, reduction.warnings) };
 }

@@ -1,6 +1,6 @@
 import { ratDiv, ratEquals, ratFromExpr, ratToText, type RatFn } from "@shared/algebra/ratfn";
 import { parseExpression } from "@shared/expr/parse";
-import type { ReduceOutcome } from "@shared/engine/reduceDocument";
+import type { ReduceOutcome } from "@shared/reduce/reduceDiagram";
 import type { TransferResult } from "@shared/reduce/result";
 
 /** The exact value of an expression written in the diagram syntax (test reference values). */

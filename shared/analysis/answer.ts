@@ -1,3 +1,4 @@
+// The analysis stage's contract: what the editor and the CLI ask of it and what it answers.
 import type { Analysis } from "@shared/analysis/analyze";
 import type { RootLocus } from "@shared/analysis/sweep";
 import type { Problem } from "@shared/diagram/problems";
@@ -11,9 +12,8 @@ export interface SweepData {
   current: number;                                   // the slider value now
 }
 
-/** What the analysis is asked for: the pair, the break, parameter values and the swept parameter. */
+/** What the analysis of a reduction is asked for: the pair, the break, parameter values and the swept parameter. */
 export interface AnalysisQuery {
-  document: unknown;
   /** Input and output block ids of the pair; null: the first input and the first output. */
   input: string | null;
   output: string | null;
@@ -28,8 +28,6 @@ export interface AnalysisQuery {
   /** Compute the sweep (root locus and step overlay) — only while its tab is open, as it costs the most. */
   withSweep: boolean;
 }
-
-export type AnalysisRequest = AnalysisQuery & { seq: number };
 
 /** One row of the slider table: the parameter table's nominal value, range, unit and description. */
 export interface ParameterInfo {
@@ -48,8 +46,5 @@ export interface BreakWire {
 
 export type AnalysisAnswer =
   | { ok: true; analysis: Analysis; parameters: ParameterInfo[]; sweep: SweepData | null; breakWire: BreakWire | null }
-  /** `parameters` is empty when the document itself could not be prepared. */
+  /** `parameters` is empty when the pair itself could not be prepared. */
   | { ok: false; problems: Problem[]; parameters: ParameterInfo[] };
-
-/** The worker's answer to request `seq`, or the message of an unexpected crash. */
-export type AnalysisReply = (AnalysisAnswer & { seq: number; ms: number }) | { seq: number; ms: number; crash: string };

@@ -7,10 +7,18 @@ import {
   ratDegrees, ratDenominator, ratField, ratIsZero, ratMul, ratNumerator, ratReduceTracked, type RatFn,
 } from "@shared/algebra/ratfn";
 import { polyRoots } from "@shared/algebra/roots";
-import type { LoopCheck } from "@shared/engine/loops";
+import type { LoopCheck } from "@shared/reduce/loops";
 import { fieldProduct } from "@shared/reduce/eliminate";
 import type { PairTransfer } from "@shared/reduce/reduce";
-import type { Cancellation } from "@shared/reduce/result";
+
+/** A common factor the reduction cancelled, exact; printed as a Cancellation of the published result. */
+export interface ExactCancellation {
+  factor: Poly;
+  /** Its roots at the nominal parameter values, as [re, im] pairs. */
+  roots: [number, number][];
+  /** A root with non-negative real part: a hidden unstable mode. */
+  unstable: boolean;
+}
 
 const ONE = polyConst(qOne);
 
@@ -66,14 +74,14 @@ const unstableRoot = ([re, im]: [number, number]): boolean => re >= -1e-9 * Math
  * each with its roots at the nominal parameter values and `unstable` when one has Re ≥ 0 (within 1e-9,
  * relative, so a cancelled integrator counts). A pair whose transfer is 0 hides every mode of χ.
  * `cache` maps a quotient's text to its result, since many pairs share it.
- * Example: plant 1/(s - 1) behind a controller (s - 1)/(s + 1) → [{ factor: "s - 1", roots: [[1, 0]], unstable: true }].
+ * Example: plant 1/(s - 1) behind a controller (s - 1)/(s + 1) → [{ factor: s - 1, roots: [[1, 0]], unstable: true }].
  */
 export function cancelledModes(
   chi: Poly,
   transfer: RatFn,
   nominal: Readonly<Record<string, number>>,
-  cache: Map<string, Cancellation[]>,
-): Cancellation[] {
+  cache: Map<string, ExactCancellation[]>,
+): ExactCancellation[] {
   const den = ratDenominator(transfer);
   // Same degree: the quotient is a constant, nothing is hidden (the common case, worth skipping a division).
   if (polyDegree(den) === polyDegree(chi)) return [];
@@ -86,7 +94,7 @@ export function cancelledModes(
     .filter((f) => polyDegree(f) > 0)
     .map((f) => {
       const roots = polyRoots(polyEvaluateAt(f, nominal));
-      return { factor: polyToText(f), roots, unstable: roots.some(unstableRoot) };
+      return { factor: f, roots, unstable: roots.some(unstableRoot) };
     });
   cache.set(key, result);
   return result;

@@ -1,5 +1,5 @@
 import { describe, expect, test } from "vitest";
-import { reduceDocument } from "@shared/engine/reduceDocument";
+import { reduceDocument } from "@shared/reduce/reduceDiagram";
 import { diagram } from "../reduce/diagramSpec";
 import { exact, resultOf, sameValue, transferValue } from "./exact";
 

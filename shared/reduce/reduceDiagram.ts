@@ -1,0 +1,160 @@
+import { AlgebraError, DEGREE_LIMIT } from "@shared/algebra/errors";
+import { polyDegree, type Poly } from "@shared/algebra/poly";
+import { ratField, type RatFn } from "@shared/algebra/ratfn";
+import { parseDiagram, type ParsedDiagram } from "@shared/diagram/parseDiagram";
+import type { Problem } from "@shared/diagram/problems";
+import { parameterValue, type DiagramDocument } from "@shared/diagram/schema";
+import { blockGains } from "@shared/reduce/blockGains";
+import { cancelledModes, characteristicPolynomial, type ExactCancellation } from "@shared/reduce/modes";
+import { selectPairs } from "@shared/reduce/pairs";
+import { checkLoops } from "@shared/reduce/loops";
+import { weighRat } from "@shared/reduce/ratView";
+import { listBlocks } from "@shared/reduce/wellPosed";
+import { buildSignalGraph } from "@shared/reduce/build";
+import { createBudget, ReductionLimitError } from "@shared/reduce/budget";
+import { SingularLoopError } from "@shared/reduce/dense";
+import type { SignalFlowGraph } from "@shared/reduce/graph";
+import { printReduction } from "@shared/reduce/printReduction";
+import { reducePairs } from "@shared/reduce/reduce";
+import type { ReductionResult } from "@shared/reduce/result";
+import type { TraceStep } from "@shared/reduce/trace";
+
+export interface ReduceOptions {
+  /** Only pairs with this input block. */
+  input?: string;
+  /** Only pairs with this output block. */
+  output?: string;
+  /** Work limits (defaults: 2,000,000 new edges, 30 s). */
+  limits?: { maxEdges?: number; timeLimitMs?: number };
+}
+
+/** One (input, output) pair's closed-loop transfer, exact. */
+export interface ExactTransfer {
+  input: string;
+  output: string;
+  gain: RatFn;
+  cancelled: ExactCancellation[];
+}
+
+/** What the reducer hands the next stages: exact values only; printing is printReduction's job. */
+export interface ExactReduction {
+  diagram: ParsedDiagram;
+  /** The exact gain of every block that scales its input. */
+  gains: ReadonlyMap<string, RatFn>;
+  /** The signal-flow graph of the whole diagram, untouched by the reduction (the analysis cuts it at a break). */
+  graph: SignalFlowGraph<RatFn>;
+  transfers: ExactTransfer[];
+  /** χ(s) = Δ(s) · Π block denominators, nothing cancelled. */
+  characteristic: Poly;
+  steps: TraceStep<RatFn>[];
+  warnings: Problem[];
+}
+
+export type ExactOutcome = { ok: true; reduction: ExactReduction } | { ok: false; problems: Problem[] };
+
+export type ReduceOutcome =
+  | { ok: true; doc: DiagramDocument; result: ReductionResult }
+  | { ok: false; problems: Problem[] };
+
+const isError = (p: Problem) => p.severity === "error";
+
+/**
+ * The reducer's entry: a parsed diagram to its exact closed-loop transfers. Checks each loop is well-posed,
+ * reduces every (input, output) pair with its trace, and forms the characteristic polynomial and each pair's
+ * cancelled modes. Never throws for a valid but unreducible diagram: every failure is a Problem with a code.
+ * Improper blocks (deg num > deg den, e.g. a PD controller "K*(s+1)") are reduced like any other; a loop whose
+ * return difference vanishes as s → ∞ is refused ("improper-loop") only when all its blocks are proper.
+ * Example: reduceDiagram(parsed).reduction.transfers[0].gain is K·(s + 2)/(s² + …) for the spindle loop.
+ */
+export function reduceDiagram(diagram: ParsedDiagram, opts: ReduceOptions = {}): ExactOutcome {
+  const { doc } = diagram;
+  const selection = selectPairs(doc, opts);
+  const found = [...diagram.warnings, ...selection.problems];
+  if (found.some(isError)) return { ok: false, problems: found };
+  try {
+    const { gains, problems: gainProblems } = blockGains(doc, diagram.expressions);
+    if (gainProblems.length > 0) return { ok: false, problems: [...found, ...gainProblems] };
+    return reduceChecked(diagram, gains, selection.pairs, found, opts);
+  } catch (err) {
+    const problem = reductionProblem(err);
+    if (!problem) throw err;
+    return { ok: false, problems: [...found, problem] };
+  }
+}
+
+/**
+ * Untrusted input to the published result in one call (parse, reduce, print): for the CLI, the server's
+ * save check and the editor's results. Example: reduceDocument(json).result.transfers[0].numerator === "K*s + 2*K".
+ */
+export function reduceDocument(raw: unknown, opts: ReduceOptions = {}): ReduceOutcome {
+  const parsed = parseDiagram(raw);
+  if (!parsed.ok) {
+    // Name a wrong pair id together with the validation problems, as one answer.
+    const pairProblems = parsed.doc ? selectPairs(parsed.doc, opts).problems : [];
+    return { ok: false, problems: [...parsed.problems, ...pairProblems] };
+  }
+  const reduced = reduceDiagram(parsed.diagram, opts);
+  return reduced.ok ? { ok: true, doc: parsed.diagram.doc, result: printReduction(reduced.reduction) } : reduced;
+}
+
+function reduceChecked(
+  diagram: ParsedDiagram,
+  gains: Map<string, RatFn>,
+  pairs: [string, string][],
+  found: Problem[],
+  opts: ReduceOptions,
+): ExactOutcome {
+  const { doc } = diagram;
+  const graph = buildSignalGraph(doc, gains, ratField);
+  const budget = createBudget(opts.limits);
+  let reduced: ReturnType<typeof reducePairs<RatFn>>;
+  try {
+    reduced = reducePairs(graph, ratField, pairs, budget, { determinant: true, weigh: weighRat });
+  } catch (err) {
+    // A singular loop on a pair's paths: name it through the loop-by-loop check.
+    const named = err instanceof SingularLoopError ? checkLoops(graph, gains, undefined, budget).problems : [];
+    if (named.some(isError)) return { ok: false, problems: [...found, ...named] };
+    throw err;
+  }
+  const { transfers, steps } = reduced;
+  const first = transfers.find((t) => t.pivots !== null);
+  const check = checkLoops(graph, gains, first, budget);
+  const loopIssues = check.problems;
+  if (loopIssues.some(isError)) return { ok: false, problems: [...found, ...loopIssues] };
+  const chi = characteristicPolynomial(check, gains, first);
+  if (polyDegree(chi) > DEGREE_LIMIT) {
+    throw new AlgebraError("degree-limit", `The characteristic polynomial has degree ${polyDegree(chi)} in s; the limit is ${DEGREE_LIMIT}.`);
+  }
+  const nominal = Object.fromEntries(Object.entries(doc.parameters).map(([k, v]) => [k, parameterValue(v)]));
+  const cache = new Map<string, ExactCancellation[]>();
+  return {
+    ok: true,
+    reduction: {
+      diagram,
+      gains,
+      graph,
+      transfers: transfers.map(({ input, output, gain }) => ({ input, output, gain, cancelled: cancelledModes(chi, gain, nominal, cache) })),
+      characteristic: chi,
+      steps,
+      warnings: [...found, ...loopIssues],
+    },
+  };
+}
+
+/** The Problem for an error the reducer raises on a valid but unreducible diagram; null for bugs. */
+export function reductionProblem(err: unknown): Problem | null {
+  if (err instanceof AlgebraError) {
+    return { severity: "error", code: err.code, message: err.message };
+  }
+  if (err instanceof ReductionLimitError) return { severity: "error", code: err.code, message: err.message };
+  if (err instanceof SingularLoopError) {
+    return {
+      severity: "error",
+      code: "algebraic-loop",
+      blockId: err.nodes[0],
+      related: err.nodes,
+      message: `Algebraic loop through ${listBlocks(err.nodes)}: the loop equations have no unique solution. Change a gain or sign in the loop, or add dynamics to it.`,
+    };
+  }
+  return null;
+}
