@@ -8,7 +8,9 @@ import { sqrtRational, surdField } from "@shared/analysis/surd";
 import { upDeg, upDivMod, upFromPoly, upText, type UPoly } from "@shared/analysis/upoly";
 import { nEqualFraction, nPartialFractions, type Fraction } from "../../support/nerdamer";
 
-// Reference: nerdamer 1.1.13 (in-process CAS), partfrac over Q, compared term by term by meaning.
+// Reference: nerdamer 1.1.13 (in-process CAS), partfrac over Q, compared term by term by meaning. Its partfrac
+// returns a wrong value when a quadratic factor has fractional coefficients beside a fractional pole (it gives
+// (s - 2)/D for (s + 2)/D with D = (s + 1/2)(s^2 + s/2 + 1)), so these cases keep to integer quadratics.
 
 /** Our partial fractions of a linear factor: A_j/(s − ρ)^j. */
 function linearTerms(rem: UPoly, cofactor: UPoly, f: Factor): Fraction[] {
@@ -54,7 +56,6 @@ describe("poleCoefficients against nerdamer's partfrac (reference: nerdamer 1.1.
     ["1", "s*(s^2 + 2*s + 5)"],
     ["3*s + 2", "(s + 1)*(s^2 + 2*s + 5)"],
     ["1", "s^2 + 3*s + 1"],
-    ["2*s + 1", "(s + 0.5)*(s^2 + 0.5*s + 1)"],
   ];
   it.each(table)("(%s)/(%s)", (n, d) => {
     const r = parseTransfer(n, d, []);
