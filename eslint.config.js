@@ -51,12 +51,12 @@ const clientPackages = [
 ];
 
 const sharedFence = {
-  because: "shared/ is pure TypeScript for the client and the server alike: it imports only zod, mathjs/number, nerdamer and shared/.",
+  because: "shared/ is pure TypeScript for both sides: it imports only zod, mathjs/number, nerdamer and shared/.",
   allowPackages: ["zod", "mathjs/number", "nerdamer"],
   allowFolders: ["shared"],
 };
 const clientFence = {
-  because: "src/ runs in the browser: it imports src/, shared/ and client packages, never server/, test code or a Node-only package.",
+  because: "src/ runs in the browser: it imports src/, shared/ and client packages, not server/, tests or Node.",
   denyPackages: nodeOnlyPackages,
   allowFolders: ["src", "shared"],
 };
@@ -70,7 +70,7 @@ const features = readdirSync(new URL("./src/features/", import.meta.url), { with
   .filter((entry) => entry.isDirectory())
   .map((entry) => entry.name);
 const featureFence = (feature) => ({
-  because: `src/features/${feature} may not import another feature: share code through src/lib, src/components or shared/.`,
+  because: `src/features/${feature} imports no other feature: share through src/lib, src/components or shared/.`,
   denyFolders: features.filter((other) => other !== feature).map((other) => `src/features/${other}`),
 });
 
@@ -94,7 +94,7 @@ const hostGlobals = [
   "__filename",
   "setImmediate",
 ];
-const hostMessage = "shared/ runs in the browser, its workers and Node alike: take what the host provides as an argument.";
+const hostMessage = "shared/ runs in the browser, its workers and Node alike: pass in what the host provides.";
 
 export default tseslint.config(
   { ignores: ["dist/**", "node_modules/**", ".data/**", "test-results/**", "playwright-report/**"] },

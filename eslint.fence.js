@@ -10,24 +10,28 @@ import ts from "typescript";
 const root = dirname(fileURLToPath(import.meta.url));
 const { compilerOptions } = ts.readConfigFile(resolve(root, "tsconfig.json"), ts.sys.readFile).config;
 const baseUrl = compilerOptions.baseUrl === undefined ? null : resolve(root, compilerOptions.baseUrl);
-// "@shared/*": ["shared/*"] becomes ["@shared/", <root>/shared/].
-const aliases = Object.entries(compilerOptions.paths ?? {}).map(([alias, [target]]) => [
-  alias.replace(/\*$/, ""),
-  resolve(baseUrl ?? root, target.replace(/\*$/, "")),
-]);
+// "@shared/*": ["shared/*"] becomes ["@shared/", <root>/shared/]; the longest prefix wins, as in the compiler.
+const aliases = Object.entries(compilerOptions.paths ?? {})
+  .map(([alias, [target]]) => [alias.replace(/\*$/, ""), resolve(baseUrl ?? root, target.replace(/\*$/, ""))])
+  .sort(([a], [b]) => b.length - a.length);
 const topFolders = new Set(readdirSync(baseUrl ?? root).filter((name) => name !== "node_modules"));
 
-/** A pattern covers a name, its subpaths ("sequelize" covers "sequelize/lib/model") or, ending in *, every name it starts. */
+/** A pattern covers a name and its subpaths ("sequelize" covers "sequelize/lib/model"); "pg-*" covers "pg-boss". */
 const covers = (pattern, name) =>
   pattern.endsWith("*") ? name.startsWith(pattern.slice(0, -1)) : name === pattern || name.startsWith(`${pattern}/`);
 
+/** The file a specifier points to, as the compiler resolves it, or null when it names a package. */
+function targetOf(specifier, filename) {
+  if (/^\.\.?(\/|$)/.test(specifier)) return resolve(dirname(filename), specifier);
+  const alias = aliases.find(([prefix]) => specifier.startsWith(prefix));
+  if (alias) return resolve(alias[1], specifier.slice(alias[0].length));
+  if (baseUrl && topFolders.has(specifier.split("/")[0])) return resolve(baseUrl, specifier);
+  return null;
+}
+
 /** The repository path ("src/features/teams/api") a specifier points to, or null when it names a package. */
 function folderOf(specifier, filename) {
-  let target = null;
-  if (specifier === "." || specifier === ".." || /^\.\.?\//.test(specifier)) target = resolve(dirname(filename), specifier);
-  const alias = aliases.find(([prefix]) => specifier.startsWith(prefix));
-  if (!target && alias) target = resolve(alias[1], specifier.slice(alias[0].length));
-  if (!target && baseUrl && topFolders.has(specifier.split("/")[0])) target = resolve(baseUrl, specifier);
+  const target = targetOf(specifier, filename);
   return target && relative(root, target);
 }
 
@@ -64,9 +68,9 @@ const imports = {
       if (typeof source?.value !== "string") return;
       const specifier = source.value.split("?")[0];
       const folder = folderOf(specifier, context.filename);
-      const fence = context.options.find((f) =>
-        folder === null ? refuses(specifier, f.allowPackages, f.denyPackages) : refuses(folder, f.allowFolders, f.denyFolders),
-      );
+      const [name, allow, deny] =
+        folder === null ? [specifier, "allowPackages", "denyPackages"] : [folder, "allowFolders", "denyFolders"];
+      const fence = context.options.find((f) => refuses(name, f[allow], f[deny]));
       if (!fence) return;
       const messageId = folder === null ? "package" : "folder";
       context.report({ node: source, messageId, data: { specifier: source.value, folder, because: fence.because } });
