@@ -1,5 +1,5 @@
-import { mkdirSync, rmSync, writeFileSync } from "node:fs";
-import { dirname, join } from "node:path";
+import { rmSync, writeFileSync } from "node:fs";
+import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { ESLint } from "eslint";
 import ts from "typescript";
@@ -15,7 +15,6 @@ const written: string[] = [];
 
 function scratch(file: string, code: string): string {
   const at = join(root, file);
-  mkdirSync(dirname(at), { recursive: true });
   writeFileSync(at, `${code}\n`);
   written.push(at);
   return at;
