@@ -11,10 +11,11 @@ export interface ChannelSpec<P, M> {
 }
 
 /**
- * One warm worker and its queue of length one: while it works only the newest payload waits.
+ * One warm worker and its queue of length one: while it works only the newest payload waits. A request may
+ * be answered in several messages; the one marked `final` ends it.
  * Starting a worker costs a second or more (loading the engine), so it is restarted only for a runaway.
  */
-export class WorkerChannel<P, M, R extends { seq: number }> {
+export class WorkerChannel<P, M, R extends { seq: number; final: boolean }> {
   private worker: Worker | null = null;
   private seq = 0;
   private inFlight: { seq: number; payload: P; at: number } | null = null;
@@ -62,6 +63,7 @@ export class WorkerChannel<P, M, R extends { seq: number }> {
     w.onmessage = (e: MessageEvent<R>) => {
       if (!this.inFlight || e.data.seq !== this.inFlight.seq) return;
       const { payload } = this.inFlight;
+      if (!e.data.final) return this.onResult({ reply: e.data, payload, waiting: this.waiting !== null });
       this.inFlight = null;
       const next = this.waiting;
       this.onResult({ reply: e.data, payload, waiting: next !== null });
