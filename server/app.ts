@@ -12,7 +12,7 @@ import { invitationLinkRouter, teamInvitationsRouter } from "@server/features/in
 import { systemRouter } from "@server/features/system/router";
 import { teamsRouter } from "@server/features/teams/router";
 import { versionsRouter } from "@server/features/versions/router";
-import type { EngineBudget } from "@server/engine/checkDocument";
+import type { EngineBudget } from "@server/features/versions/check";
 import { clientPages } from "@server/http/clientPages";
 import { originCheck } from "@server/http/csrf";
 import { errorHandler, unknownApiRoute } from "@server/http/errors";

@@ -4,7 +4,7 @@ import { createApp } from "@server/app";
 import { createLucia } from "@server/auth/lucia";
 import { loadConfig } from "@server/config";
 import { createSequelize } from "@server/db/sequelize";
-import { warmEngine } from "@server/engine/checkDocument";
+import { warmEngine } from "@server/features/versions/check";
 import { setUpMail } from "@server/mail/setUpMail";
 
 // Starts the server: database pools, mail (real SMTP, or the local fake), HTTP. SIGINT/SIGTERM close everything.

@@ -1,6 +1,6 @@
 import { Router } from "express";
 import { saveVersionSchema } from "@shared/api/versions";
-import type { EngineBudget } from "@server/engine/checkDocument";
+import type { EngineBudget } from "@server/features/versions/check";
 import { diagramWithRole } from "@server/features/diagrams/access";
 import { requireUser } from "@server/http/session";
 import { parseWith } from "@server/http/validate";

@@ -3,7 +3,7 @@ import type { CheckedResult, VersionListItem } from "@shared/api/versions";
 import { loadDiagram } from "@shared/diagram/validate";
 import { Diagram, DiagramVersion } from "@server/db/models/diagram";
 import { User } from "@server/db/models/user";
-import { checkDocument, type EngineBudget } from "@server/engine/checkDocument";
+import { checkDocument, type EngineBudget } from "@server/features/versions/check";
 import { HttpError, notFound } from "@server/http/errors";
 
 type WithAuthor = DiagramVersion & { author?: User };

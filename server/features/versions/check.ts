@@ -2,7 +2,7 @@ import { Worker } from "node:worker_threads";
 import type { CheckedResult } from "@shared/api/versions";
 import type { Problem } from "@shared/diagram/problems";
 import { HttpError } from "@server/http/errors";
-import type { EngineJob, EngineReply } from "@server/engine/engineWorker";
+import type { EngineJob, EngineReply } from "@server/features/versions/checkWorker";
 
 export interface EngineBudget {
   timeMs: number;
@@ -21,7 +21,7 @@ let running = 0;
 let nextId = 1;
 
 function spawnWorker(memoryMb: number): Promise<Worker> {
-  const worker = new Worker(new URL("./engineWorkerEntry.mjs", import.meta.url), {
+  const worker = new Worker(new URL("./checkWorkerEntry.mjs", import.meta.url), {
     resourceLimits: { maxOldGenerationSizeMb: memoryMb },
   });
   worker.unref(); // an idle engine worker never keeps the process alive
