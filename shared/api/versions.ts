@@ -28,6 +28,7 @@ export const CHECK_CRASHED = "check-crashed";
  * What the server stores in `diagram_versions.result` after re-running the reducer on the saved document:
  * its result, the diagram's problems, or — when the check itself did not finish — why: over the server's time or
  * memory budget, or crashed (a server bug, logged with its stack), with one problem saying so.
+ * `engineMs` (the check's duration) keeps its first name: versions already stored carry it.
  * Example: { ok: false, failure: "crashed", problems: [{ code: "check-crashed", … }], engineMs: 3.1 }.
  */
 export type CheckedResult =
