@@ -12,7 +12,7 @@ import { invitationLinkRouter, teamInvitationsRouter } from "@server/features/in
 import { systemRouter } from "@server/features/system/router";
 import { teamsRouter } from "@server/features/teams/router";
 import { versionsRouter } from "@server/features/versions/router";
-import type { EngineBudget } from "@server/engine/checkDocument";
+import { createSaveCheck, type SaveCheck } from "@server/features/versions/check";
 import { clientPages } from "@server/http/clientPages";
 import { originCheck } from "@server/http/csrf";
 import { errorHandler, unknownApiRoute } from "@server/http/errors";
@@ -30,8 +30,8 @@ export interface AppDeps {
   mailer: Mailer;
   mailbox: FakeMailService | null;
   log: Logger;
-  /** Time, memory and concurrency budget of the engine check on save (defaults in checkDocument). */
-  engineBudget?: EngineBudget;
+  /** The check of versions on save; by default one with the default budget (createSaveCheck). */
+  saveCheck?: SaveCheck;
 }
 
 /** The HTTP application: /api/*, the dev mailbox while the fake mail service runs, and the built client. */
@@ -60,7 +60,7 @@ export function createApp(deps: AppDeps): Express {
   api.use("/auth", authRouter(deps.lucia, limiter));
   api.use("/teams", teamsRouter(), teamInvitationsRouter({ mailer: deps.mailer, publicUrl: config.publicUrl }, limiter), teamDiagramsRouter());
   api.use("/invitations", invitationLinkRouter(limiter));
-  api.use("/diagrams", diagramsRouter(), versionsRouter(deps.engineBudget));
+  api.use("/diagrams", diagramsRouter(), versionsRouter(deps.saveCheck ?? createSaveCheck({ log })));
   api.use(unknownApiRoute);
   app.use("/api", api);
 

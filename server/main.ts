@@ -4,7 +4,7 @@ import { createApp } from "@server/app";
 import { createLucia } from "@server/auth/lucia";
 import { loadConfig } from "@server/config";
 import { createSequelize } from "@server/db/sequelize";
-import { warmEngine } from "@server/engine/checkDocument";
+import { createSaveCheck } from "@server/features/versions/check";
 import { setUpMail } from "@server/mail/setUpMail";
 
 // Starts the server: database pools, mail (real SMTP, or the local fake), HTTP. SIGINT/SIGTERM close everything.
@@ -22,6 +22,7 @@ const { mailer, mailbox } = await setUpMail(config).catch((e: Error) => {
 });
 if (mailbox) log.info(`Fake mail service on 127.0.0.1:${mailbox.port}; messages at ${config.publicUrl}/dev/mailbox`);
 
+const saveCheck = createSaveCheck({ log });
 const app = createApp({
   config,
   sequelize,
@@ -29,11 +30,12 @@ const app = createApp({
   mailer,
   mailbox,
   log,
+  saveCheck,
 });
 
 const server = app.listen(config.port, "0.0.0.0", () => {
   log.info(`Loopwright listening on ${config.publicUrl}`);
-  warmEngine().catch((e: Error) => log.warn(`Engine worker did not start ahead of time: ${e.message}`));
+  saveCheck.warm().catch((e: Error) => log.warn(`The save check's worker did not start ahead of time: ${e.message}`));
 });
 server.on("error", (e) => {
   log.fatal(`Cannot listen on port ${config.port}: ${e.message}`);

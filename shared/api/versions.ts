@@ -1,4 +1,5 @@
 import { z } from "zod";
+import type { DiagramDocument } from "@shared/diagram/schema";
 import type { Problem } from "@shared/diagram/problems";
 import type { ReductionResult } from "@shared/reduce/result";
 import type { DiagramVersionView } from "@shared/api/diagrams";
@@ -12,15 +13,28 @@ export const saveVersionSchema = z.object({
   /** The latest version number the editor loaded; 0 when the diagram had none. */
   baseVersion: z.number().int().min(0),
   message: z.string().trim().max(500, "Use at most 500 characters").default(""),
-  /** Checked on the server against the diagram document schema (422 with problems when it fails). */
+  /** Read with `loadDiagram` at the route's edge, whose problems name the field and block (422 `invalid_document`). */
   document: z.unknown(),
 });
 export type SaveVersionInput = z.input<typeof saveVersionSchema>;
+/** A save request once read at the edge: its document is a diagram document. */
+export type SaveVersion = Omit<z.output<typeof saveVersionSchema>, "document"> & { document: DiagramDocument };
 
-/** What the server stores in `diagram_versions.result` after re-running the engine on the saved document. */
+/** Problem codes of a save-time check that did not finish; the version is stored all the same. */
+export const CHECK_BUDGET = "check-budget";
+export const CHECK_CRASHED = "check-crashed";
+
+/**
+ * What the server stores in `diagram_versions.result` after re-running the reducer on the saved document:
+ * its result, the diagram's problems, or — when the check itself did not finish — why: over the server's time or
+ * memory budget, or crashed (a server bug, logged with its stack), with one problem saying so.
+ * `engineMs` (the check's duration) keeps its first name: versions already stored carry it.
+ * Example: { ok: false, failure: "crashed", problems: [{ code: "check-crashed", … }], engineMs: 3.1 }.
+ */
 export type CheckedResult =
   | { ok: true; result: ReductionResult; engineMs: number }
-  | { ok: false; problems: Problem[]; engineMs: number };
+  | { ok: false; problems: Problem[]; engineMs: number }
+  | { ok: false; failure: "over-budget" | "crashed"; problems: [Problem]; engineMs: number };
 
 /** 409 body: the error plus the version that won, so the editor can offer to reload or save as a new diagram. */
 export interface StaleVersionBody {
@@ -39,5 +53,5 @@ export interface VersionListItem {
   message: string;
   createdAt: string;
   createdBy: string;
-  ok: boolean | null; // engine verdict of the stored result; null when never checked
+  ok: boolean | null; // the check's verdict of the stored result; null when never checked
 }

@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { CheckedResult } from "@shared/api/versions";
 import { createApp } from "@server/app";
 import { ladderDiagram } from "@server/bench/diagrams";
+import { createSaveCheck } from "@server/features/versions/check";
 import { invitationToken, PASSWORD, signedUp, startTestApp, uniqueEmail, type TestApp } from "./support/harness";
 
 // Unity negative feedback around K/(s(s+2)): T = K/(s^2 + 2s + K) (from memory: Ogata, Modern Control Engineering,
@@ -39,7 +40,7 @@ beforeAll(async () => {
 afterAll(() => t.close());
 
 describe("saving versions", () => {
-  it("stores version 1 with the engine's checked result and keeps unknown fields", async () => {
+  it("stores version 1 with the check's result and keeps unknown fields", async () => {
     const res = await owner.client.post(`/api/diagrams/${diagramId}/versions`).send({ baseVersion: 0, message: "first", document: servo });
     expect(res.status).toBe(201);
     expect(res.body.version).toMatchObject({ number: 1, message: "first", createdBy: "vera" });
@@ -86,6 +87,14 @@ describe("saving versions", () => {
     expect(res.body.problems[0].code).toBe("unsupported-version");
   });
 
+  it("refuses a malformed block with 422 naming the block and the field, before looking at the base version", async () => {
+    const blocks = servo.blocks.map((b) => (b.id === "e" ? { ...b, signs: ["+", "*"] } : b));
+    const res = await owner.client.post(`/api/diagrams/${diagramId}/versions`).send({ baseVersion: 99, document: { ...servo, blocks } });
+    expect(res.status).toBe(422);
+    expect(res.body.error.code).toBe("invalid_document");
+    expect(res.body.problems).toEqual([expect.objectContaining({ code: "invalid-field", blockId: "e", field: "signs[1]" })]);
+  });
+
   it("keeps an unfinished diagram, with its problems naming the block as the result", async () => {
     const d = (await owner.client.post(`/api/teams/${teamId}/diagrams`).send({ title: "Unfinished" })).body.diagram.id;
     const unfinished = { ...servo, wires: servo.wires.slice(0, 3) }; // the sum's minus port is unwired
@@ -108,8 +117,9 @@ describe("saving versions", () => {
     expect((await viewer.get(`/api/diagrams/${diagramId}/versions/999`)).status).toBe(404);
   });
 
-  it("stops the engine at the server's time budget and says so", async () => {
-    const tight = createApp({ ...appDepsOf(t), engineBudget: { timeMs: 1, memoryMb: 256, concurrency: 2 } });
+  it("stops the check at the server's time budget and says so", async () => {
+    const deps = appDepsOf(t);
+    const tight = createApp({ ...deps, saveCheck: createSaveCheck({ log: deps.log, budget: { timeMs: 1, memoryMb: 256, concurrency: 2 } }) });
     const { default: request } = await import("supertest");
     const client = request.agent(tight).set("Origin", "http://loopwright.test");
     await client.post("/api/auth/sign-in").send({ email: owner.user.email, password: PASSWORD }).expect(200);

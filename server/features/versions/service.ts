@@ -1,9 +1,8 @@
 import type { DiagramVersionView } from "@shared/api/diagrams";
-import type { CheckedResult, VersionListItem } from "@shared/api/versions";
-import { loadDiagram } from "@shared/diagram/validate";
+import type { CheckedResult, SaveVersion, VersionListItem } from "@shared/api/versions";
 import { Diagram, DiagramVersion } from "@server/db/models/diagram";
 import { User } from "@server/db/models/user";
-import { checkDocument, type EngineBudget } from "@server/engine/checkDocument";
+import type { SaveCheck } from "@server/features/versions/check";
 import { HttpError, notFound } from "@server/http/errors";
 
 type WithAuthor = DiagramVersion & { author?: User };
@@ -36,28 +35,20 @@ async function staleUnless(diagramId: string, baseVersion: number, current: numb
 }
 
 /**
- * Stores version n+1 of a diagram: the document must be a Loopwright document (422 otherwise), the editor's base
- * version must still be the latest (409 with the winner otherwise), and the engine re-checks it in a worker.
- * Documents with diagram problems are kept, with those problems as their result, so unfinished work is never lost.
+ * Stores version n+1 of a diagram: the editor's base version must still be the latest (409 with the winner
+ * otherwise), and the save-time check re-runs the reducer on it in a worker. Documents with diagram problems, or
+ * whose check did not finish, are kept with that as their result, so unfinished work is never lost.
  */
-export async function saveVersion(
-  diagram: Diagram,
-  userId: string,
-  input: { baseVersion: number; message: string; document: unknown },
-  budget?: EngineBudget,
-): Promise<DiagramVersionView> {
-  const loaded = loadDiagram(input.document);
-  if (!loaded.doc)
-    throw new HttpError(422, "invalid_document", "This is not a Loopwright diagram document.", undefined, { problems: loaded.problems });
+export async function saveVersion(diagram: Diagram, userId: string, input: SaveVersion, check: SaveCheck): Promise<DiagramVersionView> {
   await staleUnless(diagram.id, input.baseVersion, (await latest(diagram.id))?.number ?? 0);
-  const checked: CheckedResult = await checkDocument(input.document, budget);
+  const checked: CheckedResult = await check.run(input.document, { diagramId: diagram.id });
   const saved = await DiagramVersion.sequelize!.transaction(async (transaction) => {
     // The row lock serialises concurrent saves of one diagram: exactly one of them wins each number.
     await Diagram.findByPk(diagram.id, { lock: transaction.LOCK.UPDATE, transaction });
     const current = ((await DiagramVersion.max("number", { where: { diagramId: diagram.id }, transaction })) as number | null) ?? 0;
     await staleUnless(diagram.id, input.baseVersion, current);
     const v = await DiagramVersion.create(
-      { diagramId: diagram.id, number: current + 1, document: loaded.doc, result: checked, message: input.message, createdBy: userId },
+      { diagramId: diagram.id, number: current + 1, document: input.document, result: checked, message: input.message, createdBy: userId },
       { transaction },
     );
     diagram.changed("updatedAt", true);

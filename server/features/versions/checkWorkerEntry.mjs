@@ -2,4 +2,4 @@
 // register it here, then load the TypeScript worker.
 import { tsImport } from "tsx/esm/api";
 
-await tsImport("./engineWorker.ts", import.meta.url);
+await tsImport("./checkWorker.ts", import.meta.url);
