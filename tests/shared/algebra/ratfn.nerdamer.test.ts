@@ -3,7 +3,7 @@ import { describe, expect, it } from "vitest";
 import { polyGcd, polyIsZero, polyMul, type Poly } from "@shared/algebra/poly";
 import { polyToText } from "@shared/algebra/polytext";
 import { ratDenominator, ratFromExpr, ratNumerator, ratReduceTracked } from "@shared/algebra/ratfn";
-import { parseTransfer } from "@shared/analysis/nominal";
+import { parseTransfer } from "../../support/parseTransfer";
 import type { ExprNode } from "@shared/expr/ast";
 import {
   exprNerdamer, nAssociates, nCancel, nDegree, nEqual, nEqualFraction, nExpand, nGcd, type Fraction,

@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { q, qMul, qNeg, qSub, qToString } from "@shared/algebra/rational";
 import { ratDenominator, ratNumerator } from "@shared/algebra/ratfn";
 import { exactFactors, type Factor } from "@shared/analysis/factors";
-import { parseTransfer } from "@shared/analysis/nominal";
+import { parseTransfer } from "../../support/parseTransfer";
 import { poleCoefficients } from "@shared/analysis/residues";
 import { sqrtRational, surdField } from "@shared/analysis/surd";
 import { upDeg, upDivMod, upFromPoly, upText, type UPoly } from "@shared/analysis/upoly";

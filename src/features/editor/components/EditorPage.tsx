@@ -11,7 +11,7 @@ import { editorDiagramQuery, useEditorDiagram } from "@/features/editor/api/getE
 import { emptyDocument, withWireIds } from "@/features/editor/commands/document";
 import type { EditorDoc } from "@/features/editor/commands/types";
 import { EditorSession } from "@/features/editor/components/EditorSession";
-import { warmReduceWorker } from "@/features/editor/hooks/useLiveResult";
+import { warmLiveWorker } from "@/features/editor/hooks/useLiveDiagram";
 import { href } from "@/lib/paths";
 
 type Opened = { ok: true; doc: EditorDoc; baseVersion: number } | { ok: false; problems: Problem[]; baseVersion: number };
@@ -32,7 +32,7 @@ export function EditorPage({ id }: { id: string }) {
   // A session lives until the user reloads on purpose; background refetches only feed the "newer version" notice.
   const [session, setSession] = useState<{ key: number; opened: Opened } | null>(null);
   // The engine loads in its worker while the diagram is fetched, not after the canvas has rendered.
-  useEffect(warmReduceWorker, []);
+  useEffect(warmLiveWorker, []);
 
   if (detail.isPending) return <Loading label="Loading the diagram…" />;
   if (detail.isError) return <LoadError what="this diagram" error={detail.error} onRetry={() => detail.refetch()} />;

@@ -24,12 +24,11 @@ import { useDraft } from "@/features/editor/hooks/useDraft";
 import { useEditorHistory } from "@/features/editor/hooks/useEditorHistory";
 import { useFitBox } from "@/features/editor/hooks/useFitBox";
 import { useFlowState } from "@/features/editor/hooks/useFlowState";
-import { useLiveAnalysis, type AnalysisSettings } from "@/features/editor/hooks/useLiveAnalysis";
-import { useLiveResult } from "@/features/editor/hooks/useLiveResult";
+import { useLiveDiagram, type AnalysisSettings } from "@/features/editor/hooks/useLiveDiagram";
 import { useSaveFlow } from "@/features/editor/hooks/useSaveFlow";
 import { useUnsavedGuard } from "@/features/editor/hooks/useUnsavedGuard";
 import { problemMarks, stepFootprint } from "@/features/editor/lib/marks";
-import { resultView } from "@/features/editor/lib/resultView";
+import { pairKey, resultView } from "@/features/editor/lib/resultView";
 
 // The analysis views carry the charting library: a chunk of their own, loaded after the canvas.
 const AnalysisPanel = lazy(() => import("@/features/editor/components/analysis/AnalysisPanel").then((m) => ({ default: m.AnalysisPanel })));
@@ -59,20 +58,23 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
   const pointer = useRef<Point | null>(null);
   const clearNotice = useCallback(() => setNotice(null), []);
 
-  const live = useLiveResult(doc);
-  const [pair, setPair] = useState<string | null>(null);
-  const view = useMemo(() => resultView(live.outcome, pair), [live.outcome, pair]);
-  const [stepAt, setStepAt] = useState<number | null>(null);
-  const step = stepAt === null ? null : (view.steps[stepAt] ?? null);
-  const footprint = useMemo(() => (step && stepAt !== null ? stepFootprint(view.steps, stepAt) : null), [step, stepAt, view.steps]);
+  // The pair the user chose; none: the first input and output, which is also the results panel's default.
+  const [pair, setPair] = useState<{ input: string; output: string } | null>(null);
   // Slider values, band, swept parameter and break live here, not in the document: analysing never dirties it.
   const [analysisSettings, setAnalysisSettings] = useState<AnalysisSettings>({ values: {}, band: 0.02, sweepParameter: null, sweepShown: false, break: null });
   const changeAnalysis = useCallback((change: Partial<AnalysisSettings>) => setAnalysisSettings((s) => ({ ...s, ...change })), []);
-  const analysis = useLiveAnalysis(
-    doc,
-    { ...analysisSettings, input: view.transfer?.input ?? null, output: view.transfer?.output ?? null },
-    live.outcome !== null || live.crash !== null,
+  const { result: live, analysis } = useLiveDiagram(doc, { ...analysisSettings, input: pair?.input ?? null, output: pair?.output ?? null });
+  const view = useMemo(() => resultView(live.outcome, pair && pairKey(pair)), [live.outcome, pair]);
+  const choosePair = useCallback(
+    (key: string) => {
+      const t = view.transfers.find((x) => pairKey(x) === key);
+      setPair(t ? { input: t.input, output: t.output } : null);
+    },
+    [view.transfers],
   );
+  const [stepAt, setStepAt] = useState<number | null>(null);
+  const step = stepAt === null ? null : (view.steps[stepAt] ?? null);
+  const footprint = useMemo(() => (step && stepAt !== null ? stepFootprint(view.steps, stepAt) : null), [step, stepAt, view.steps]);
   const usedBreak = analysis.result?.breakWire ?? null;
   const marks = useMemo(() => problemMarks(view.problems, footprint, usedBreak?.id ?? null), [view.problems, footprint, usedBreak?.id]);
 
@@ -224,7 +226,7 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
       </div>
       <div className="mt-4 grid gap-4 lg:grid-cols-3">
         <Panel title="Closed-loop result">
-          <ResultsPanel live={live} view={view} stale={live.doc !== doc} onPair={setPair} />
+          <ResultsPanel live={live} view={view} stale={live.doc !== doc} onPair={choosePair} />
         </Panel>
         <Panel title="Reduction steps">
           <StepThrough steps={view.steps} current={step ? stepAt : null} onChange={setStepAt} />

@@ -1,5 +1,5 @@
 import type { Problem } from "@shared/diagram/problems";
-import type { ReduceOutcome } from "@shared/reduce/reduceDiagram";
+import type { LiveOutcome } from "@/features/editor/worker/liveProtocol";
 import type { ReductionResult, ReductionStep, TransferResult } from "@shared/reduce/result";
 
 export const pairKey = (t: Pick<TransferResult, "input" | "output">) => `${t.input}→${t.output}`;
@@ -15,7 +15,7 @@ export interface ResultView {
 }
 
 /** What the results panel and the canvas highlight show for an engine outcome and a chosen pair. */
-export function resultView(outcome: ReduceOutcome | null, chosen: string | null): ResultView {
+export function resultView(outcome: LiveOutcome | null, chosen: string | null): ResultView {
   if (!outcome) return { result: null, transfers: [], transfer: null, steps: [], problems: [] };
   if (!outcome.ok) return { result: null, transfers: [], transfer: null, steps: [], problems: outcome.problems };
   const { result } = outcome;

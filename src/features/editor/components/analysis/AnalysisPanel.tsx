@@ -12,7 +12,7 @@ import { SteadyStateView } from "@/features/editor/components/analysis/SteadySta
 import { SweepView } from "@/features/editor/components/analysis/SweepView";
 import { TimeResponseView } from "@/features/editor/components/analysis/TimeResponseView";
 import { ProblemList } from "@/features/editor/components/panels/ProblemList";
-import type { AnalysisSettings, LiveAnalysis } from "@/features/editor/hooks/useLiveAnalysis";
+import type { AnalysisSettings, LiveAnalysis } from "@/features/editor/hooks/useLiveDiagram";
 import { formatNumber, verdictWord } from "@/features/editor/lib/analysisFormat";
 
 interface Props {

@@ -4,7 +4,7 @@ import { Button } from "@/components/Button";
 import { LargeTex } from "@/features/editor/components/LargeTex";
 import { pairKey, type ResultView } from "@/features/editor/lib/resultView";
 import { resultLatex, resultPlainText, transferText } from "@/features/editor/lib/resultText";
-import type { LiveResult } from "@/features/editor/hooks/useLiveResult";
+import type { LiveResult } from "@/features/editor/hooks/useLiveDiagram";
 
 interface Props {
   live: LiveResult;

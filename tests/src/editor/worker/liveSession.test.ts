@@ -1,11 +1,15 @@
 import { describe, expect, it } from "vitest";
 import { analyzeAt } from "@shared/analysis/analyze";
-import { prepareAnalysis } from "@shared/analysis/prepare";
+import { OVERLAY_VALUES } from "@shared/analysis/analyzeDiagram";
 import type { AnalysisAnswer, AnalysisQuery } from "@shared/analysis/answer";
-import { analysisKey, createAnalyzer, OVERLAY_VALUES } from "@/features/editor/worker/analyzeQuery";
+import type { EditorDoc } from "@/features/editor/commands/types";
+import { createLiveSession, reductionKey } from "@/features/editor/worker/liveSession";
+import { prepared } from "../../../support/reduced";
 import { docOf, unityLoop } from "../support";
 
-const query = (document: unknown, over: Partial<AnalysisQuery> = {}): AnalysisQuery => ({
+type Query = AnalysisQuery & { document: EditorDoc };
+
+const query = (document: EditorDoc, over: Partial<AnalysisQuery> = {}): Query => ({
   document,
   input: null,
   output: null,
@@ -17,6 +21,15 @@ const query = (document: unknown, over: Partial<AnalysisQuery> = {}): AnalysisQu
   ...over,
 });
 
+/** One worker session answering requests as live.worker.ts does: reduce the document, then analyse. */
+function createAnalyzer() {
+  const session = createLiveSession();
+  return ({ document, ...q }: Query): AnalysisAnswer => {
+    session.reduce(document);
+    return session.analyze(q);
+  };
+}
+
 function ok(a: AnalysisAnswer) {
   if (!a.ok) throw new Error(a.problems.map((p) => p.message).join("; "));
   return a;
@@ -25,7 +38,7 @@ function ok(a: AnalysisAnswer) {
 /** common practice: standard second-order formula, overshoot = 100·exp(−ζπ/√(1−ζ²)). */
 const overshoot = (zeta: number) => 100 * Math.exp((-zeta * Math.PI) / Math.sqrt(1 - zeta * zeta));
 
-describe("analysis worker's query (unity feedback around K/(s(s+2)): closed loop K/(s² + 2s + K))", () => {
+describe("the editor worker's analysis (unity feedback around K/(s(s+2)): closed loop K/(s² + 2s + K))", () => {
   it("gives the verdict and the second-order overshoot at nominal and at slider values", () => {
     const analyze = createAnalyzer();
     const nominal = ok(analyze(query(unityLoop())));
@@ -55,9 +68,7 @@ describe("analysis worker's query (unity feedback around K/(s(s+2)): closed loop
     const analyze = createAnalyzer();
     ok(analyze(query(doc)));
     const moved = ok(analyze(query(doc, { values: { T: 0.25 } })));
-    const p = prepareAnalysis(doc);
-    if (!p.ok) throw new Error("prepare failed");
-    const full = analyzeAt(p.prepared, { values: { T: 0.25 } });
+    const full = analyzeAt(prepared(doc), { values: { T: 0.25 } });
     expect(moved.analysis.stableSets).toEqual(full.stableSets);
     expect(moved.analysis.conditions).toEqual(full.conditions);
     // common practice: a cubic a3 s³ + a2 s² + a1 s + a0 is stable iff all aᵢ > 0 and a2·a1 > a3·a0; for
@@ -121,21 +132,27 @@ describe("analysis worker's query (unity feedback around K/(s(s+2)): closed loop
   });
 });
 
-describe("analysis cache key", () => {
+describe("one reduction per change of what the result depends on", () => {
   const doc = unityLoop();
-  it("ignores the layout, title and notes, so moving a block reuses the preparation", () => {
-    const moved = { ...doc, title: "Other", notes: "n", layout: { r: { x: 10, y: 20 } } };
-    expect(analysisKey(moved, "r", "y", null)).toBe(analysisKey(doc, "r", "y", null));
+  it("reduces an edit once, and reuses it for moved blocks, a new title and slider moves", () => {
+    const session = createLiveSession();
+    expect(session.reduce(doc).reduced).toBe(true);
+    const first = ok(session.analyze(query(doc)));
+    expect(session.reduce({ ...doc, title: "Other", notes: "n", layout: { r: { x: 10, y: 20 } } }).reduced).toBe(false);
+    expect(ok(session.analyze(query(doc, { values: { K: 16 } }))).analysis.values.K).toBe(16);
+    const edited = unityLoop("K/(s*(s+5))");
+    const after = session.reduce(edited);
+    expect(after.reduced).toBe(true);
+    expect(after.outcome.ok && after.outcome.result.transfers[0].denominator).toBe("s^2 + 5*s + K");
+    // The analysis follows the new reduction: 4/(s² + 5s + 4) has real poles −1, −4 (no overshoot); 4/(s² + 2s + 4) overshoots.
+    expect(first.analysis.step.overshootPercent).toBeGreaterThan(0);
+    expect(ok(session.analyze(query(edited))).analysis.step.overshootPercent).toBeCloseTo(0, 9);
   });
-  it("changes with the blocks, wires, parameter table, pair and break", () => {
-    const base = analysisKey(doc, "r", "y", null);
-    const variants = [
-      analysisKey(unityLoop("K/(s*(s+3))"), "r", "y", null),
-      analysisKey({ ...doc, wires: doc.wires.slice(1) }, "r", "y", null),
-      analysisKey({ ...doc, parameters: { K: 5 } }, "r", "y", null),
-      analysisKey(doc, "r", null, null),
-      analysisKey(doc, "r", "y", "w2"),
-    ];
+  it("keys the reduction on blocks, wires and parameters, not on layout, title or notes", () => {
+    const moved = { ...doc, title: "Other", notes: "n", layout: { r: { x: 10, y: 20 } } };
+    expect(reductionKey(moved)).toBe(reductionKey(doc));
+    const base = reductionKey(doc);
+    const variants = [reductionKey(unityLoop("K/(s*(s+3))")), reductionKey({ ...doc, wires: doc.wires.slice(1) }), reductionKey({ ...doc, parameters: { K: 5 } })];
     for (const v of variants) expect(v).not.toBe(base);
   });
 });
