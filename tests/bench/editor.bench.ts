@@ -1,7 +1,7 @@
 import { chromium, request, type Browser, type BrowserContextOptions, type CDPSession, type Page } from "@playwright/test";
 import type { DiagramDocument } from "@shared/diagram/schema";
-import { ladderDiagram } from "@server/bench/diagrams";
-import { startLiveServer } from "@server/bench/liveServer";
+import { ladderDiagram } from "./diagrams";
+import { startLiveServer } from "./liveServer";
 
 /**
  * Canvas editor benchmark in headless Chromium against the real server and production build: time from
@@ -10,7 +10,7 @@ import { startLiveServer } from "@server/bench/liveServer";
  * is dragged around; then the time to zoom in to about 1:1, where live blocks take over, and the frame rate of a
  * pan there. Prints figures and targets; asserts nothing. Headless Chromium draws in software, so these figures
  * are a floor.
- * Run: BENCH_DATABASE_URL=postgres://… npx tsx server/bench/editor.bench.ts (or `npm run bench editor`).
+ * Run: BENCH_DATABASE_URL=postgres://… npx tsx tests/bench/editor.bench.ts (or `npm run bench editor`).
  */
 const BLOCKS = 500;
 const RUNS = 5;

@@ -11,7 +11,7 @@ import { upFrom } from "@shared/analysis/upoly";
  * Analysis benchmark: the time of one slider update (every result recomputed at new parameter values) for a
  * 10th-order loop — target under 50 ms — with and without the stable ranges, plus the one-off preparation, a
  * root locus and the numeric roots of degree 10, 50 and 100. Prints figures; asserts nothing.
- * Run: npx tsx server/bench/analysis.bench.ts
+ * Run: npx tsx tests/bench/analysis.bench.ts
  */
 const TARGET_MS = 50;
 

@@ -3,9 +3,9 @@
 import { spawn, spawnSync } from "node:child_process";
 import { existsSync, mkdirSync, readFileSync, rmSync } from "node:fs";
 import { join } from "node:path";
-import { ROOT, PORTS, buildClient, step } from "./bootstrap.mjs";
+import { ROOT, PORTS, bin, step } from "./common.mjs";
+import { buildClient } from "./build.mjs";
 
-const bin = (name) => join(ROOT, "node_modules", ".bin", name);
 const reports = join(ROOT, ".data", "reports");
 
 function check(name, cmd, args) {

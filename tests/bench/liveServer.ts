@@ -3,6 +3,7 @@ import { mkdtempSync, rmSync } from "node:fs";
 import { connect } from "node:net";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
+import ports from "@shared/ports.json" with { type: "json" };
 
 /**
  * The real app for browser benchmarks: the production client built into a temporary folder, the server
@@ -14,8 +15,8 @@ export interface LiveServer {
   stop(): Promise<void>;
 }
 
-const PORT = 3300;
-const FAKE_MAIL_PORT = 2800;
+const PORT = ports.benchApp;
+const FAKE_MAIL_PORT = ports.benchMail;
 const bin = (name: string) => join("node_modules", ".bin", name);
 
 function runOrThrow(cmd: string, args: string[], what: string, env: NodeJS.ProcessEnv = process.env): void {
@@ -71,7 +72,7 @@ export async function startLiveServer(databaseUrl: string): Promise<LiveServer> 
   try {
     // BENCH_NO_MINIFY=1: readable function names in profiles of the benchmarked page.
     runOrThrow(bin("vite"), ["build", ...(process.env.BENCH_NO_MINIFY ? ["--minify", "false"] : []), "--outDir", clientDir, "--emptyOutDir", "--logLevel", "error"], "the client build failed");
-    runOrThrow(bin("tsx"), ["server/db/migrateCli.ts"], "migrating the bench database failed", { ...process.env, DATABASE_URL: databaseUrl });
+    runOrThrow(bin("tsx"), ["server/tools/migrate.ts"], "migrating the bench database failed", { ...process.env, DATABASE_URL: databaseUrl });
     server = spawn(bin("tsx"), ["server/main.ts"], {
       stdio: ["ignore", "ignore", "inherit"],
       env: {
