@@ -63,8 +63,7 @@ const clientFence = {
 const serverFence = {
   because: "server/ imports shared/ and server packages, never src/ or a client package.",
   denyPackages: clientPackages,
-  // tests: only until the benchmarks leave server/ for tests/.
-  allowFolders: ["server", "shared", "migrations", "seeders", "tests"],
+  allowFolders: ["server", "shared", "migrations", "seeders"],
 };
 const features = readdirSync(new URL("./src/features/", import.meta.url), { withFileTypes: true })
   .filter((entry) => entry.isDirectory())

@@ -1,4 +1,5 @@
 import { defineConfig } from "@playwright/test";
+import ports from "./shared/ports.json" with { type: "json" };
 
 // The test run starts the server itself (no webServer entry); Debian's chromium, never a downloaded browser.
 export default defineConfig({
@@ -12,7 +13,7 @@ export default defineConfig({
   expect: { timeout: 10_000 },
   reporter: "list",
   use: {
-    baseURL: process.env.E2E_BASE_URL ?? "http://127.0.0.1:3100",
+    baseURL: process.env.E2E_BASE_URL ?? `http://127.0.0.1:${ports.testApp}`,
     trace: "retain-on-failure",
     screenshot: "only-on-failure",
     launchOptions: {

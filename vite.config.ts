@@ -2,9 +2,10 @@ import { defineConfig } from "vite";
 import react from "@vitejs/plugin-react";
 import tailwindcss from "@tailwindcss/vite";
 import { fileURLToPath } from "node:url";
+import ports from "./shared/ports.json" with { type: "json" };
 
 const at = (p: string) => fileURLToPath(new URL(p, import.meta.url));
-const apiServer = "http://127.0.0.1:3000";
+const apiServer = `http://127.0.0.1:${ports.app}`;
 
 export default defineConfig({
   plugins: [react(), tailwindcss()],
@@ -21,7 +22,7 @@ export default defineConfig({
     manifest: true,
   },
   server: {
-    port: 5173,
+    port: ports.vite,
     strictPort: true,
     proxy: { "/api": apiServer, "/dev": apiServer },
   },

@@ -1,9 +1,10 @@
 import { z } from "zod";
+import ports from "@shared/ports.json" with { type: "json" };
 
 /** Every environment variable the server reads, parsed once at start-up. Nothing else reads process.env. */
 const envSchema = z.object({
   NODE_ENV: z.enum(["production", "development", "test"]).default("development"),
-  PORT: z.coerce.number().int().min(1).max(65535).default(3000),
+  PORT: z.coerce.number().int().min(1).max(65535).default(ports.app),
   DATABASE_URL: z.string().min(1, "DATABASE_URL is required (the bootstrap sets it for the private cluster)"),
   PUBLIC_URL: z.string().url().optional(),
   CLIENT_DIR: z.string().default("dist/client"),
@@ -17,7 +18,7 @@ const envSchema = z.object({
   SMTP_PASSWORD: z.string().optional(),
   SMTP_SECURE: z.enum(["true", "false"]).default("false"),
   MAIL_FROM: z.string().default("Loopwright <no-reply@loopwright.invalid>"),
-  FAKE_MAIL_PORT: z.coerce.number().int().default(2525),
+  FAKE_MAIL_PORT: z.coerce.number().int().default(ports.mail),
   RATE_LIMIT_AUTH_PER_15_MIN: z.coerce.number().int().min(1).default(30),
   DEMO_SEED: z.enum(["true", "false"]).default("true"),
 });

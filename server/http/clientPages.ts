@@ -1,5 +1,6 @@
 import { existsSync, readFileSync } from "node:fs";
 import { join } from "node:path";
+import { DIAGRAM_PAGE_MODULE, matchRoute, paths } from "@shared/routes";
 import { isUuid } from "@server/http/ids";
 
 /** One chunk of the client build, as Vite's manifest lists it. */
@@ -12,14 +13,14 @@ interface ManifestChunk {
 type Manifest = Record<string, ManifestChunk>;
 
 /**
- * Pages opened by link whose code, and data, are announced in the HTML. The path mirrors the client's route
- * table (src/lib/paths.ts), which the server cannot import; the data URLs are the requests the page waits
- * for: the session check and the diagram (only for a well-formed id, which is then safe to write into the HTML).
+ * Pages opened by link whose code, and data, are announced in the HTML: the path pattern (the client's route
+ * table), the page's source module (the key of its chunk in the manifest), and the requests the page waits for:
+ * the session check and the diagram (only for a well-formed id, which is then safe to write into the HTML).
  */
 const PAGES = [
   {
-    path: /^\/diagrams\/([^/]+)\/?$/,
-    source: "src/app/routes/DiagramRoute.tsx",
+    match: (path: string) => matchRoute(paths.diagram, path)?.id,
+    source: DIAGRAM_PAGE_MODULE,
     data: (id: string) => (isUuid(id) ? ["/api/auth/me", `/api/diagrams/${id}`] : []),
   },
 ];
@@ -56,10 +57,10 @@ export function clientPages(clientDir: string): (path: string) => string {
   const pages = PAGES.map((page) => ({ ...page, code: preloadTags(manifest, page.source).join("") }));
   return (path) => {
     for (const page of pages) {
-      const match = page.path.exec(path);
-      if (!match) continue;
+      const param = page.match(path);
+      if (param === undefined) continue;
       // Same mode and credentials as the page's own fetches (cors, same-origin), so the browser reuses the answers.
-      const dataTags = page.data(match[1]).map((url) => `<link rel="preload" as="fetch" crossorigin="anonymous" href="${url}">`);
+      const dataTags = page.data(param).map((url) => `<link rel="preload" as="fetch" crossorigin="anonymous" href="${url}">`);
       return html.replace("</head>", `${page.code}${dataTags.join("")}</head>`);
     }
     return html;

@@ -2,7 +2,7 @@ import { Navigate, Outlet, useLocation, useOutletContext } from "react-router-do
 import type { UserView } from "@shared/api/auth";
 import { useMe } from "@/features/auth/api/getMe";
 import { LoadError, Loading } from "@/components/QueryState";
-import { href, paths } from "@/lib/paths";
+import { href, paths } from "@shared/routes";
 
 /** Gate for signed-in pages: signed-out visitors go to /sign-in?next=<where they were going>. */
 export function RequireAuth() {

@@ -3,7 +3,7 @@ import { matchPath } from "react-router-dom";
 import { loadDiagramRoute } from "@/app/routes/loadDiagramRoute";
 import { meQuery } from "@/features/auth/api/getMe";
 import { editorDiagramQuery } from "@/features/editor/api/getEditorDiagram";
-import { paths } from "@/lib/paths";
+import { paths } from "@shared/routes";
 
 /**
  * Opening a diagram by its link: the session check, the diagram and the editor's code are requested side by

@@ -4,7 +4,7 @@ import { AppShell } from "@/app/layout/AppShell";
 import { RequireAuth } from "@/app/RequireAuth";
 import { loadDiagramRoute } from "@/app/routes/loadDiagramRoute";
 import { RouteError } from "@/app/routes/RouteError";
-import { paths } from "@/lib/paths";
+import { paths } from "@shared/routes";
 
 // Every page is its own chunk, so the first load carries only the shell and the page it shows.
 const SignInRoute = lazy(() => import("@/app/routes/SignInRoute").then((m) => ({ default: m.SignInRoute })));

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { CheckedResult } from "@shared/api/versions";
 import { createApp } from "@server/app";
-import { ladderDiagram } from "@server/bench/diagrams";
+import { ladderDiagram } from "../bench/diagrams";
 import { createSaveCheck } from "@server/features/versions/check";
 import { invitationToken, PASSWORD, signedUp, startTestApp, uniqueEmail, type TestApp } from "./support/harness";
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { parseReduceArgs } from "@server/cli/args";
+import { parseReduceArgs } from "@server/tools/cli/args";
 
 // The documented command line of `reduce` (common practice for POSIX-style tools: `--` ends options,
 // `--name=value` and `--name value` are the same).

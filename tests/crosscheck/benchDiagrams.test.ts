@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { benchDiagram } from "@server/bench/diagrams";
+import { benchDiagram } from "../bench/diagrams";
 import { blockSolve } from "../support/blockSolve";
 import { cClose, cText, cx } from "../support/complex";
 import { documentParams } from "../support/signalGraph";

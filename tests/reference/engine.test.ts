@@ -1,7 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import type { DiagramDocument } from "@shared/diagram/schema";
-import { benchDiagram } from "@server/bench/diagrams";
+import { benchDiagram } from "../bench/diagrams";
 import { wellPosedDiagram } from "../support/arbitraries";
 import { makeDoc } from "../support/docBuilder";
 import { reduceOurs } from "../support/ours";

@@ -1,6 +1,6 @@
 import { spawnSync } from "node:child_process";
 import { describe, expect, it } from "vitest";
-import { benchDiagram } from "@server/bench/diagrams";
+import { benchDiagram } from "../bench/diagrams";
 import { SYMPY_SCRIPT, SYSTEM_PYTHON, sympyBench, sympyReduce } from "../support/sympy";
 import { TEXTBOOK_CASES } from "../support/textbookDiagrams";
 

@@ -16,10 +16,10 @@ const TSX = join(process.cwd(), "node_modules", ".bin", "tsx");
 export const SPAWN_TIMEOUT = 120_000;
 export const STACK_TRACE = /\n\s+at .+:\d+:\d+/;
 
-/** Runs `server/cli/<command>.ts` with the given arguments. */
+/** Runs `server/tools/cli/<command>.ts` with the given arguments. */
 export function runCli(command: string, ...args: string[]): Promise<CliRun> {
   return new Promise((resolve, reject) => {
-    const child = spawn(TSX, [`server/cli/${command}.ts`, ...args], { cwd: process.cwd() });
+    const child = spawn(TSX, [`server/tools/cli/${command}.ts`, ...args], { cwd: process.cwd() });
     let stdout = "";
     let stderr = "";
     child.stdout.on("data", (d: Buffer) => (stdout += d.toString()));

@@ -1,5 +1,6 @@
 import { createHash, randomBytes } from "node:crypto";
 import type { InvitationPreview, InvitationView, InviteInput } from "@shared/api/teams";
+import { href } from "@shared/routes";
 import { Invitation, Membership, Team } from "@server/db/models/team";
 import { User } from "@server/db/models/user";
 import { HttpError, conflict, forbidden, notFound } from "@server/http/errors";
@@ -52,7 +53,7 @@ export async function invite(
     expiresAt,
     acceptedAt: null,
   });
-  const link = `${deps.publicUrl}/invite/${token}`;
+  const link = `${deps.publicUrl}${href.invite(token)}`;
   try {
     await deps.mailer.send(invitationMail({ to: input.email, inviter: inviter.name, team: team.name, role: input.role, link, expiresAt }));
   } catch {

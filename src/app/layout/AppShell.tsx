@@ -3,7 +3,7 @@ import { Outlet, useMatch } from "react-router-dom";
 import { Header } from "@/app/layout/Header";
 import { Loading } from "@/components/QueryState";
 import { SafetyNote } from "@/components/SafetyNote";
-import { paths } from "@/lib/paths";
+import { paths } from "@shared/routes";
 
 export function AppShell() {
   // The editor needs the whole width for its canvas; reading pages keep a comfortable measure.

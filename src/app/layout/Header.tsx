@@ -6,7 +6,7 @@ import { Button, buttonClass } from "@/components/Button";
 import { Logo } from "@/components/Logo";
 import { TeamNav } from "@/app/layout/TeamNav";
 import { errorMessage } from "@/lib/apiClient";
-import { href, paths } from "@/lib/paths";
+import { href, paths } from "@shared/routes";
 
 export function Header() {
   const { data: user } = useMe();

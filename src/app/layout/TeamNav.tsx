@@ -1,7 +1,7 @@
 import { NavLink, useParams } from "react-router-dom";
 import { useEditorDiagram } from "@/features/editor/api/getEditorDiagram";
 import { useTeam } from "@/features/teams/api/getTeam";
-import { href } from "@/lib/paths";
+import { href } from "@shared/routes";
 
 const link = "rounded px-2 py-1 text-ink-soft hover:bg-paper-sunk hover:text-ink aria-[current=page]:bg-signal-tint aria-[current=page]:font-medium aria-[current=page]:text-signal-strong";
 

@@ -14,7 +14,7 @@ import { FormError } from "@/components/Field";
 import { NarrowPage } from "@/components/NarrowPage";
 import { LoadError, Loading } from "@/components/QueryState";
 import { errorMessage } from "@/lib/apiClient";
-import { href, paths } from "@/lib/paths";
+import { href, paths } from "@shared/routes";
 
 /** /invite/:token — shows the invitation, then the one next step that fits who is looking at it. */
 export function InviteRoute() {

@@ -5,7 +5,7 @@ import { useTeam } from "@/features/teams/api/getTeam";
 import { TeamPeople } from "@/features/members/components/TeamPeople";
 import { PageTitle } from "@/components/PageTitle";
 import { LoadError, Loading } from "@/components/QueryState";
-import { href } from "@/lib/paths";
+import { href } from "@shared/routes";
 
 export function MembersRoute() {
   const teamId = useParams().teamId!;

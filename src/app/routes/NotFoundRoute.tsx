@@ -1,6 +1,6 @@
 import { Link } from "react-router-dom";
 import { PageTitle } from "@/components/PageTitle";
-import { paths } from "@/lib/paths";
+import { paths } from "@shared/routes";
 
 export function NotFoundRoute() {
   return (

@@ -2,7 +2,7 @@ import { Link, Navigate } from "react-router-dom";
 import { useAuthDestination } from "@/features/auth/hooks/useAuthDestination";
 import { SignUpForm } from "@/features/auth/components/SignUpForm";
 import { NarrowPage } from "@/components/NarrowPage";
-import { href } from "@/lib/paths";
+import { href } from "@shared/routes";
 
 export function SignUpRoute() {
   const { next, forwardNext, signedIn, goNext } = useAuthDestination();

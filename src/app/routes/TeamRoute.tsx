@@ -8,7 +8,7 @@ import { PageTitle } from "@/components/PageTitle";
 import { Panel } from "@/components/Panel";
 import { LoadError, Loading } from "@/components/QueryState";
 import { roleLabel } from "@/lib/format";
-import { href } from "@/lib/paths";
+import { href } from "@shared/routes";
 
 /** A team's diagrams; creating and changing them is offered only to owners and editors. */
 export function TeamRoute() {

@@ -3,7 +3,7 @@ import { CreateTeamForm } from "@/features/teams/components/CreateTeamForm";
 import { TeamList } from "@/features/teams/components/TeamList";
 import { PageTitle } from "@/components/PageTitle";
 import { Panel } from "@/components/Panel";
-import { href } from "@/lib/paths";
+import { href } from "@shared/routes";
 
 export function TeamsRoute() {
   const navigate = useNavigate();

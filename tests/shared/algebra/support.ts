@@ -1,12 +1,11 @@
 // Test support for the exact algebra: hand-built expression trees, an independent exact evaluator,
 // the one float-comparison helper, random expressions for fast-check, and the Debian sympy runner.
-import { spawnSync } from "node:child_process";
-import { existsSync } from "node:fs";
 import fc from "fast-check";
 import type { Poly } from "@shared/algebra/poly";
 import { q, qAdd, qDiv, qMul, qNeg, qPow, qSub, type Q } from "@shared/algebra/rational";
 import type { ZPoly } from "@shared/algebra/zpoly";
 import type { ExprNode } from "@shared/expr/ast";
+import { runPythonSync } from "../../support/python";
 
 export const num = (n: number, d = 1): ExprNode => {
   const r = q(n, d);
@@ -98,21 +97,9 @@ export const randomPoint = (symbolic: boolean): fc.Arbitrary<Point> =>
       return pt;
     });
 
-export const SYSTEM_PYTHON = "/usr/bin/python3";
-
 /** Runs a Python program under Debian's python3 with JSON on stdin; a missing sympy FAILS the test with a hint. */
-export function runPython<T>(program: string, input: unknown, timeoutMs = 60_000): T {
-  if (!existsSync(SYSTEM_PYTHON)) {
-    throw new Error(`${SYSTEM_PYTHON} is missing: the sympy reference needs Debian python3 with python3-sympy.`);
-  }
-  const r = spawnSync(SYSTEM_PYTHON, ["-c", program], { input: JSON.stringify(input), timeout: timeoutMs, encoding: "utf8" });
-  if (r.error) throw new Error(`Running ${SYSTEM_PYTHON} failed: ${r.error.message}`);
-  if (r.status !== 0) {
-    const hint = /No module named 'sympy'/.test(r.stderr) ? " Install it: apt-get install -y python3-sympy." : "";
-    throw new Error(`The sympy reference exited with ${r.status}.${hint}\n${r.stderr}`);
-  }
-  return JSON.parse(r.stdout) as T;
-}
+export const runPython = <T>(program: string, input: unknown, timeoutMs = 60_000): T =>
+  runPythonSync<T>({ code: program }, input, timeoutMs);
 
 /** Fully parenthesised text of a tree in Python syntax, for the sympy reference. */
 export function exprPython(e: ExprNode): string {

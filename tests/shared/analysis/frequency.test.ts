@@ -1,11 +1,10 @@
-import { execFileSync } from "node:child_process";
 import { describe, expect, it } from "vitest";
+import { runPythonSync } from "../../support/python";
 import { bode, type Zpk } from "@shared/analysis/frequency";
 
 /** Runs a script with Debian's Python (`/usr/bin/python3`, which has numpy and scipy) on a JSON input. */
 function python<T>(script: string, input: unknown): T {
-  const out = execFileSync("/usr/bin/python3", ["-c", script], { input: JSON.stringify(input), encoding: "utf8", timeout: 60_000 });
-  return JSON.parse(out) as T;
+  return runPythonSync<T>({ code: script }, input);
 }
 
 describe("Bode phase", () => {

@@ -7,7 +7,7 @@ import { reductionResultSchema } from "@shared/reduce/result";
 const schemaFile = (name: string) => fileURLToPath(new URL(`../../../shared/schemas/${name}`, import.meta.url));
 
 describe("published JSON Schemas", () => {
-  it("the committed files equal freshly generated ones (run npx tsx server/scripts/gen-schemas.ts)", () => {
+  it("the committed files equal freshly generated ones (run npx tsx server/tools/genSchemas.ts)", () => {
     const fresh = publishedJsonSchemas();
     expect(Object.keys(fresh).sort()).toEqual(["analysis-result.schema.json", "loopwright-diagram.v1.schema.json", "reduction-result.schema.json"]);
     for (const [name, schema] of Object.entries(fresh)) {

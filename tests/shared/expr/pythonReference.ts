@@ -1,17 +1,7 @@
-import { execFileSync } from "node:child_process";
+import { runPythonSync } from "../../support/python";
 
-/**
- * Debian's python3 with sympy (`/usr/bin/python3`; another python3 earlier on PATH lacks it) as an
- * outside reference. One call per batch: the script reads JSON on stdin and prints JSON.
- */
-export function runPython<T>(script: string, input: unknown): T {
-  const out = execFileSync("/usr/bin/python3", ["-c", script], {
-    input: JSON.stringify(input),
-    encoding: "utf8",
-    timeout: 60_000,
-  });
-  return JSON.parse(out) as T;
-}
+/** Debian's sympy as an outside reference. One call per batch: the script reads JSON on stdin and prints JSON. */
+export const runPython = <T>(script: string, input: unknown): T => runPythonSync<T>({ code: script }, input);
 
 /** Exact values "p/q" of expression strings at rational points, computed by sympy. */
 export const SYMPY_EXACT_VALUES = `

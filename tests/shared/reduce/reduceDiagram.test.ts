@@ -1,5 +1,5 @@
 import { describe, expect, test } from "vitest";
-import { benchDiagram } from "@server/bench/diagrams";
+import { benchDiagram } from "../../bench/diagrams";
 import { reduceDocument } from "@shared/reduce/reduceDiagram";
 import { reductionResultSchema } from "@shared/reduce/result";
 import { diagram } from "../reduce/diagramSpec";

@@ -1,7 +1,7 @@
-import { execFileSync } from "node:child_process";
 import type { Block } from "@shared/diagram/schema";
 import { emptyDocument } from "@/features/editor/commands/document";
 import type { EditorDoc, EditorWire } from "@/features/editor/commands/types";
+import { runPythonSync } from "../../support/python";
 
 /** A document from blocks and `from>to[:port]` wire specs; wires get ids w1, w2, … in order. */
 export function docOf(blocks: Block[], wires: string[] = [], parameters: EditorDoc["parameters"] = {}): EditorDoc {
@@ -38,6 +38,5 @@ from sympy.parsing.sympy_parser import parse_expr, standard_transformations, con
 tr = standard_transformations + (convert_xor, rationalize)
 print(json.dumps([bool(simplify(parse_expr(a, transformations=tr) - parse_expr(b, transformations=tr)) == 0) for a, b in json.load(sys.stdin)]))
 `;
-  const out = execFileSync("/usr/bin/python3", ["-c", script], { input: JSON.stringify(pairs), encoding: "utf8", timeout: 60_000 });
-  return JSON.parse(out) as boolean[];
+  return runPythonSync<boolean[]>({ code: script }, pairs);
 }

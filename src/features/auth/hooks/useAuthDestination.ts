@@ -1,6 +1,6 @@
 import { useNavigate, useSearchParams } from "react-router-dom";
 import { useMe } from "@/features/auth/api/getMe";
-import { safeNext } from "@/lib/paths";
+import { safeNext } from "@shared/routes";
 
 /**
  * Where the sign-in and sign-up pages send the user: the same-site `?next=` page (else the team list),

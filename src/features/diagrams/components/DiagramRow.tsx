@@ -8,7 +8,7 @@ import { useRestoreDiagram } from "@/features/diagrams/api/restoreDiagram";
 import { RenameDiagramForm } from "@/features/diagrams/components/RenameDiagramForm";
 import { formatDateTime } from "@/lib/format";
 import { errorMessage } from "@/lib/apiClient";
-import { href } from "@/lib/paths";
+import { href } from "@shared/routes";
 
 export function DiagramRow({ diagram: d, editable }: { diagram: DiagramSummary; editable: boolean }) {
   const [renaming, setRenaming] = useState(false);

@@ -12,7 +12,7 @@ import { emptyDocument, withWireIds } from "@/features/editor/commands/document"
 import type { EditorDoc } from "@/features/editor/commands/types";
 import { EditorSession } from "@/features/editor/components/EditorSession";
 import { warmLiveWorker } from "@/features/editor/hooks/useLiveDiagram";
-import { href } from "@/lib/paths";
+import { href } from "@shared/routes";
 
 type Opened = { ok: true; doc: EditorDoc; baseVersion: number } | { ok: false; problems: Problem[]; baseVersion: number };
 

@@ -8,7 +8,7 @@ import { useSaveAsNewDiagram } from "@/features/editor/api/saveAsNewDiagram";
 import { useSaveVersion } from "@/features/editor/api/saveVersion";
 import type { EditorDoc } from "@/features/editor/commands/types";
 import { errorMessage, isApiError } from "@/lib/apiClient";
-import { href } from "@/lib/paths";
+import { href } from "@shared/routes";
 
 type Dialog =
   | { kind: "save" }

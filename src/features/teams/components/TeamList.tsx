@@ -1,7 +1,7 @@
 import { Link } from "react-router-dom";
 import { useTeams } from "@/features/teams/api/getTeams";
 import { Empty, LoadError, Loading } from "@/components/QueryState";
-import { href } from "@/lib/paths";
+import { href } from "@shared/routes";
 import { roleLabel } from "@/lib/format";
 
 export function TeamList() {

@@ -1,6 +1,6 @@
-import { execFileSync } from "node:child_process";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
+import { runPythonSync } from "../../../support/python";
 import { ratDenominator } from "@shared/algebra/ratfn";
 import { parseTransfer } from "../../../support/parseTransfer";
 import { rootsOf } from "@shared/analysis/poles";
@@ -16,7 +16,7 @@ const parse = (text: string) => Number(text.replace(/\u2212/g, "-").replace("∞
 /** Python's general format "{:.4g}", the usual meaning of "4 significant digits", via Debian's python3. */
 function pythonG(xs: number[], digits: number): string[] {
   const script = `import json,sys\nprint(json.dumps([format(x, '.${digits}g') for x in json.load(sys.stdin)]))`;
-  return JSON.parse(execFileSync("/usr/bin/python3", ["-c", script], { input: JSON.stringify(xs), encoding: "utf8", timeout: 30_000 })) as string[];
+  return runPythonSync<string[]>({ code: script }, xs, 30_000);
 }
 
 describe("formatNumber", () => {
@@ -121,7 +121,7 @@ const denominator = (text: string) => ratDenominator(parseTransfer("1", text, []
 /** Roots with positive real part, counted by Debian's numpy. */
 function rhpCount(coeffsDesc: number[]): number {
   const script = "import json,sys,numpy\nprint(int(sum(1 for r in numpy.roots(json.load(sys.stdin)) if r.real > 1e-9)))";
-  return Number(execFileSync("/usr/bin/python3", ["-c", script], { input: JSON.stringify(coeffsDesc), encoding: "utf8", timeout: 30_000 }));
+  return runPythonSync<number>({ code: script }, coeffsDesc, 30_000);
 }
 
 describe("rootRows", () => {

@@ -1,7 +1,7 @@
 import katex from "katex";
 import { describe, expect, it } from "vitest";
 import { parseExpression } from "@shared/expr/parse";
-import { execFileSync } from "node:child_process";
+import { runPythonSync } from "../../../support/python";
 import { boundedMemo, expressionFraction, expressionLatex, exprLatex, exprText, nameLatex } from "@/features/editor/lib/exprLatex";
 
 const latexOf = (text: string, parameters: string[] = ["K", "tau", "K_p", "Kp", "a"]) => {
@@ -68,7 +68,7 @@ for source, drawn in json.load(sys.stdin):
     out.append(bool(simplify(parse_expr(source, local_dict=names, transformations=plain) - parse_expr(drawn, local_dict=names, transformations=loose)) == 0))
 print(json.dumps(out))
 `;
-  return JSON.parse(execFileSync("/usr/bin/python3", ["-c", script], { input: JSON.stringify(pairs), encoding: "utf8", timeout: 60_000 })) as boolean[];
+  return runPythonSync<boolean[]>({ code: script }, pairs);
 }
 
 describe("block expressions as plain text (the far-zoom drawing)", () => {

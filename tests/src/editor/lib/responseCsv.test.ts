@@ -1,5 +1,5 @@
-import { execFileSync } from "node:child_process";
 import { describe, expect, it } from "vitest";
+import { runPythonSync } from "../../../support/python";
 import { sampleResponse } from "@shared/analysis/stepMetrics";
 import { timeResponse } from "@shared/analysis/timeResponse";
 import { upInts } from "@shared/analysis/upoly";
@@ -7,8 +7,7 @@ import { responseCsv, responseCsvName } from "@/features/editor/lib/responseCsv"
 
 /** Runs a script with Debian's Python (`/usr/bin/python3`, which has scipy) on a JSON input; returns its JSON output. */
 function python<T>(script: string, input: unknown): T {
-  const out = execFileSync("/usr/bin/python3", ["-c", script], { input: JSON.stringify(input), encoding: "utf8", timeout: 60_000 });
-  return JSON.parse(out) as T;
+  return runPythonSync<T>({ code: script }, input);
 }
 
 /** Python's csv reader on the text: header, row widths and whether every field parses back to the exact double. */

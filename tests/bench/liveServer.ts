@@ -3,19 +3,21 @@ import { mkdtempSync, rmSync } from "node:fs";
 import { connect } from "node:net";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
+import ports from "@shared/ports.json" with { type: "json" };
 
 /**
- * The real app for browser benchmarks: the production client built into a temporary folder, the server
- * started on its own ports against the bench database, the database migrated first (bench mode does not
- * migrate). `stop()` ends the server and removes the build; safe to call twice.
+ * The real app for benchmarks: the production client built into a temporary folder, the server started on its
+ * own ports against the bench database, the database migrated first (bench mode does not migrate). With
+ * `compiled`, the server is the JavaScript `npm start` runs (dist/server) instead of the sources through tsx.
+ * `stop()` ends the server and removes the build; safe to call twice.
  */
 export interface LiveServer {
   baseUrl: string;
   stop(): Promise<void>;
 }
 
-const PORT = 3300;
-const FAKE_MAIL_PORT = 2800;
+const PORT = ports.benchApp;
+const FAKE_MAIL_PORT = ports.benchMail;
 const bin = (name: string) => join("node_modules", ".bin", name);
 
 function runOrThrow(cmd: string, args: string[], what: string, env: NodeJS.ProcessEnv = process.env): void {
@@ -56,7 +58,7 @@ function stopChild(child: ChildProcess): Promise<void> {
 }
 
 /** Builds the client, migrates the database, starts the server and waits for /api/health. */
-export async function startLiveServer(databaseUrl: string): Promise<LiveServer> {
+export async function startLiveServer(databaseUrl: string, { compiled = false } = {}): Promise<LiveServer> {
   for (const port of [PORT, FAKE_MAIL_PORT])
     if (await portTaken(port)) throw new Error(`port ${port} is already in use (another benchmark run?); stop that program first`);
   const clientDir = mkdtempSync(join(tmpdir(), "loopwright-bench-client-"));
@@ -71,8 +73,10 @@ export async function startLiveServer(databaseUrl: string): Promise<LiveServer> 
   try {
     // BENCH_NO_MINIFY=1: readable function names in profiles of the benchmarked page.
     runOrThrow(bin("vite"), ["build", ...(process.env.BENCH_NO_MINIFY ? ["--minify", "false"] : []), "--outDir", clientDir, "--emptyOutDir", "--logLevel", "error"], "the client build failed");
-    runOrThrow(bin("tsx"), ["server/db/migrateCli.ts"], "migrating the bench database failed", { ...process.env, DATABASE_URL: databaseUrl });
-    server = spawn(bin("tsx"), ["server/main.ts"], {
+    runOrThrow(bin("tsx"), ["server/tools/migrate.ts"], "migrating the bench database failed", { ...process.env, DATABASE_URL: databaseUrl });
+    if (compiled) runOrThrow(process.execPath, ["server/tools/bootstrap/compile.mjs"], "compiling the server failed");
+    const [cmd, args] = compiled ? [process.execPath, ["dist/server/main.js"]] : [bin("tsx"), ["server/main.ts"]];
+    server = spawn(cmd, args, {
       stdio: ["ignore", "ignore", "inherit"],
       env: {
         ...process.env,

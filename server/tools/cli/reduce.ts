@@ -1,7 +1,7 @@
 import type { Problem } from "@shared/diagram/problems";
-import { HELP, USAGE, parseReduceArgs } from "@server/cli/args";
-import { CliExit, readJsonFile, runCommand, usageError as cliUsageError } from "@server/cli/command";
-import { caretLines, formatProblem, formatReport } from "@server/cli/report";
+import { HELP, USAGE, parseReduceArgs } from "@server/tools/cli/args";
+import { CliExit, readJsonFile, runCommand, usageError as cliUsageError } from "@server/tools/cli/command";
+import { caretLines, formatProblem, formatReport } from "@server/tools/cli/report";
 
 /**
  * `reduce FILE.json [--json] [--input ID] [--output ID]` — public contract, called from teams' CI.

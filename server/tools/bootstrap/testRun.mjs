@@ -3,9 +3,9 @@
 import { spawn, spawnSync } from "node:child_process";
 import { existsSync, mkdirSync, readFileSync, rmSync } from "node:fs";
 import { join } from "node:path";
-import { ROOT, PORTS, buildClient, step } from "./bootstrap.mjs";
+import { ROOT, PORTS, bin, step } from "./common.mjs";
+import { buildClient } from "./build.mjs";
 
-const bin = (name) => join(ROOT, "node_modules", ".bin", name);
 const reports = join(ROOT, ".data", "reports");
 
 function check(name, cmd, args) {
@@ -89,6 +89,7 @@ export async function runTests({ databaseUrl, started }) {
   mkdirSync(reports, { recursive: true });
   const results = [
     check("Type check (tsc --noEmit)…", bin("tsc"), ["--noEmit", "-p", "tsconfig.json"]),
+    check("Type check of shared/ alone: no DOM, no Node types (tsc -p shared/tsconfig.json)…", bin("tsc"), ["--noEmit", "-p", "shared/tsconfig.json"]),
     check("Lint, including the layout's import rules (eslint)…", bin("eslint"), ["."]),
     vitest(databaseUrl),
     await e2e(databaseUrl),

@@ -3,7 +3,7 @@ import { loadConfig } from "@server/config";
 import { migrateDatabase, seedDatabase } from "@server/db/migrator";
 import { createSequelize } from "@server/db/sequelize";
 
-// Run by the bootstrap: `tsx server/db/migrateCli.ts [--seed]`.
+// Run by the bootstrap: `tsx server/tools/migrate.ts [--seed]`.
 const config = loadConfig();
 const sequelize = createSequelize(config.databaseUrl);
 try {

@@ -5,13 +5,13 @@ import { analyzeAt } from "@shared/analysis/analyze";
 import { rootsOf } from "@shared/analysis/poles";
 import { parameterRange, rootLocus, sweepValues } from "@shared/analysis/sweep";
 import { upFrom } from "@shared/analysis/upoly";
-import { prepared as prepareDoc } from "../../tests/support/reduced";
+import { prepared as prepareDoc } from "../support/reduced";
 
 /**
  * Analysis benchmark: the time of one slider update (every result recomputed at new parameter values) for a
  * 10th-order loop — target under 50 ms — with and without the stable ranges, plus the one-off preparation, a
  * root locus and the numeric roots of degree 10, 50 and 100. Prints figures; asserts nothing.
- * Run: npx tsx server/bench/analysis.bench.ts
+ * Run: npx tsx tests/bench/analysis.bench.ts
  */
 const TARGET_MS = 50;
 

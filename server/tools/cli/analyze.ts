@@ -1,9 +1,9 @@
 import type { Problem } from "@shared/diagram/problems";
 import { analyzeDocument } from "@shared/analysis/analyzeDiagram";
 import type { AnalysisResult } from "@shared/analysis/schema";
-import { parseReduceArgs } from "@server/cli/args";
-import { CliExit, readJsonFile, runCommand, usageError as cliUsageError } from "@server/cli/command";
-import { formatProblem } from "@server/cli/report";
+import { parseReduceArgs } from "@server/tools/cli/args";
+import { CliExit, readJsonFile, runCommand, usageError as cliUsageError } from "@server/tools/cli/command";
+import { formatProblem } from "@server/tools/cli/report";
 
 /**
  * `analyze FILE.json [--json] [--input ID] [--output ID] [--break WIRE]` — public contract, called from teams' CI.

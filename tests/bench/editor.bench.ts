@@ -1,7 +1,8 @@
-import { chromium, request, type Browser, type BrowserContextOptions, type CDPSession, type Page } from "@playwright/test";
+import { chromium, type Browser, type BrowserContextOptions, type CDPSession, type Page } from "@playwright/test";
 import type { DiagramDocument } from "@shared/diagram/schema";
-import { ladderDiagram } from "@server/bench/diagrams";
-import { startLiveServer } from "@server/bench/liveServer";
+import { ladderDiagram } from "./diagrams";
+import { startLiveServer } from "./liveServer";
+import { seedDiagram } from "./seed";
 
 /**
  * Canvas editor benchmark in headless Chromium against the real server and production build: time from
@@ -10,7 +11,7 @@ import { startLiveServer } from "@server/bench/liveServer";
  * is dragged around; then the time to zoom in to about 1:1, where live blocks take over, and the frame rate of a
  * pan there. Prints figures and targets; asserts nothing. Headless Chromium draws in software, so these figures
  * are a floor.
- * Run: BENCH_DATABASE_URL=postgres://… npx tsx server/bench/editor.bench.ts (or `npm run bench editor`).
+ * Run: BENCH_DATABASE_URL=postgres://… npx tsx tests/bench/editor.bench.ts (or `npm run bench editor`).
  */
 const BLOCKS = 500;
 const RUNS = 5;
@@ -33,26 +34,6 @@ function placedLadder(): DiagramDocument {
 }
 const BENCH_DOCUMENT = placedLadder();
 const WIRES = BENCH_DOCUMENT.wires.length;
-
-/** A fresh user, team and diagram with the bench document as version 1; returns its id and the signed-in cookies. */
-async function seedDiagram(baseUrl: string): Promise<{ id: string; storageState: BrowserContextOptions["storageState"] }> {
-  const api = await request.newContext({ baseURL: baseUrl, extraHTTPHeaders: { Origin: baseUrl } });
-  try {
-    const post = async (path: string, data: unknown) => {
-      const res = await api.post(path, { data });
-      if (!res.ok()) throw new Error(`POST ${path} answered ${res.status()}: ${(await res.text()).slice(0, 300)}`);
-      return res.json();
-    };
-    const email = `bench.${Date.now()}.${Math.floor(Math.random() * 1e6)}@bench.loopwright.test`;
-    await post("/api/auth/sign-up", { name: "Bench Runner", email, password: "bench-password-42" });
-    const { team } = await post("/api/teams", { name: `Bench ${Date.now()}` });
-    const { diagram } = await post(`/api/teams/${team.id}/diagrams`, { title: `Ladder of ${BLOCKS} blocks` });
-    await post(`/api/diagrams/${diagram.id}/versions`, { baseVersion: 0, message: "Generated for the editor benchmark", document: BENCH_DOCUMENT });
-    return { id: diagram.id, storageState: await api.storageState() };
-  } finally {
-    await api.dispose();
-  }
-}
 
 interface LoadFigures {
   /** Scripts downloaded and the diagram fetched (last responseEnd since navigation start). */
@@ -290,7 +271,7 @@ async function main(): Promise<void> {
   const live = await startLiveServer(databaseUrl);
   let browser: Browser | null = null;
   try {
-    const { id, storageState } = await seedDiagram(live.baseUrl);
+    const { id, storageState } = await seedDiagram(live.baseUrl, BENCH_DOCUMENT, `Ladder of ${BLOCKS} blocks`);
     browser = await chromium.launch({ executablePath: "/usr/bin/chromium", args: CHROMIUM_ARGS });
     const loads: LoadFigures[] = [];
     const idles: FrameFigures[] = [];

@@ -2,9 +2,8 @@ import { spawn } from "node:child_process";
 import { cpus } from "node:os";
 import { fileURLToPath } from "node:url";
 import { reduceDocument } from "@shared/reduce/reduceDiagram";
-import { benchDiagram, type BenchFamily } from "@server/bench/diagrams";
-// The sympy reference lives with the tests (tests/reference); resolved through the tsconfig baseUrl.
-import { sympyBench, SympyTimeout, type SympyMethod } from "tests/support/sympy";
+import { benchDiagram, type BenchFamily } from "./diagrams";
+import { sympyBench, SympyTimeout, type SympyMethod } from "../support/sympy";
 
 /**
  * Reduction benchmark: generated ladders and nested-loop chains, our engine against sympy solving the
@@ -12,7 +11,7 @@ import { sympyBench, SympyTimeout, type SympyMethod } from "tests/support/sympy"
  * with DomainMatrix over QQ(s, params) (the fastest sympy route found). Prints figures and targets;
  * asserts nothing.
  * Each case of ours runs in a child process (its own peak RSS, killable at the time limit).
- * Run: npx tsx server/bench/reduce.bench.ts
+ * Run: npx tsx tests/bench/reduce.bench.ts
  */
 const LIMIT_MS = 120_000;
 const SELF = fileURLToPath(import.meta.url);

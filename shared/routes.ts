@@ -1,0 +1,66 @@
+/**
+ * The client's route table, shared with the server: the router and every link use these patterns; the server
+ * writes invitation links and announces a page's code and data for the paths they match.
+ */
+export const paths = {
+  home: "/",
+  signIn: "/sign-in",
+  signUp: "/sign-up",
+  invite: "/invite/:token",
+  teams: "/teams",
+  team: "/teams/:teamId",
+  members: "/teams/:teamId/members",
+  diagram: "/diagrams/:id",
+} as const;
+
+type Path = (typeof paths)[keyof typeof paths];
+/** The `:name` segments of a pattern, e.g. "teamId" for "/teams/:teamId/members". */
+type ParamsOf<P extends string> = P extends `${string}:${infer Name}/${infer Rest}`
+  ? Name | ParamsOf<`/${Rest}`>
+  : P extends `${string}:${infer Name}`
+    ? Name
+    : never;
+
+/** A pattern with its `:name` segments filled in, encoded: `fillPath("/teams/:teamId", { teamId: "a b" })` → "/teams/a%20b". */
+export function fillPath<P extends Path>(pattern: P, params: Record<ParamsOf<P>, string>): string {
+  return pattern.replace(/:(\w+)/g, (_, name: string) => encodeURIComponent((params as Record<string, string>)[name]));
+}
+
+/**
+ * The `:name` segments of `path` when it matches `pattern` (a trailing slash allowed), else null:
+ * `matchRoute("/diagrams/:id", "/diagrams/42/")` → `{ id: "42" }`.
+ */
+export function matchRoute<P extends Path>(pattern: P, path: string): Record<ParamsOf<P>, string> | null {
+  const names: string[] = [];
+  const source = pattern.replace(/:(\w+)/g, (_, name: string) => (names.push(name), "([^/]+)"));
+  const match = new RegExp(`^${source}/?$`).exec(path);
+  if (!match) return null;
+  try {
+    return Object.fromEntries(names.map((name, i) => [name, decodeURIComponent(match[i + 1])])) as Record<ParamsOf<P>, string>;
+  } catch {
+    return null; // a malformed escape is no page of ours
+  }
+}
+
+const withNext = (path: string, next?: string) =>
+  next && next !== paths.home ? `${path}?next=${encodeURIComponent(next)}` : path;
+
+export const href = {
+  signIn: (next?: string) => withNext(paths.signIn, next),
+  signUp: (next?: string) => withNext(paths.signUp, next),
+  invite: (token: string) => fillPath(paths.invite, { token }),
+  teams: () => paths.teams,
+  team: (teamId: string) => fillPath(paths.team, { teamId }),
+  members: (teamId: string) => fillPath(paths.members, { teamId }),
+  diagram: (id: string) => fillPath(paths.diagram, { id }),
+};
+
+/** Only same-site paths are followed after sign-in, so a crafted ?next= cannot send anyone elsewhere. */
+export const safeNext = (next: string | null): string =>
+  next && next.startsWith("/") && !next.startsWith("//") && !next.startsWith("/\\") ? next : paths.teams;
+
+/**
+ * The source module of the diagram page, as the client's lazy route imports it (src/app/routes/loadDiagramRoute.ts)
+ * and as Vite's build manifest keys its chunk: the server announces that chunk in the HTML of a diagram's link.
+ */
+export const DIAGRAM_PAGE_MODULE = "src/app/routes/DiagramRoute.tsx";
