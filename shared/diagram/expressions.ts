@@ -1,12 +1,13 @@
 import type { ExprNode } from "@shared/expr/ast";
+import { BLOCK_KINDS, hasExpression } from "@shared/diagram/blockKinds";
 import { exprDegreeBound } from "@shared/expr/degree";
 import { parseExpression } from "@shared/expr/parse";
 import type { Problem } from "@shared/diagram/problems";
 import { LIMITS, type DiagramDocument } from "@shared/diagram/schema";
 
 /**
- * Parses every gain and transfer expression against the declared parameters and checks the cheap
- * degree bound of the whole diagram (sum over blocks of max(deg num, deg den) as written; integrator = 1),
+ * Parses every block expression against the declared parameters and checks the cheap
+ * degree bound of the whole diagram (sum over blocks of max(deg num, deg den) as written, fixed transfers included),
  * so a diagram whose result could exceed the degree limit is refused before any algebra runs.
  * Example: a gain "2*s" → problem "s-in-gain" on that block, field "expr", position 2.
  */
@@ -16,9 +17,10 @@ export function expressionProblems(doc: DiagramDocument): { problems: Problem[];
   const parameters = Object.keys(doc.parameters ?? {});
   let degree = 0;
   for (const block of doc.blocks) {
-    if (block.type === "integrator") degree += 1;
-    if (block.type !== "gain" && block.type !== "transfer") continue;
-    const parsed = parseExpression(block.expr, { allowS: block.type === "transfer", parameters });
+    const fixed = BLOCK_KINDS[block.type].fixedTransfer;
+    if (fixed) degree += exprDegreeBound(fixed);
+    if (!hasExpression(block)) continue;
+    const parsed = parseExpression(block.expr, { allowS: BLOCK_KINDS[block.type].expression.mayContainS, parameters });
     if (!parsed.ok) {
       const { code, message, position } = parsed;
       problems.push({ severity: "error", code, message: `Block "${block.id}", expr: ${message}`, blockId: block.id, field: "expr", position });

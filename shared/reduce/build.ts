@@ -1,15 +1,16 @@
 import type { Field } from "@shared/algebra/field";
+import { kindOf, type SignalRole } from "@shared/diagram/blockKinds";
 import { wireLabel, type DiagramDocument } from "@shared/diagram/schema";
 import { SignalFlowGraph } from "@shared/reduce/graph";
 
-/** Block types whose output is their input scaled by the block's own gain. */
-export const SCALING_TYPES: ReadonlySet<string> = new Set(["gain", "transfer", "integrator"]);
+/** Roles whose node the reducer consumes when it eliminates it (the others live on as edge labels or ends). */
+const OWN_NODE: Record<SignalRole, boolean> = { source: false, sink: false, sum: true, branch: true, scale: false };
 
 /**
- * The signal-flow graph of a validated document: one node per block (its output signal); a wire into a
- * gain, transfer or integrator block is an edge labelled with that block and carrying its gain; a wire
- * into a sum port is a bare edge of gain ±1 (the port's sign); a wire into a branch or output block is a
- * bare edge of gain 1. `gains` holds the gain of every gain, transfer and integrator block.
+ * The signal-flow graph of a validated document: one node per block (its output signal); each wire becomes an
+ * edge by the role of the block it enters (see SignalRole): into a "scale" block, an edge labelled with that
+ * block and carrying its gain; into a sum port, a bare edge of gain ±1 (the port's sign); into a branch or a
+ * sink, a bare edge of gain 1; into a source, nothing. `gains` holds the gain of every "scale" block.
  * Example: wire c → p (p a transfer block) becomes the edge c → p labelled "p" with gain G_p.
  */
 export function buildSignalGraph<T>(
@@ -19,20 +20,35 @@ export function buildSignalGraph<T>(
 ): SignalFlowGraph<T> {
   const graph = new SignalFlowGraph<T>();
   const blocks = new Map(doc.blocks.map((b) => [b.id, b]));
-  doc.blocks.forEach((b, i) => graph.addNode(b.id, i, b.type === "sum" || b.type === "branch" ? b.id : null));
+  doc.blocks.forEach((b, i) => graph.addNode(b.id, i, OWN_NODE[kindOf(b).role] ? b.id : null));
   doc.wires.forEach((w, i) => {
     const target = blocks.get(w.to);
-    if (!target || !blocks.has(w.from) || target.type === "input") return;
+    if (!target || !blocks.has(w.from)) return;
     const wires = [wireLabel(w, i)];
-    if (SCALING_TYPES.has(target.type)) {
-      const gain = gains.get(target.id);
-      if (gain === undefined) throw new Error(`No gain given for block "${target.id}"`);
-      graph.addEdge({ from: w.from, to: w.to, gain, label: target.id, sign: 1, blocks: [], wires });
-      return;
+    const bare = (sign: 1 | -1) =>
+      graph.addEdge({ from: w.from, to: w.to, gain: sign > 0 ? field.one : field.neg(field.one), label: null, sign, blocks: [], wires });
+    const role = kindOf(target).role;
+    switch (role) {
+      case "source":
+        return;
+      case "scale": {
+        const gain = gains.get(target.id);
+        if (gain === undefined) throw new Error(`No gain given for block "${target.id}"`);
+        graph.addEdge({ from: w.from, to: w.to, gain, label: target.id, sign: 1, blocks: [], wires });
+        return;
+      }
+      case "sum":
+        bare(target.type === "sum" && target.signs[w.port ?? 0] === "-" ? -1 : 1);
+        return;
+      case "branch":
+      case "sink":
+        bare(1);
+        return;
+      default: {
+        const unhandled: never = role;
+        throw new Error(`No reduction rule for blocks of role "${unhandled}"`);
+      }
     }
-    const sign = target.type === "sum" && target.signs[w.port ?? 0] === "-" ? -1 : 1;
-    const gain = sign > 0 ? field.one : field.neg(field.one);
-    graph.addEdge({ from: w.from, to: w.to, gain, label: null, sign, blocks: [], wires });
   });
   graph.touched.clear();
   return graph;

@@ -1,29 +1,18 @@
+import { hasExpression } from "@shared/diagram/blockKinds";
 import type { Block, BlockType } from "@shared/diagram/schema";
-import { BLOCK_ID_PREFIX, blockIds, freshId } from "@/features/editor/commands/ids";
+import { BLOCK_VIEWS } from "@/features/editor/blockKinds";
+import { blockIds, freshId } from "@/features/editor/commands/ids";
 import { done, refuse, type EditorDoc, type Outcome, type Point } from "@/features/editor/commands/types";
 
 export const GRID = 16;
 const snap = (v: number) => Math.round(v / GRID) * GRID;
 
-/** A new block of each type as it first appears: sums start as a comparator (+ reference, − feedback). */
-function newBlock(type: BlockType, id: string): Block {
-  switch (type) {
-    case "sum":
-      return { id, type, signs: ["+", "-"] };
-    case "gain":
-      return { id, type, expr: "1" };
-    case "transfer":
-      return { id, type, expr: "1/(s + 1)" };
-    default:
-      return { id, type };
-  }
-}
-
 /** Adds a block of `type` with a fresh id at `at` (snapped to the grid) and selects it. */
 export function addBlock(doc: EditorDoc, type: BlockType, at: Point): Outcome {
-  const id = freshId(BLOCK_ID_PREFIX[type], blockIds(doc));
+  const kind = BLOCK_VIEWS[type];
+  const id = freshId(kind.idPrefix, blockIds(doc));
   const layout = { ...doc.layout, [id]: { x: snap(at.x), y: snap(at.y) } };
-  return done({ ...doc, blocks: [...doc.blocks, newBlock(type, id)], layout }, { blocks: [id], wires: [] });
+  return done({ ...doc, blocks: [...doc.blocks, kind.create(id)], layout }, { blocks: [id], wires: [] });
 }
 
 /** Replaces one block by `change(block)`; a string from `change` is the refusal reason. */
@@ -37,11 +26,9 @@ export function updateBlock(doc: EditorDoc, blockId: string, change: (b: Block) 
   return done({ ...doc, blocks });
 }
 
-/** Sets the expression of a gain or transfer block as typed (checked live by the parser, not here). */
+/** Sets the expression of a block that has one, as typed (checked live by the parser, not here). */
 export function setExpression(doc: EditorDoc, blockId: string, expr: string): Outcome {
-  return updateBlock(doc, blockId, (b) =>
-    b.type === "gain" || b.type === "transfer" ? { ...b, expr } : `Block "${blockId}" is a ${b.type} and has no expression`,
-  );
+  return updateBlock(doc, blockId, (b) => (hasExpression(b) ? { ...b, expr } : `Block "${blockId}" is a ${b.type} and has no expression`));
 }
 
 /** Sets the label shown on a block; an empty label removes it (the id is shown instead). */

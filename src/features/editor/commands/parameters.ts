@@ -1,3 +1,4 @@
+import { hasExpression } from "@shared/diagram/blockKinds";
 import { lexExpression } from "@shared/expr/lexer";
 import { parameterNameSchema, parameterSpecSchema, type ParameterSpec } from "@shared/diagram/schema";
 import { done, refuse, type EditorDoc, type Outcome } from "@/features/editor/commands/types";
@@ -41,7 +42,7 @@ export function setParameter(doc: EditorDoc, name: string, fields: ParameterFiel
 /** Block ids whose expression mentions parameter `name`. */
 export function blocksUsing(doc: EditorDoc, name: string): string[] {
   return doc.blocks.flatMap((b) => {
-    if (b.type !== "gain" && b.type !== "transfer") return [];
+    if (!hasExpression(b)) return [];
     const lexed = lexExpression(b.expr);
     return "tokens" in lexed && lexed.tokens.some((t) => t.kind === "name" && t.text === name) ? [b.id] : [];
   });
@@ -67,7 +68,7 @@ export function renameParameter(doc: EditorDoc, from: string, to: string): Outco
   if (to in doc.parameters) return refuse(`A parameter named ${to} already exists`);
   const parameters = Object.fromEntries(Object.entries(doc.parameters).map(([k, v]) => [k === from ? to : k, v]));
   const blocks = doc.blocks.map((b) =>
-    (b.type === "gain" || b.type === "transfer") && blocksUsing({ ...doc, blocks: [b] }, from).length > 0
+    hasExpression(b) && blocksUsing({ ...doc, blocks: [b] }, from).length > 0
       ? { ...b, expr: renameIn(b.expr, from, to) }
       : b,
   );
@@ -87,7 +88,7 @@ export function removeParameter(doc: EditorDoc, name: string): Outcome {
 export function undeclaredNames(doc: EditorDoc): string[] {
   const seen = new Set<string>();
   for (const b of doc.blocks) {
-    if (b.type !== "gain" && b.type !== "transfer") continue;
+    if (!hasExpression(b)) continue;
     const lexed = lexExpression(b.expr);
     if (!("tokens" in lexed)) continue;
     for (const t of lexed.tokens) if (t.kind === "name" && t.text !== "s" && !(t.text in doc.parameters)) seen.add(t.text);

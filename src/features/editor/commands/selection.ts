@@ -1,5 +1,6 @@
 import type { Block } from "@shared/diagram/schema";
-import { BLOCK_ID_PREFIX, blockIds, idSource, wireIds } from "@/features/editor/commands/ids";
+import { BLOCK_VIEWS } from "@/features/editor/blockKinds";
+import { blockIds, idSource, wireIds } from "@/features/editor/commands/ids";
 import { done, refuse, type EditorDoc, type EditorWire, type Outcome, type Point, type Selection } from "@/features/editor/commands/types";
 
 /** A copied piece of a diagram: blocks, the wires between them, and where they stood. */
@@ -42,7 +43,7 @@ export function paste(doc: EditorDoc, fragment: Fragment, offset: Point = PASTE_
   if (fragment.blocks.length === 0) return refuse("The clipboard holds no blocks: copy a selection first");
   const freshBlock = idSource(blockIds(doc));
   const freshWire = idSource(wireIds(doc));
-  const rename = new Map(fragment.blocks.map((b) => [b.id, freshBlock(BLOCK_ID_PREFIX[b.type])]));
+  const rename = new Map(fragment.blocks.map((b) => [b.id, freshBlock(BLOCK_VIEWS[b.type].idPrefix)]));
   const blocks = fragment.blocks.map((b) => ({ ...b, id: rename.get(b.id) as string }));
   const wires = fragment.wires.map((w) => ({
     ...w,

@@ -21,9 +21,7 @@ import type { BlockType } from "@shared/diagram/schema";
 import { GRID } from "@/features/editor/commands/blocks";
 import type { ConnectArgs } from "@/features/editor/commands/wires";
 import type { Point } from "@/features/editor/commands/types";
-import { BranchNode, InputNode, OutputNode } from "@/features/editor/components/nodes/TerminalNodes";
-import { GainNode, IntegratorNode, TransferNode } from "@/features/editor/components/nodes/ExpressionNodes";
-import { SumNode } from "@/features/editor/components/nodes/SumNode";
+import { BLOCK_TYPES, BLOCK_VIEWS } from "@/features/editor/blockKinds";
 import { FarViewProvider, useFarView } from "@/features/editor/components/nodes/farView";
 import { OverviewLayer } from "@/features/editor/components/OverviewLayer";
 import { SignalEdgeView, WireMarkers } from "@/features/editor/components/SignalEdgeView";
@@ -37,15 +35,7 @@ import { useOverviewMap } from "@/features/editor/hooks/useOverviewMap";
 import { useOverviewPick } from "@/features/editor/hooks/useOverviewPick";
 
 // Module-level so the canvas never sees new type tables (which would remount every node).
-const nodeTypes = {
-  input: InputNode,
-  output: OutputNode,
-  sum: SumNode,
-  gain: GainNode,
-  transfer: TransferNode,
-  integrator: IntegratorNode,
-  branch: BranchNode,
-} satisfies NodeTypes;
+const nodeTypes: NodeTypes = Object.fromEntries(BLOCK_TYPES.map((type) => [type, BLOCK_VIEWS[type].node]));
 const edgeTypes = { signal: SignalEdgeView } satisfies EdgeTypes;
 
 const MIN_ZOOM = 0.2;

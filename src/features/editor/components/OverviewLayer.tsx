@@ -1,6 +1,7 @@
 import { memo, useMemo, type KeyboardEvent, type MouseEvent } from "react";
 import { useStore, ViewportPortal, type ReactFlowState } from "@xyflow/react";
 import type { Block } from "@shared/diagram/schema";
+import { BLOCK_VIEWS } from "@/features/editor/blockKinds";
 import type { Severity } from "@shared/diagram/problems";
 import { boundsOf, inPoint, nodeBox, outPoint } from "@/features/editor/geometry/blockBox";
 import { arrowHead, midpointAlong, roundedPath, wireRoute, type Box } from "@/features/editor/geometry/wireRoute";
@@ -51,16 +52,14 @@ const OverviewBlock = memo(function OverviewBlock({ block, named, x, y, width: w
     strokeWidth: selected || highlighted ? 4 : 2,
     strokeDasharray: problem === "error" && !selected && !highlighted ? "6 4" : undefined,
   };
-  const shape =
-    block.type === "sum" ? (
-      <circle cx={x + w / 2} cy={y + h / 2} r={w / 2} {...paint} />
-    ) : block.type === "branch" ? (
-      <circle cx={x + w / 2} cy={y + h / 2} r={6} fill={stroke} />
-    ) : block.type === "gain" ? (
-      <polygon points={`${x},${y} ${x + w},${y + h / 2} ${x},${y + h}`} {...paint} />
-    ) : (
-      <rect x={x} y={y} width={w} height={h} rx={block.type === "input" || block.type === "output" ? h / 2 : 2} {...paint} />
-    );
+  const look = BLOCK_VIEWS[block.type].overview;
+  const shape = {
+    circle: () => <circle cx={x + w / 2} cy={y + h / 2} r={w / 2} {...paint} />,
+    dot: () => <circle cx={x + w / 2} cy={y + h / 2} r={6} fill={stroke} />,
+    triangle: () => <polygon points={`${x},${y} ${x + w},${y + h / 2} ${x},${y + h}`} {...paint} />,
+    pill: () => <rect x={x} y={y} width={w} height={h} rx={h / 2} {...paint} />,
+    box: () => <rect x={x} y={y} width={w} height={h} rx={2} {...paint} />,
+  }[look]();
   const pick = (additive: boolean) => onPick({ id: block.id, additive });
   const onKeyDown = (e: KeyboardEvent) => {
     if (e.key !== "Enter" && e.key !== " ") return;
@@ -80,7 +79,7 @@ const OverviewBlock = memo(function OverviewBlock({ block, named, x, y, width: w
       onKeyDown={onKeyDown}
     >
       {shape}
-      {named && block.type !== "branch" && (
+      {named && look !== "dot" && (
         <text x={x + w / 2} y={y + h / 2} dy="0.35em" textAnchor="middle" fontSize={13} fontFamily="'IBM Plex Mono', monospace" fill="#4d5663">
           {block.label ?? block.id}
         </text>

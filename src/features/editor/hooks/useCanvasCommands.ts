@@ -11,7 +11,8 @@ import { boundsOf, nodeBox } from "@/features/editor/geometry/blockBox";
 import { useFitBox, WHOLE_DIAGRAM } from "@/features/editor/hooks/useFitBox";
 import { useShortcuts } from "@/features/editor/hooks/useShortcuts";
 import { autoLayout } from "@/features/editor/lib/autoLayout";
-import { fallbackPosition, TYPE_NAME, type FlowNode } from "@/features/editor/lib/flowModel";
+import { BLOCK_TYPES, BLOCK_VIEWS } from "@/features/editor/blockKinds";
+import { fallbackPosition, type FlowNode } from "@/features/editor/lib/flowModel";
 import { errorMessage } from "@/lib/apiClient";
 
 interface Args {
@@ -72,7 +73,7 @@ export function useCanvasCommands(a: Args) {
     void flow.setViewport({ x: v.x + dx, y: v.y + dy, zoom: v.zoom }, { duration: 200 });
   };
   const add = (type: BlockType, at: Point = placeFor()) => {
-    const added = act(`Add ${TYPE_NAME[type].toLowerCase()}`, (d) => addBlock(d, type, at));
+    const added = act(`Add ${BLOCK_VIEWS[type].name.toLowerCase()}`, (d) => addBlock(d, type, at));
     if (added) reveal(at);
     return added;
   };
@@ -128,13 +129,7 @@ export function useCanvasCommands(a: Args) {
       nudgeRight: nudge(1, 0),
       nudgeUp: nudge(0, -1),
       nudgeDown: nudge(0, 1),
-      "add:input": () => add("input"),
-      "add:output": () => add("output"),
-      "add:sum": () => add("sum"),
-      "add:gain": () => add("gain"),
-      "add:transfer": () => add("transfer"),
-      "add:integrator": () => add("integrator"),
-      "add:branch": () => add("branch"),
+      ...(Object.fromEntries(BLOCK_TYPES.map((type) => [`add:${type}`, () => add(type)])) as Record<`add:${BlockType}`, () => boolean>),
       editProperties: a.focusProperties,
       layout: () => void layout(),
       fitView: fit,

@@ -1,6 +1,7 @@
 import type { Edge, Node } from "@xyflow/react";
 import type { Block, BlockType } from "@shared/diagram/schema";
 import type { Severity } from "@shared/diagram/problems";
+import { BLOCK_VIEWS } from "@/features/editor/blockKinds";
 import type { EditorDoc, EditorWire, Point, Selection } from "@/features/editor/commands/types";
 import { sumPortPlaces, type Side } from "@/features/editor/geometry/sumPorts";
 
@@ -36,16 +37,6 @@ export interface Marks {
   breakWire: string | null;
 }
 
-export const TYPE_NAME: Record<BlockType, string> = {
-  input: "Input",
-  output: "Output",
-  sum: "Summing junction",
-  gain: "Gain",
-  transfer: "Transfer function",
-  integrator: "Integrator",
-  branch: "Pickoff point",
-};
-
 export const inHandle = (port: number | undefined) => (port === undefined ? "in" : `in${port}`);
 /** The junction port an input handle stands for ("in2" → 2); undefined for a single-input block's "in". */
 export const portOfHandle = (handle: string | null | undefined) => (handle && handle.startsWith("in") && handle !== "in" ? Number(handle.slice(2)) : undefined);
@@ -54,7 +45,7 @@ export const OUT_HANDLE = "out";
 /** Where a block without a stored position is placed: a loose grid in document order. */
 export const fallbackPosition = (index: number): Point => ({ x: 48 + (index % 6) * 176, y: 48 + Math.floor(index / 6) * 128 });
 
-const blockAriaLabel = (b: Block) => `${TYPE_NAME[b.type]} ${b.id}${b.label ? ` (${b.label})` : ""}`;
+const blockAriaLabel = (b: Block) => `${BLOCK_VIEWS[b.type].name} ${b.id}${b.label ? ` (${b.label})` : ""}`;
 
 export function wireAriaLabel(w: EditorWire, target: Block | undefined, isBreak = false): string {
   const into = target?.type === "sum" && w.port !== undefined ? ` port ${w.port} (${target.signs[w.port] === "-" ? "minus" : "plus"})` : "";

@@ -1,4 +1,5 @@
 import type { BlockType } from "@shared/diagram/schema";
+import { BLOCK_TYPES, BLOCK_VIEWS } from "@/features/editor/blockKinds";
 
 export type ShortcutAction =
   | "undo"
@@ -46,16 +47,8 @@ export interface Shortcut {
 const mod = (e: KeyLike) => e.ctrlKey || e.metaKey;
 const plain = (e: KeyLike) => !mod(e) && !e.altKey;
 const key = (e: KeyLike, k: string) => e.key.toLowerCase() === k;
-
-const ADD: [BlockType, string, string][] = [
-  ["input", "1", "Add an input"],
-  ["sum", "2", "Add a summing junction"],
-  ["gain", "3", "Add a gain"],
-  ["transfer", "4", "Add a transfer function"],
-  ["integrator", "5", "Add an integrator"],
-  ["branch", "6", "Add a pickoff point"],
-  ["output", "7", "Add an output"],
-];
+/** "an input", "a gain": the name as the help dialog lists it. */
+const article = (name: string) => `${/^[aeiou]/i.test(name) ? "an" : "a"} ${name.toLowerCase()}`;
 
 /** Every keyboard shortcut of the editor: the handler and the help dialog both read this one table. */
 export const SHORTCUTS: Shortcut[] = [
@@ -72,7 +65,10 @@ export const SHORTCUTS: Shortcut[] = [
   { action: "nudgeRight", keys: "→", description: "Move the selection right (Shift: further)", edits: true, test: (e) => !mod(e) && e.key === "ArrowRight" },
   { action: "nudgeUp", keys: "↑", description: "Move the selection up (Shift: further)", edits: true, test: (e) => !mod(e) && e.key === "ArrowUp" },
   { action: "nudgeDown", keys: "↓", description: "Move the selection down (Shift: further)", edits: true, test: (e) => !mod(e) && e.key === "ArrowDown" },
-  ...ADD.map(([type, k, description]): Shortcut => ({ action: `add:${type}`, keys: k, description, edits: true, test: (e) => plain(e) && e.key === k })),
+  ...BLOCK_TYPES.map((type): Shortcut => {
+    const k = BLOCK_VIEWS[type].rail.key;
+    return { action: `add:${type}`, keys: k, description: `Add ${article(BLOCK_VIEWS[type].name)}`, edits: true, test: (e) => plain(e) && e.key === k };
+  }),
   { action: "editProperties", keys: "Enter", description: "Edit the selected block's properties", edits: false, test: (e) => plain(e) && e.key === "Enter" },
   { action: "layout", keys: "L", description: "Lay the diagram out automatically", edits: true, test: (e) => plain(e) && key(e, "l") },
   { action: "fitView", keys: "F", description: "Fit the whole diagram in view", edits: false, test: (e) => plain(e) && key(e, "f") },

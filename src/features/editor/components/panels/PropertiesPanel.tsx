@@ -8,7 +8,9 @@ import { BreakHere } from "@/features/editor/components/analysis/BreakPicker";
 import { Connections } from "@/features/editor/components/panels/Connections";
 import { ExpressionField } from "@/features/editor/components/panels/ExpressionField";
 import { SumPorts } from "@/features/editor/components/panels/SumPorts";
-import { TYPE_NAME, wireAriaLabel } from "@/features/editor/lib/flowModel";
+import { BLOCK_KINDS, hasExpression } from "@shared/diagram/blockKinds";
+import { BLOCK_VIEWS } from "@/features/editor/blockKinds";
+import { wireAriaLabel } from "@/features/editor/lib/flowModel";
 import type { BreakWire } from "@shared/analysis/answer";
 
 interface Props {
@@ -70,18 +72,17 @@ export function PropertiesPanel({ doc, selection, firstFieldRef, analysisBreak }
   }
   const block = doc.blocks.find((b) => b.id === blocks[0]);
   if (!block) return null;
-  const hasExpr = block.type === "gain" || block.type === "transfer";
   return (
     <div className="flex flex-col gap-4">
       <h3 className="text-sm font-semibold">
-        {TYPE_NAME[block.type]} <span className="font-mono">{block.id}</span>
+        {BLOCK_VIEWS[block.type].name} <span className="font-mono">{block.id}</span>
       </h3>
-      {hasExpr && (
+      {hasExpression(block) && (
         <ExpressionField
           key={block.id}
           blockId={block.id}
           expr={block.expr}
-          allowS={block.type === "transfer"}
+          allowS={BLOCK_KINDS[block.type].expression.mayContainS}
           parameters={doc.parameters}
           inputRef={firstFieldRef}
         />
@@ -92,7 +93,7 @@ export function PropertiesPanel({ doc, selection, firstFieldRef, analysisBreak }
         </label>
         <input
           id={labelId}
-          ref={hasExpr ? undefined : firstFieldRef}
+          ref={hasExpression(block) ? undefined : firstFieldRef}
           value={block.label ?? ""}
           readOnly={readOnly}
           placeholder={block.id}

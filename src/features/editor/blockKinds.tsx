@@ -1,0 +1,89 @@
+import type { NodeTypes } from "@xyflow/react";
+import type { Block, BlockType } from "@shared/diagram/schema";
+import { ArrowLeftToLine, ArrowRightFromLine, CircleDot, CirclePlus, Divide, Triangle } from "lucide-react";
+import type { ReactNode } from "react";
+import { GainNode, IntegratorNode, TransferNode } from "@/features/editor/components/nodes/ExpressionNodes";
+import { SumNode } from "@/features/editor/components/nodes/SumNode";
+import { BranchNode, InputNode, OutputNode } from "@/features/editor/components/nodes/TerminalNodes";
+
+/** How the overview of a large diagram outlines a block (see OverviewLayer). */
+export type OverviewShape = "circle" | "dot" | "triangle" | "pill" | "box";
+
+/** What the editor shows and does for one block kind; its signal role lives in shared/diagram/blockKinds.ts. */
+export interface BlockKindView {
+  /** The kind's name in labels and headings. */
+  name: string;
+  /** The rail's short caption, glyph and hint; `key` is the digit that adds one. */
+  rail: { short: string; key: string; glyph: ReactNode; hint: string };
+  /** Prefix of new block ids: "G" gives G1, G2, … */
+  idPrefix: string;
+  /** The block as it first appears. */
+  create: (id: string) => Block;
+  /** The canvas node that draws it. */
+  node: NodeTypes[string];
+  overview: OverviewShape;
+}
+
+/** Every block kind of the editor in one row each, in rail order; a new kind in the schema makes the compiler ask for its row. */
+export const BLOCK_VIEWS: Record<BlockType, BlockKindView> = {
+  input: {
+    name: "Input",
+    rail: { short: "Input", key: "1", glyph: <ArrowRightFromLine className="size-5" />, hint: "External signal: reference or disturbance" },
+    idPrefix: "r",
+    create: (id) => ({ id, type: "input" }),
+    node: InputNode,
+    overview: "pill",
+  },
+  sum: {
+    name: "Summing junction",
+    rail: { short: "Sum", key: "2", glyph: <CirclePlus className="size-5" />, hint: "Adds and subtracts its inputs" },
+    idPrefix: "e",
+    // A comparator: + reference, − feedback.
+    create: (id) => ({ id, type: "sum", signs: ["+", "-"] }),
+    node: SumNode,
+    overview: "circle",
+  },
+  gain: {
+    name: "Gain",
+    rail: { short: "Gain", key: "3", glyph: <Triangle className="size-5 rotate-90" />, hint: "Static gain, no s" },
+    idPrefix: "k",
+    create: (id) => ({ id, type: "gain", expr: "1" }),
+    node: GainNode,
+    overview: "triangle",
+  },
+  transfer: {
+    name: "Transfer function",
+    rail: { short: "Transfer", key: "4", glyph: <Divide className="size-5" />, hint: "Rational function of s" },
+    idPrefix: "G",
+    create: (id) => ({ id, type: "transfer", expr: "1/(s + 1)" }),
+    node: TransferNode,
+    overview: "box",
+  },
+  integrator: {
+    name: "Integrator",
+    rail: { short: "Integrator", key: "5", glyph: <span className="font-serif text-xl leading-5 italic">∫</span>, hint: "1/s" },
+    idPrefix: "int",
+    create: (id) => ({ id, type: "integrator" }),
+    node: IntegratorNode,
+    overview: "box",
+  },
+  branch: {
+    name: "Pickoff point",
+    rail: { short: "Pickoff", key: "6", glyph: <CircleDot className="size-5" />, hint: "Pickoff: one signal to several wires" },
+    idPrefix: "p",
+    create: (id) => ({ id, type: "branch" }),
+    node: BranchNode,
+    overview: "dot",
+  },
+  output: {
+    name: "Output",
+    rail: { short: "Output", key: "7", glyph: <ArrowLeftToLine className="size-5" />, hint: "A signal to observe" },
+    idPrefix: "y",
+    create: (id) => ({ id, type: "output" }),
+    node: OutputNode,
+    overview: "pill",
+  },
+};
+
+/** The kinds in rail order. */
+export const BLOCK_TYPES = Object.keys(BLOCK_VIEWS) as BlockType[];
