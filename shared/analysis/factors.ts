@@ -1,4 +1,4 @@
-// Exact factor splitting of numeric polynomials, reusing the engine's square-free + rational splitter and
+// Exact factor splitting of numeric polynomials, reusing the reducer's square-free + rational splitter and
 // adding the one case it leaves whole: rational quadratics with two real irrational roots.
 import { zSplitFactors } from "@shared/algebra/factor";
 import { polyFromZ } from "@shared/algebra/poly";

@@ -82,7 +82,7 @@ export function upDivMod(a: UPoly, b: UPoly): { quo: UPoly; rem: UPoly } {
 /** Monic multiple (zero stays zero). Example: upMonic(2s + 1) is s + 1/2. */
 export const upMonic = (a: UPoly): UPoly => (a.length ? upScale(a, qDiv(qOne, upLead(a))) : a);
 
-/** Monic greatest common divisor (the engine's modular gcd). Example: upGcd(s^2 - 1, s^2 + 2s + 1) is s + 1. */
+/** Monic greatest common divisor (the reducer's modular gcd). Example: upGcd(s^2 - 1, s^2 + 2s + 1) is s + 1. */
 export function upGcd(a: UPoly, b: UPoly): UPoly {
   if (!a.length) return upMonic(b);
   if (!b.length) return upMonic(a);

@@ -6,7 +6,7 @@ import { analysisJsonSchema } from "@shared/analysis/schema";
 /**
  * The published JSON Schemas, generated from the zod schemas so they cannot drift: file name under
  * shared/schemas/ → schema object. The diagram schema describes what a reader accepts (io "input");
- * the result schema describes what the engine writes (io "output").
+ * the result schema describes what the reducer and the analysis write (io "output").
  * Example: publishedJsonSchemas()["loopwright-diagram.v1.schema.json"].title === "Loopwright diagram, version 1".
  */
 export function publishedJsonSchemas(): Record<string, Record<string, unknown>> {

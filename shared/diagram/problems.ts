@@ -1,7 +1,7 @@
 import { z } from "zod";
 
 /**
- * What the validator and the engine report about a diagram. Every problem names what it is about
+ * What the validator and the reducer report about a diagram. Every problem names what it is about
  * (a block id, a wire id or `wire #i (from → to)`) and says what to do in a sentence.
  * Example: { severity: "error", code: "unknown-name", blockId: "c", field: "expr", message: "…" }.
  */

@@ -5,7 +5,7 @@ import { decimalToRational, MAX_DECIMAL_EXPONENT } from "@shared/expr/decimal";
 import { lexExpression, type Token } from "@shared/expr/lexer";
 
 // Only the parser of mathjs, from its number-only build: the full library would triple the editor's and the
-// worker's bundles and add ~80 MB to every Node process that loads the engine.
+// worker's bundles and add ~80 MB to every Node process that loads the reducer.
 const { parse } = create({ parseDependencies });
 
 /**
@@ -34,7 +34,7 @@ export interface ParseOptions {
   allowS: boolean;
   /** Declared parameter names; any other name is an error. */
   parameters: Iterable<string>;
-  /** Size limits; default LIMITS. Text the engine wrote itself is read back with wider ones. */
+  /** Size limits; default LIMITS. Printed results are read back (in tests) with wider ones. */
   limits?: { exprLength: number; exponent: number };
 }
 

@@ -1,5 +1,5 @@
 /**
- * A bound on the work of one reduction, so no document can keep the engine busy forever: a number of
+ * A bound on the work of one reduction, so no document can keep the reducer busy forever: a number of
  * edges the rules may create and a wall-clock deadline. Exceeding either throws ReductionLimitError.
  * Example: const b = createBudget({ maxEdges: 1e6, timeLimitMs: 20_000 }); spend(b, 4).
  */

@@ -2,7 +2,7 @@ import { z } from "zod";
 import { problemSchema } from "@shared/diagram/problems";
 
 /**
- * The reduction engine's output — the contract shared by the CLI (`--json`), the server's stored
+ * The reducer's printed output — the contract shared by the CLI (`--json`), the server's stored
  * `result` column and the editor's results panel. Polynomials are written in the diagram expression
  * syntax: expanded, descending powers of s, exact coefficients (integers or p/q, never decimals).
  * Example: reductionResultSchema.parse(JSON.parse(cliJson)) checks a stored result and types it as ReductionResult.

@@ -54,7 +54,7 @@ const CASES: Case[] = [
   { id: "surd and rational 1/((s+1)(s^2+4s+2))", num: upInts([1]), den: upInts([2, 6, 5, 1]), tEnd: 15 },
 ];
 
-/** The 12th-order loop, reduced by the engine from a diagram: plant of order 12 in unity feedback. */
+/** The 12th-order loop, reduced by the reducer from a diagram: plant of order 12 in unity feedback. */
 function twelfthOrder(): Case {
   const doc = makeDoc(
     [

@@ -198,7 +198,7 @@ describe("parsed Laplace transforms evaluate to the transform of their time func
     }
   });
 
-  it("reads engine-written text with wider limits given by the caller, and still refuses past them (common practice: limits are per caller)", () => {
+  it("reads printed text with wider limits given by the caller, and still refuses past them (common practice: limits are per caller)", () => {
     const wide = { exprLength: 5000, exponent: 1000 };
     expect(parseExpression("s^61 + 2", { allowS: true, parameters: [], limits: wide }).ok).toBe(true);
     const refused = parseExpression("s^1001", { allowS: true, parameters: [], limits: wide });

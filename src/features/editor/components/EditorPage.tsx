@@ -31,7 +31,7 @@ export function EditorPage({ id }: { id: string }) {
   const queryClient = useQueryClient();
   // A session lives until the user reloads on purpose; background refetches only feed the "newer version" notice.
   const [session, setSession] = useState<{ key: number; opened: Opened } | null>(null);
-  // The engine loads in its worker while the diagram is fetched, not after the canvas has rendered.
+  // The algebra loads in the editor worker while the diagram is fetched, not after the canvas has rendered.
   useEffect(warmLiveWorker, []);
 
   if (detail.isPending) return <Loading label="Loading the diagram…" />;

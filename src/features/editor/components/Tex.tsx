@@ -16,7 +16,7 @@ function typesetHtml(latex: string, display: boolean): string {
   return display ? displayHtml(latex) : inlineHtml(latex);
 }
 
-/** KaTeX rendering of trusted LaTeX built by the engine or the editor; MathML rides along for screen readers. */
+/** KaTeX rendering of trusted LaTeX built by the reducer or the editor; MathML rides along for screen readers. */
 export const Tex = memo(function Tex({ latex, display = false, className }: { latex: string; display?: boolean; className?: string }) {
   return <span className={className} dangerouslySetInnerHTML={{ __html: typesetHtml(latex, display) }} />;
 });

@@ -14,6 +14,6 @@ function loadElk(): Promise<ElkApi> {
 
 /** New top-left positions for every block, laid out left to right with feedback paths underneath. */
 export async function autoLayout(doc: EditorDoc, sizes: ReadonlyMap<string, { width: number; height: number }>): Promise<Record<string, Point>> {
-  const engine = await loadElk();
-  return elkPositions(await engine.layout(elkGraph(doc, sizes)));
+  const elk = await loadElk();
+  return elkPositions(await elk.layout(elkGraph(doc, sizes)));
 }

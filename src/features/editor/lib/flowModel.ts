@@ -10,7 +10,7 @@ export interface BlockNodeData<B extends Block = Block> extends Record<string, u
   block: B;
   /** Consumed by the reduction step being shown. */
   highlighted: boolean;
-  /** Worst problem the validator or engine reports on this block. */
+  /** Worst problem the validator or reducer reports on this block. */
   problem: Severity | null;
 }
 

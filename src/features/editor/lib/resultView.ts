@@ -14,7 +14,7 @@ export interface ResultView {
   problems: Problem[];
 }
 
-/** What the results panel and the canvas highlight show for an engine outcome and a chosen pair. */
+/** What the results panel and the canvas highlight show for a reduction outcome and a chosen pair. */
 export function resultView(outcome: LiveOutcome | null, chosen: string | null): ResultView {
   if (!outcome) return { result: null, transfers: [], transfer: null, steps: [], problems: [] };
   if (!outcome.ok) return { result: null, transfers: [], transfer: null, steps: [], problems: outcome.problems };

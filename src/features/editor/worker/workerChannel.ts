@@ -13,7 +13,7 @@ export interface ChannelSpec<P, M> {
 /**
  * One warm worker and its queue of length one: while it works only the newest payload waits. A request may
  * be answered in several messages; the one marked `final` ends it.
- * Starting a worker costs a second or more (loading the engine), so it is restarted only for a runaway.
+ * Starting a worker costs a second or more (loading the algebra), so it is restarted only for a runaway.
  */
 export class WorkerChannel<P, M, R extends { seq: number; final: boolean }> {
   private worker: Worker | null = null;

@@ -12,7 +12,7 @@ const ok = (o: Outcome): EditorDoc => {
 };
 
 describe("selection commands", () => {
-  it("duplicating a whole loop gives a second, independent loop with fresh ids and the same closed loop (checked with the engine)", () => {
+  it("duplicating a whole loop gives a second, independent loop with fresh ids and the same closed loop (checked with the reducer)", () => {
     const doc = unityLoop();
     const out = duplicate(doc, selectAll(doc));
     const twice = ok(out);

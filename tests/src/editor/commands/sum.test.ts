@@ -16,7 +16,7 @@ const closedLoop = (doc: EditorDoc) => {
 
 describe("summing junction commands", () => {
   // from memory: Ogata, Modern Control Engineering — unity negative feedback gives G/(1+G), positive G/(1−G).
-  it("the sign of the feedback port decides negative or positive feedback (checked with the engine)", () => {
+  it("the sign of the feedback port decides negative or positive feedback (checked with the reducer)", () => {
     const doc = unityLoop();
     expect(closedLoop(doc)).toBe("K / s^2 + 2*s + K");
     expect(closedLoop(ok(toggleSign(doc, "e", 1)))).toBe("K / s^2 + 2*s - K");

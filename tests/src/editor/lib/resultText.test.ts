@@ -21,7 +21,7 @@ describe("result as text", () => {
 
   it("copies the closed loop of unity feedback as text and as an aligned LaTeX block", () => {
     const r = reduceDocument(unityLoop());
-    if (!r.ok) throw new Error("engine refused the loop");
+    if (!r.ok) throw new Error("the reducer refused the loop");
     const t = r.result.transfers[0];
     // from memory: Ogata, Modern Control Engineering — G/(1+G) with G = K/(s(s+2)).
     expect(resultPlainText(t, r.result.characteristic)).toBe("T_y_r(s) = K/(s^2 + 2*s + K)\nCharacteristic polynomial: s^2 + 2*s + K");

@@ -1,6 +1,6 @@
 import type { Problem } from "@shared/diagram/problems";
 
-/** Validation and engine problems, errors first; a problem about a block or wire selects it when clicked. */
+/** Validation and reduction problems, errors first; a problem about a block or wire selects it when clicked. */
 export function ProblemList({ problems, onPick }: { problems: Problem[]; onPick: (p: Problem) => void }) {
   if (problems.length === 0) return <p className="text-sm text-steady">No problems found.</p>;
   const sorted = [...problems].sort((a, b) => (a.severity === b.severity ? 0 : a.severity === "error" ? -1 : 1));

@@ -25,7 +25,7 @@ export function ResultsPanel({ live, view, stale, onPair }: Props) {
   const pairId = useId();
   const { result, transfer, transfers } = view;
   const status = live.crash
-    ? "The engine stopped unexpectedly."
+    ? "The reducer stopped unexpectedly."
     : stale || live.pending
       ? "Updating…"
       : live.ms !== null
