@@ -68,6 +68,8 @@ export function createAnalyzer(): Analyzer {
   let last: { reduction: ExactReduction; input: string | null; output: string | null; brk: string | null } | null = null;
   let prepared: Prepared | null = null;
   let conditions: string[] | null = null;
+  // The last answer and its query: a request that changes nothing the analysis reads (a block moved) reuses it.
+  let answered: { query: string; answer: AnalysisAnswer } | null = null;
   const sets = new Cache<StableSet>();
   const sweeps = new Cache<Omit<SweepData, "current">>();
 
@@ -81,7 +83,10 @@ export function createAnalyzer(): Analyzer {
       sweeps.clear();
       prepared = prepareAnalysis(reduction, { input: q.input ?? undefined, output: q.output ?? undefined, break: brk ?? undefined });
       last = { reduction, input: q.input, output: q.output, brk };
+      answered = null;
     }
+    const asked = JSON.stringify(q);
+    if (answered?.query === asked) return answered.answer;
     if (!prepared?.ok) return { ok: false, problems: prepared?.problems ?? [], parameters: [] };
     const p = prepared.prepared;
     const values = Object.fromEntries(Object.entries(q.values).filter(([name, v]) => p.parameters.includes(name) && Number.isFinite(v)));
@@ -105,7 +110,9 @@ export function createAnalyzer(): Analyzer {
       const index = analysis.loop?.breakPoint.index;
       const wireId = index === undefined ? undefined : p.doc.wires[index]?.id;
       const breakWire: BreakWire | null = wireId && analysis.loop ? { id: wireId, chosen: analysis.loop.breakPoint.chosen } : null;
-      return { ok: true, analysis: { ...analysis, notes: [...notes, ...analysis.notes] }, parameters, sweep, breakWire };
+      const answer: AnalysisAnswer = { ok: true, analysis: { ...analysis, notes: [...notes, ...analysis.notes] }, parameters, sweep, breakWire };
+      answered = { query: asked, answer };
+      return answer;
     } catch (err) {
       if (!(err instanceof AnalysisError || err instanceof AlgebraError)) throw err;
       return { ok: false, problems: [...p.warnings, problemOf(err)], parameters: parameterInfo(p) };

@@ -134,11 +134,13 @@ describe("the editor worker's analysis (unity feedback around K/(s(s+2)): closed
 
 describe("one reduction per change of what the result depends on", () => {
   const doc = unityLoop();
-  it("reduces an edit once, and reuses it for moved blocks, a new title and slider moves", () => {
+  it("reduces an edit once, and reuses it (and an unchanged analysis) for moved blocks, a new title and slider moves", () => {
     const session = createLiveSession();
     expect(session.reduce(doc).reduced).toBe(true);
     const first = ok(session.analyze(query(doc)));
     expect(session.reduce({ ...doc, title: "Other", notes: "n", layout: { r: { x: 10, y: 20 } } }).reduced).toBe(false);
+    // Nothing the analysis reads changed either: the last answer stands.
+    expect(session.analyze(query(doc))).toBe(first);
     expect(ok(session.analyze(query(doc, { values: { K: 16 } }))).analysis.values.K).toBe(16);
     const edited = unityLoop("K/(s*(s+5))");
     const after = session.reduce(edited);
