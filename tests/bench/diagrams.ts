@@ -120,3 +120,11 @@ export function nestedLoopChain(blocks: number, opts: GeneratorOptions = {}): Di
 export function benchDiagram(family: BenchFamily, blocks: number, opts: GeneratorOptions = {}): DiagramDocument {
   return family === "ladder" ? ladderDiagram(blocks, opts) : nestedLoopChain(blocks, opts);
 }
+
+/** The diagram placed on a grid (row-major in block order), unless it already has a layout: what the canvas benches open. */
+export function placedOnGrid(doc: DiagramDocument): DiagramDocument {
+  if (doc.layout) return doc;
+  const columns = Math.ceil(Math.sqrt(doc.blocks.length));
+  const layout = Object.fromEntries(doc.blocks.map((b, i) => [b.id, { x: (i % columns) * 224, y: Math.floor(i / columns) * 144 }]));
+  return { ...doc, layout };
+}

@@ -1,6 +1,5 @@
 import { chromium, type Browser, type BrowserContextOptions, type CDPSession, type Page } from "@playwright/test";
-import type { DiagramDocument } from "@shared/diagram/schema";
-import { ladderDiagram } from "./diagrams";
+import { ladderDiagram, placedOnGrid } from "./diagrams";
 import { startLiveServer } from "./liveServer";
 import { seedDiagram } from "./seed";
 
@@ -24,15 +23,7 @@ const RESULT_TEXT = 'output[aria-label="Closed-loop transfer function as text"]'
 
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 
-/** The generated ladder placed on a grid (row-major in block order), unless it already has a layout. */
-function placedLadder(): DiagramDocument {
-  const doc = ladderDiagram(BLOCKS);
-  if (doc.layout) return doc;
-  const columns = Math.ceil(Math.sqrt(BLOCKS));
-  const layout = Object.fromEntries(doc.blocks.map((b, i) => [b.id, { x: (i % columns) * 224, y: Math.floor(i / columns) * 144 }]));
-  return { ...doc, layout };
-}
-const BENCH_DOCUMENT = placedLadder();
+const BENCH_DOCUMENT = placedOnGrid(ladderDiagram(BLOCKS));
 const WIRES = BENCH_DOCUMENT.wires.length;
 
 interface LoadFigures {

@@ -58,21 +58,24 @@ function stopChild(child: ChildProcess): Promise<void> {
 }
 
 /** Builds the client, migrates the database, starts the server and waits for /api/health. */
-export async function startLiveServer(databaseUrl: string, { compiled = false } = {}): Promise<LiveServer> {
+/**
+ * `clientDir`: serve a client built elsewhere (e.g. from an older commit, to compare) instead of building this one.
+ */
+export async function startLiveServer(databaseUrl: string, { compiled = false, clientDir: prebuilt }: { compiled?: boolean; clientDir?: string } = {}): Promise<LiveServer> {
   for (const port of [PORT, FAKE_MAIL_PORT])
     if (await portTaken(port)) throw new Error(`port ${port} is already in use (another benchmark run?); stop that program first`);
-  const clientDir = mkdtempSync(join(tmpdir(), "loopwright-bench-client-"));
+  const clientDir = prebuilt ?? mkdtempSync(join(tmpdir(), "loopwright-bench-client-"));
   const baseUrl = `http://127.0.0.1:${PORT}`;
   let server: ChildProcess | null = null;
   let stopping = false;
   const stop = async () => {
     stopping = true;
     if (server) await stopChild(server);
-    rmSync(clientDir, { recursive: true, force: true });
+    if (!prebuilt) rmSync(clientDir, { recursive: true, force: true });
   };
   try {
     // BENCH_NO_MINIFY=1: readable function names in profiles of the benchmarked page.
-    runOrThrow(bin("vite"), ["build", ...(process.env.BENCH_NO_MINIFY ? ["--minify", "false"] : []), "--outDir", clientDir, "--emptyOutDir", "--logLevel", "error"], "the client build failed");
+    if (!prebuilt) runOrThrow(bin("vite"), ["build", ...(process.env.BENCH_NO_MINIFY ? ["--minify", "false"] : []), "--outDir", clientDir, "--emptyOutDir", "--logLevel", "error"], "the client build failed");
     runOrThrow(bin("tsx"), ["server/tools/migrate.ts"], "migrating the bench database failed", { ...process.env, DATABASE_URL: databaseUrl });
     if (compiled) runOrThrow(process.execPath, ["server/tools/bootstrap/compile.mjs"], "compiling the server failed");
     const [cmd, args] = compiled ? [process.execPath, ["dist/server/main.js"]] : [bin("tsx"), ["server/main.ts"]];
