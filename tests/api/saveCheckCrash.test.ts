@@ -6,28 +6,13 @@ import { CHECK_CRASHED } from "@shared/api/versions";
 import { createApp } from "@server/app";
 import { createSaveCheck } from "@server/features/versions/check";
 import { ORIGIN, PASSWORD, signedUp, startTestApp, type TestApp } from "./support/harness";
+import { unityFeedback } from "../support/docBuilder";
 
 // A crash of the save-time check is a server bug: the version is stored all the same (201) with a result saying
 // the check failed, and the server logs the exception with its stack (common practice: never lose a user's work
 // to a server fault, never hide the fault from its developers).
 
-const servo = {
-  format: "loopwright-diagram",
-  version: 1,
-  parameters: { K: 4 },
-  blocks: [
-    { id: "r", type: "input" },
-    { id: "e", type: "sum", signs: ["+", "-"] },
-    { id: "g", type: "transfer", expr: "K/(s*(s+2))" },
-    { id: "y", type: "output" },
-  ],
-  wires: [
-    { id: "w1", from: "r", to: "e", port: 0 },
-    { id: "w2", from: "e", to: "g" },
-    { id: "w3", from: "g", to: "y" },
-    { id: "w4", from: "g", to: "e", port: 1 },
-  ],
-};
+const servo = unityFeedback("K/(s*(s+2))", { K: 4 });
 
 type LogLine = { level: number; msg: string; diagramId?: string; err?: { message: string; stack?: string } };
 
