@@ -42,6 +42,9 @@ export function createLiveSession(): LiveSession {
       if (!last) throw new Error("analyze before reduce");
       if (!last.exact.ok) return { ok: false, problems: last.exact.problems, parameters: [] };
       const { reduction } = last.exact;
+      // A chosen pair whose block was deleted since: the results panel falls back to the first pair, and so does this.
+      const pairGone = query.input !== null && !reduction.transfers.some((t) => t.input === query.input && t.output === query.output);
+      if (pairGone) query = { ...query, input: null, output: null };
       const brk = query.break;
       if (brk === null || reduction.diagram.doc.wires.some((w) => w.id === brk)) return analyzer(reduction, query);
       // The chosen wire was deleted since: keep analysing, at the default break, and say so.

@@ -150,6 +150,12 @@ describe("one reduction per change of what the result depends on", () => {
     expect(first.analysis.step.overshootPercent).toBeGreaterThan(0);
     expect(ok(session.analyze(query(edited))).analysis.step.overshootPercent).toBeCloseTo(0, 9);
   });
+  it("analyses the first pair when the chosen pair's block is gone, as the results panel shows it", () => {
+    const session = createLiveSession();
+    session.reduce(doc);
+    const gone = ok(session.analyze(query(doc, { input: "r-deleted", output: "y" })));
+    expect([gone.analysis.input, gone.analysis.output]).toEqual(["r", "y"]);
+  });
   it("keys the reduction on blocks, wires and parameters, not on layout, title or notes", () => {
     const moved = { ...doc, title: "Other", notes: "n", layout: { r: { x: 10, y: 20 } } };
     expect(reductionKey(moved)).toBe(reductionKey(doc));
