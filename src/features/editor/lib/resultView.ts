@@ -1,8 +1,19 @@
 import type { Problem } from "@shared/diagram/problems";
+import type { Block } from "@shared/diagram/schema";
 import type { LiveOutcome } from "@/features/editor/worker/liveProtocol";
 import type { ReductionResult, ReductionStep, TransferResult } from "@shared/reduce/result";
 
 export const pairKey = (t: Pick<TransferResult, "input" | "output">) => `${t.input}→${t.output}`;
+
+/** A block as the pair selector names it: its label with its id, or the id alone. Example: "Speed reference (r)". */
+export function blockName(blocks: readonly Pick<Block, "id" | "label">[] | undefined, id: string): string {
+  const label = blocks?.find((b) => b.id === id)?.label?.trim();
+  return label ? `${label} (${id})` : id;
+}
+
+/** A pair as the pair selector lists it. Example: "Speed reference (r) → Shaft speed (y)". */
+export const pairName = (blocks: readonly Pick<Block, "id" | "label">[] | undefined, t: Pick<TransferResult, "input" | "output">) =>
+  `${blockName(blocks, t.input)} → ${blockName(blocks, t.output)}`;
 
 export interface ResultView {
   result: ReductionResult | null;

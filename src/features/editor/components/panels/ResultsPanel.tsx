@@ -2,7 +2,7 @@ import { useId } from "react";
 import { toast } from "sonner";
 import { Button } from "@/components/Button";
 import { LargeTex } from "@/features/editor/components/LargeTex";
-import { pairKey, type ResultView } from "@/features/editor/lib/resultView";
+import { pairKey, pairName, type ResultView } from "@/features/editor/lib/resultView";
 import { resultLatex, resultPlainText, transferText } from "@/features/editor/lib/resultText";
 import type { LiveResult } from "@/features/editor/hooks/useLiveDiagram";
 
@@ -47,7 +47,7 @@ export function ResultsPanel({ live, view, stale, onPair }: Props) {
               <label htmlFor={pairId} className="text-ink-soft">Input → output</label>
               <select id={pairId} value={pairKey(transfer)} onChange={(e) => onPair(e.target.value)} className="rounded border border-rule-strong bg-paper-raised px-2 py-1">
                 {transfers.map((t) => (
-                  <option key={pairKey(t)} value={pairKey(t)}>{t.input} → {t.output}</option>
+                  <option key={pairKey(t)} value={pairKey(t)}>{pairName(live.doc?.blocks, t)}</option>
                 ))}
               </select>
             </div>
