@@ -12,6 +12,10 @@ test("an owner creates, renames, archives and restores a diagram", async ({ page
   await page.getByLabel("Title").fill("Condenser fan speed");
   await page.getByLabel("Description (optional)").fill("Outer loop on head pressure.");
   await page.getByRole("button", { name: "Create diagram" }).click();
+  // A new diagram opens in the editor; back on the team page it is listed.
+  await expect(page.getByRole("heading", { level: 1, name: "Condenser fan speed" })).toBeVisible();
+  await expect(page).toHaveURL(/\/diagrams\/[0-9a-f-]{36}$/);
+  await page.goBack();
   const table = page.getByRole("table", { name: "Diagrams" });
   const row = table.getByRole("row").filter({ hasText: "Condenser fan speed" });
   await expect(row).toContainText("none yet");

@@ -1,7 +1,9 @@
 import { useForm } from "react-hook-form";
+import { useNavigate } from "react-router-dom";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { toast } from "sonner";
 import { createDiagramSchema } from "@shared/api/diagrams";
+import { href } from "@shared/routes";
 import { Button } from "@/components/Button";
 import { FormError, TextAreaField, TextField } from "@/components/Field";
 import { showServerError } from "@/lib/forms";
@@ -9,6 +11,7 @@ import { useCreateDiagram } from "@/features/diagrams/api/createDiagram";
 
 export function CreateDiagramForm({ teamId }: { teamId: string }) {
   const create = useCreateDiagram(teamId);
+  const navigate = useNavigate();
   const form = useForm({ resolver: zodResolver(createDiagramSchema), defaultValues: { title: "", description: "" } });
   const { errors, isSubmitting } = form.formState;
 
@@ -17,6 +20,8 @@ export function CreateDiagramForm({ teamId }: { teamId: string }) {
       (d) => {
         toast.success(`Diagram “${d.title}” created.`);
         form.reset();
+        // A new diagram is made to be drawn: open it in the editor.
+        navigate(href.diagram(d.id));
       },
       (e) => showServerError(e, form.setError, ["title", "description"], "title"),
     ),
