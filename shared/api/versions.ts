@@ -48,6 +48,11 @@ export interface InvalidDocumentBody {
   problems: Problem[];
 }
 
+/** `GET /api/diagrams/:id/versions?limit=n`: only the newest n versions. Example: { limit: 1 }. */
+export const versionListQuerySchema = z.object({
+  limit: z.coerce.number().int().min(1, "limit is at least 1").max(1000, "limit is at most 1000").optional(),
+});
+
 export interface VersionListItem {
   number: number;
   message: string;

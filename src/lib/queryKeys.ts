@@ -11,5 +11,6 @@ export const queryKeys = {
   diagrams: (teamId: string) => ["teams", teamId, "diagrams"] as const,
   diagramList: (teamId: string, archived: boolean) => ["teams", teamId, "diagrams", { archived }] as const,
   diagram: (id: string) => ["diagrams", id] as const,
+  newestVersion: (id: string) => ["diagrams", id, "versions", "newest"] as const,
   invitation: (token: string) => ["invitations", token] as const,
 };

@@ -72,6 +72,17 @@ describe("saving versions", () => {
     expect(list.map((v: { message: string }) => v.message)).not.toContain("mine");
   });
 
+  it("lists only the newest version with ?limit=1 (what an open editor polls), and refuses a bad limit naming it", async () => {
+    const all = (await owner.client.get(`/api/diagrams/${diagramId}/versions`)).body.versions;
+    const newest = await owner.client.get(`/api/diagrams/${diagramId}/versions?limit=1`);
+    expect(newest.status).toBe(200);
+    expect(newest.body.versions).toEqual([all[0]]);
+    expect(all[0].number).toBe(Math.max(...all.map((v: { number: number }) => v.number)));
+    const bad = await owner.client.get(`/api/diagrams/${diagramId}/versions?limit=0`);
+    expect(bad.status).toBe(422);
+    expect(JSON.stringify(bad.body.error)).toContain("limit");
+  });
+
   it("lets exactly one of two simultaneous saves on the same base win", async () => {
     const base = (await owner.client.get(`/api/diagrams/${diagramId}`)).body.latestVersion.number as number;
     const [a, b] = await Promise.all(

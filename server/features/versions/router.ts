@@ -1,5 +1,5 @@
 import { Router } from "express";
-import { saveVersionSchema } from "@shared/api/versions";
+import { saveVersionSchema, versionListQuerySchema } from "@shared/api/versions";
 import type { DiagramDocument } from "@shared/diagram/schema";
 import { loadDiagram } from "@shared/diagram/validate";
 import { diagramWithRole } from "@server/features/diagrams/access";
@@ -21,7 +21,8 @@ export function versionsRouter(check: SaveCheck): Router {
   const router = Router();
   router.get("/:id/versions", async (req, res) => {
     const { diagram } = await diagramWithRole(requireUser(res).id, req.params.id, "viewer");
-    res.json({ versions: await listVersions(diagram.id) });
+    const { limit } = parseWith(versionListQuerySchema, req.query);
+    res.json({ versions: await listVersions(diagram.id, limit) });
   });
   router.get("/:id/versions/:number", async (req, res) => {
     const { diagram } = await diagramWithRole(requireUser(res).id, req.params.id, "viewer");

@@ -58,8 +58,9 @@ export async function saveVersion(diagram: Diagram, userId: string, input: SaveV
   return versionView(Object.assign(saved, { author: (await User.findByPk(userId)) ?? undefined }));
 }
 
-export async function listVersions(diagramId: string): Promise<VersionListItem[]> {
-  const rows = (await DiagramVersion.findAll({ where: { diagramId }, order: [["number", "DESC"]], ...withAuthor })) as WithAuthor[];
+/** The diagram's versions, newest first; `limit` keeps only the newest ones (an open editor asks for 1 every few seconds). */
+export async function listVersions(diagramId: string, limit?: number): Promise<VersionListItem[]> {
+  const rows = (await DiagramVersion.findAll({ where: { diagramId }, order: [["number", "DESC"]], limit, ...withAuthor })) as WithAuthor[];
   return rows.map((v) => ({
     number: v.number,
     message: v.message,

@@ -8,6 +8,8 @@ import { loadDiagram } from "@shared/diagram/validate";
 import { PageTitle } from "@/components/PageTitle";
 import { LoadError, Loading } from "@/components/QueryState";
 import { editorDiagramQuery, useEditorDiagram } from "@/features/editor/api/getEditorDiagram";
+import { useNewestVersion } from "@/features/editor/api/getNewestVersion";
+import type { SavedVersion } from "@/features/editor/components/SessionBanners";
 import { emptyDocument, withWireIds } from "@/features/editor/commands/document";
 import type { EditorDoc } from "@/features/editor/commands/types";
 import { EditorSession } from "@/features/editor/components/EditorSession";
@@ -25,9 +27,14 @@ function openLatest(detail: DiagramDetail): Opened {
   return { ok: true, doc: withWireIds(loaded.doc), baseVersion: latest.number };
 }
 
+/** The newer of two views of the newest version (either may lag the other). */
+const newerOf = (a: SavedVersion | null, b: SavedVersion | null): SavedVersion | null => (!a ? b : !b ? a : b.number > a.number ? b : a);
+
 /** /diagrams/:id — loads the diagram and opens an editing session on its latest version. */
 export function EditorPage({ id }: { id: string }) {
   const detail = useEditorDiagram(id);
+  // A teammate's save shows within a few seconds: the newest version is polled apart from the (large) detail.
+  const newest = useNewestVersion(id);
   const queryClient = useQueryClient();
   // A session lives until the user reloads on purpose; background refetches only feed the "newer version" notice.
   const [session, setSession] = useState<{ key: number; opened: Opened } | null>(null);
@@ -75,7 +82,7 @@ export function EditorPage({ id }: { id: string }) {
           diagram={d}
           initialDoc={current.opened.doc}
           baseVersion={current.opened.baseVersion}
-          latestNow={detail.data.latestVersion}
+          latestNow={newerOf(detail.data.latestVersion, newest.data ?? null)}
           onReload={reload}
         />
       </ReactFlowProvider>

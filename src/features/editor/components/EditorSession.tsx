@@ -1,5 +1,5 @@
 import { lazy, Suspense, useCallback, useMemo, useRef, useState } from "react";
-import type { DiagramDetail, LatestVersionView } from "@shared/api/diagrams";
+import type { DiagramDetail } from "@shared/api/diagrams";
 import type { Problem } from "@shared/diagram/problems";
 import { Panel } from "@/components/Panel";
 import type { EditorDoc, Point, Selection } from "@/features/editor/commands/types";
@@ -10,7 +10,7 @@ import { CanvasNotice, type Notice } from "@/features/editor/components/CanvasNo
 import { DiagramCanvas } from "@/features/editor/components/DiagramCanvas";
 import { BlockRail } from "@/features/editor/components/BlockRail";
 import { EditorToolbar } from "@/features/editor/components/EditorToolbar";
-import { SessionBanners } from "@/features/editor/components/SessionBanners";
+import { SessionBanners, type SavedVersion } from "@/features/editor/components/SessionBanners";
 import { SessionDialogs } from "@/features/editor/components/SessionDialogs";
 import { StepBadge } from "@/features/editor/components/StepBadge";
 import { ParameterTable } from "@/features/editor/components/panels/ParameterTable";
@@ -38,7 +38,7 @@ interface Props {
   initialDoc: EditorDoc;
   baseVersion: number;
   /** The latest version the server knows now (refetched in the background). */
-  latestNow: LatestVersionView | null;
+  latestNow: SavedVersion | null;
   onReload: () => Promise<void>;
 }
 
@@ -170,6 +170,7 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
         readOnly={readOnly}
         base={base}
         latestNow={latestNow}
+        dirty={dirty}
         draft={draft.offer}
         onRestore={restoreDraft}
         onDiscardDraft={() => {

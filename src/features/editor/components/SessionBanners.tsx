@@ -1,13 +1,22 @@
-import type { DiagramDetail, LatestVersionView } from "@shared/api/diagrams";
+import { useState } from "react";
+import type { DiagramDetail } from "@shared/api/diagrams";
 import { Button } from "@/components/Button";
 import type { Draft } from "@/features/editor/lib/draft";
 import { formatDateTime } from "@/lib/format";
+
+/** What the notice needs of the newest saved version. */
+export interface SavedVersion {
+  number: number;
+  createdBy: string;
+}
 
 interface Props {
   diagram: DiagramDetail["diagram"];
   readOnly: boolean;
   base: number;
-  latestNow: LatestVersionView | null;
+  latestNow: SavedVersion | null;
+  /** The session has changes not saved yet: opening the newer version would drop them. */
+  dirty: boolean;
   draft: Draft | null;
   onRestore: () => void;
   onDiscardDraft: () => void;
@@ -17,7 +26,9 @@ interface Props {
 const note = "mb-3 flex flex-wrap items-center gap-x-4 gap-y-2 rounded border px-3 py-2 text-sm";
 
 /** Notes above the editor: archived, read only, a draft to restore, a newer version saved by someone else. */
-export function SessionBanners({ diagram, readOnly, base, latestNow, draft, onRestore, onDiscardDraft, onReload }: Props) {
+export function SessionBanners({ diagram, readOnly, base, latestNow, dirty, draft, onRestore, onDiscardDraft, onReload }: Props) {
+  // "Keep editing" hides the notice for that version; a later one shows it again.
+  const [kept, setKept] = useState(0);
   return (
     <>
       {diagram.archivedAt && (
@@ -39,13 +50,14 @@ export function SessionBanners({ diagram, readOnly, base, latestNow, draft, onRe
           <Button size="sm" variant="quiet" onClick={onDiscardDraft}>Discard draft</Button>
         </div>
       )}
-      {latestNow && latestNow.number > base && !draft && (
+      {latestNow && latestNow.number > base && latestNow.number > kept && !draft && (
         <div role="status" className={`${note} border-trace/50 bg-trace-tint`}>
           <p className="flex-1">
             {latestNow.createdBy || "Someone"} saved v{latestNow.number} after the v{base || 0} you are editing.
             {readOnly ? "" : " Saving will ask whether to load it or keep yours as a new diagram."}
           </p>
-          {readOnly && <Button size="sm" onClick={onReload}>Load v{latestNow.number}</Button>}
+          {(readOnly || !dirty) && <Button size="sm" onClick={onReload}>Open v{latestNow.number}</Button>}
+          <Button size="sm" variant="quiet" onClick={() => setKept(latestNow.number)}>Keep editing</Button>
         </div>
       )}
     </>

@@ -1,0 +1,49 @@
+import { expect, test } from "@playwright/test";
+import { createTeam, seedDiagram, signUp, uniqueEmail } from "./helpers";
+
+/** A plant in unity feedback; the teammate's version changes the plant's gain. */
+const loopWith = (plant: string) => ({
+  format: "loopwright-diagram",
+  version: 1,
+  title: "Winder tension loop",
+  parameters: {},
+  blocks: [
+    { id: "r", type: "input" },
+    { id: "e", type: "sum", signs: ["+", "-"] },
+    { id: "G", type: "transfer", expr: plant },
+    { id: "y", type: "output" },
+  ],
+  wires: [
+    { id: "w1", from: "r", to: "e", port: 0 },
+    { id: "w2", from: "e", to: "G" },
+    { id: "w3", from: "G", to: "y" },
+    { id: "w4", from: "G", to: "e", port: 1 },
+  ],
+  layout: { r: { x: 0, y: 0 }, e: { x: 160, y: 0 }, G: { x: 320, y: 0 }, y: { x: 520, y: 0 } },
+});
+
+test("an open editor learns within 5 s that a teammate saved, and opens the newer version on request", async ({ page }) => {
+  test.setTimeout(120_000);
+  await signUp(page, "Tess Tension", uniqueEmail("tension"));
+  const teamId = await createTeam(page, `Winder line ${Date.now()}`);
+  const id = await seedDiagram(page, teamId, loopWith("1/(s + 1)"), "First tuning");
+  await page.goto(`/diagrams/${id}`);
+  const result = page.getByLabel("Closed-loop transfer function as text");
+  // common practice: unity feedback around 1/(s + 1) closes to 1/(s + 2).
+  await expect(result).toHaveText("1/(s + 2)", { timeout: 60_000 });
+
+  // A teammate's save, through the API as their editor would send it.
+  const origin = new URL(page.url()).origin;
+  const saved = await page.request.post(`/api/diagrams/${id}/versions`, {
+    data: { baseVersion: 1, message: "Stiffer plant", document: loopWith("3/(s + 1)") },
+    headers: { Origin: origin },
+  });
+  expect(saved.status()).toBe(201);
+
+  const notice = page.getByRole("status").filter({ hasText: "saved v2 after the v1 you are editing" });
+  await expect(notice).toBeVisible({ timeout: 5_000 });
+  await notice.getByRole("button", { name: "Open v2" }).click();
+  // 3/(s + 1) in unity feedback closes to 3/(s + 4).
+  await expect(result).toHaveText("3/(s + 4)", { timeout: 60_000 });
+  await expect(notice).toHaveCount(0);
+});
