@@ -1,6 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import request from "supertest";
 import type { CheckedResult } from "@shared/api/versions";
-import { invitationToken, PASSWORD, signedUp, startTestApp, uniqueEmail, type TestApp } from "./support/harness";
+import { createApp } from "@server/app";
+import { createSaveCheck, DEFAULT_BUDGET } from "@server/features/versions/check";
+import { invitationToken, ORIGIN, PASSWORD, signedUp, startTestApp, uniqueEmail, type TestApp } from "./support/harness";
 
 // Unity negative feedback around K/(s(s+2)): T = K/(s^2 + 2s + K) (from memory: Ogata, Modern Control Engineering,
 // the standard second-order servo example).
@@ -41,7 +44,7 @@ beforeAll(async () => {
 afterAll(() => t.close());
 
 const file = (content: unknown) => Buffer.from(typeof content === "string" ? content : JSON.stringify(content, null, 2));
-const importFile = (client: ReturnType<TestApp["client"]>, content: Buffer, filename = "loop.json") =>
+const importFile = (client: ReturnType<typeof request.agent>, content: Buffer, filename = "loop.json") =>
   client.post(`/api/teams/${teamId}/diagrams/import`).attach("file", content, { filename, contentType: "application/json" });
 const diagramIds = async () =>
   ((await owner.client.get(`/api/teams/${teamId}/diagrams`)).body.diagrams as { id: string }[]).map((d) => d.id).sort();
@@ -122,6 +125,18 @@ describe("importing a file as a new diagram", () => {
     const res = await importFile(owner.client, big);
     expect(res.status).toBe(413);
     expect(res.body.error).toEqual({ code: "too_large", message: "The file is larger than the 1 MB limit." });
+    expect(await diagramIds()).toEqual(before);
+  });
+
+  it("removes the new diagram again when saving its version 1 fails", async () => {
+    const before = await diagramIds();
+    // A check with no workers answers every save with 503 check_busy, after the import has created the diagram.
+    const busy = createApp({ ...t.deps, saveCheck: createSaveCheck({ log: t.deps.log, budget: { ...DEFAULT_BUDGET, concurrency: 0 } }) });
+    const client = request.agent(busy).set("Origin", ORIGIN);
+    await client.post("/api/auth/sign-in").send({ email: owner.user.email, password: PASSWORD }).expect(200);
+    const res = await importFile(client, file(servo));
+    expect(res.status).toBe(503);
+    expect(res.body.error.code).toBe("check_busy");
     expect(await diagramIds()).toEqual(before);
   });
 
