@@ -50,6 +50,7 @@ export function createApp(deps: AppDeps): Express {
   );
 
   const limiter = authLimiter(config.authRateLimit);
+  const saveCheck = deps.saveCheck ?? createSaveCheck({ log });
   const api = express.Router();
   api.use(requestLog(log));
   api.use((_req, res, next) => (res.set("Cache-Control", "no-store"), next()));
@@ -58,9 +59,9 @@ export function createApp(deps: AppDeps): Express {
   api.use(sessionMiddleware(deps.lucia));
   api.use(systemRouter({ sequelize: deps.sequelize, mailbox: deps.mailbox, demo: config.demo }));
   api.use("/auth", authRouter(deps.lucia, limiter));
-  api.use("/teams", teamsRouter(), teamInvitationsRouter({ mailer: deps.mailer, publicUrl: config.publicUrl }, limiter), teamDiagramsRouter());
+  api.use("/teams", teamsRouter(), teamInvitationsRouter({ mailer: deps.mailer, publicUrl: config.publicUrl }, limiter), teamDiagramsRouter(saveCheck));
   api.use("/invitations", invitationLinkRouter(limiter));
-  api.use("/diagrams", diagramsRouter(), versionsRouter(deps.saveCheck ?? createSaveCheck({ log })));
+  api.use("/diagrams", diagramsRouter(), versionsRouter(saveCheck));
   api.use(unknownApiRoute);
   app.use("/api", api);
 

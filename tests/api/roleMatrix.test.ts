@@ -46,6 +46,13 @@ beforeAll(async () => {
 afterAll(() => t.close());
 
 const emptyDocument = { format: "loopwright-diagram", version: 1, blocks: [], wires: [] };
+// Importing starts a new diagram, so the file must be a diagram without errors: a gain between input and output.
+const gainDocument = {
+  format: "loopwright-diagram",
+  version: 1,
+  blocks: [{ id: "r", type: "input" }, { id: "k", type: "gain", expr: "2" }, { id: "y", type: "output" }],
+  wires: [{ from: "r", to: "k" }, { from: "k", to: "y" }],
+};
 
 interface Route {
   name: string;
@@ -102,6 +109,17 @@ const routes: Route[] = [
       const base = (await clients.owner.get(`/api/diagrams/${diagramId}`)).body.diagram.latestVersion ?? 0;
       return c.post(`/api/diagrams/${diagramId}/versions`).send({ baseVersion: base, document: emptyDocument });
     },
+    expect: A(401, 404, 403, 201, 201),
+  },
+  {
+    name: "GET /api/diagrams/:id/versions/:n/document.json",
+    call: (c) => c.get(`/api/diagrams/${diagramId}/versions/1/document.json`), // version 1: saved by the route above
+    expect: A(401, 404, 200, 200, 200),
+  },
+  {
+    name: "POST /api/teams/:id/diagrams/import",
+    call: (c) =>
+      c.post(`/api/teams/${teamId}/diagrams/import`).attach("file", Buffer.from(JSON.stringify(gainDocument)), "matrix.json"),
     expect: A(401, 404, 403, 201, 201),
   },
   {

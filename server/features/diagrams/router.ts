@@ -1,13 +1,20 @@
-import { Router } from "express";
+import { Router, type Request } from "express";
 import { createDiagramSchema, updateDiagramSchema } from "@shared/api/diagrams";
 import { requireUser } from "@server/http/session";
 import { parseWith } from "@server/http/validate";
 import { requireRole } from "@server/features/teams/access";
 import { diagramWithRole } from "@server/features/diagrams/access";
 import { createDiagram, diagramDetail, listDiagrams, setArchived, updateDiagram } from "@server/features/diagrams/service";
+import { importDiagram } from "@server/features/diagrams/importDiagram";
+import { uploadedDiagram } from "@server/features/diagrams/uploadedDiagram";
+import type { SaveCheck } from "@server/features/versions/check";
+import { HttpError } from "@server/http/errors";
+import { singleFileUpload } from "@server/http/upload";
 
-/** Team-side routes (mounted under /api/teams). */
-export function teamDiagramsRouter(): Router {
+const MAX_IMPORT_BYTES = 1024 * 1024;
+
+/** Team-side routes (mounted under /api/teams); importing saves through the versions' check. */
+export function teamDiagramsRouter(check: SaveCheck): Router {
   const router = Router();
   router.get("/:teamId/diagrams", async (req, res) => {
     await requireRole(req.params.teamId, requireUser(res).id);
@@ -18,6 +25,18 @@ export function teamDiagramsRouter(): Router {
     await requireRole(req.params.teamId, user.id, "editor");
     res.status(201).json({ diagram: await createDiagram(req.params.teamId, user.id, parseWith(createDiagramSchema, req.body)) });
   });
+  router.post(
+    "/:teamId/diagrams/import",
+    // Access first, so the file of a non-member or viewer is never read.
+    async (req: Request<{ teamId: string }>, res, next) => (await requireRole(req.params.teamId, requireUser(res).id, "editor"), next()),
+    singleFileUpload("file", MAX_IMPORT_BYTES),
+    async (req: Request<{ teamId: string }>, res) => {
+      if (!req.file) throw new HttpError(422, "file_missing", 'Send the file in the form field "file".');
+      const { document, title } = uploadedDiagram(req.file);
+      const input = { document, title: parseWith(createDiagramSchema, { title }).title };
+      res.status(201).json({ diagram: await importDiagram(req.params.teamId, requireUser(res).id, input, check) });
+    },
+  );
   return router;
 }
 

@@ -59,6 +59,11 @@ export async function createDiagram(teamId: string, userId: string, input: Creat
   return summary(Object.assign(d, { creator: (await User.findByPk(userId)) ?? undefined }));
 }
 
+/** A stored diagram's summary as lists show it, with its latest version. */
+export async function summaryOf(d: Diagram): Promise<DiagramSummary> {
+  return summary(await (Diagram.findByPk(d.id, withCreator) as Promise<WithCreator>), (await latestVersions([d.id])).get(d.id));
+}
+
 /** The diagram row, or a 404 for an unknown or malformed id. */
 export async function findDiagram(id: string): Promise<Diagram> {
   const d = isUuid(id) ? await Diagram.findByPk(id) : null;
@@ -90,11 +95,11 @@ export async function updateDiagram(d: Diagram, input: UpdateDiagramInput): Prom
   if (input.title !== undefined) d.title = input.title;
   if (input.description !== undefined) d.description = input.description;
   await d.save();
-  return summary(await (Diagram.findByPk(d.id, withCreator) as Promise<WithCreator>), (await latestVersions([d.id])).get(d.id));
+  return summaryOf(d);
 }
 
 export async function setArchived(d: Diagram, archived: boolean): Promise<DiagramSummary> {
   d.archivedAt = archived ? new Date() : null;
   await d.save();
-  return summary(await (Diagram.findByPk(d.id, withCreator) as Promise<WithCreator>), (await latestVersions([d.id])).get(d.id));
+  return summaryOf(d);
 }

@@ -1,22 +1,13 @@
 import { Router } from "express";
 import { saveVersionSchema, versionListQuerySchema } from "@shared/api/versions";
-import type { DiagramDocument } from "@shared/diagram/schema";
-import { loadDiagram } from "@shared/diagram/validate";
 import { diagramWithRole } from "@server/features/diagrams/access";
 import type { SaveCheck } from "@server/features/versions/check";
-import { HttpError } from "@server/http/errors";
+import { diagramDocumentOf, documentFileName } from "@server/features/versions/document";
 import { requireUser } from "@server/http/session";
 import { parseWith } from "@server/http/validate";
 import { getVersion, listVersions, saveVersion } from "@server/features/versions/service";
 
-/** The request's document read as a diagram document; otherwise 422 with problems naming the field and block. */
-function diagramDocumentOf(raw: unknown): DiagramDocument {
-  const loaded = loadDiagram(raw);
-  if (loaded.doc) return loaded.doc;
-  throw new HttpError(422, "invalid_document", "This is not a Loopwright diagram document.", undefined, { problems: loaded.problems });
-}
-
-/** Versions of a diagram (mounted under /api/diagrams): list, read one, save the next. */
+/** Versions of a diagram (mounted under /api/diagrams): list, read one, download its document, save the next. */
 export function versionsRouter(check: SaveCheck): Router {
   const router = Router();
   router.get("/:id/versions", async (req, res) => {
@@ -27,6 +18,12 @@ export function versionsRouter(check: SaveCheck): Router {
   router.get("/:id/versions/:number", async (req, res) => {
     const { diagram } = await diagramWithRole(requireUser(res).id, req.params.id, "viewer");
     res.json({ version: await getVersion(diagram.id, Number(req.params.number)) });
+  });
+  router.get("/:id/versions/:number/document.json", async (req, res) => {
+    const { diagram } = await diagramWithRole(requireUser(res).id, req.params.id, "viewer");
+    const version = await getVersion(diagram.id, Number(req.params.number));
+    res.attachment(documentFileName(diagram.title, version.number)).type("application/json");
+    res.send(`${JSON.stringify(version.document, null, 2)}\n`);
   });
   router.post("/:id/versions", async (req, res) => {
     const user = requireUser(res);

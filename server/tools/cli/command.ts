@@ -1,5 +1,5 @@
 import { readFileSync, statSync } from "node:fs";
-import { parseJsonText } from "@server/tools/cli/jsonText";
+import { parseJsonText } from "@shared/json/jsonText";
 
 /**
  * What every Loopwright command-line tool shares: its exit contract (0 success, 1 bad file content,

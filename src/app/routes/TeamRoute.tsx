@@ -3,6 +3,7 @@ import { canEdit } from "@shared/api/teams";
 import { useTeam } from "@/features/teams/api/getTeam";
 import { CreateDiagramForm } from "@/features/diagrams/components/CreateDiagramForm";
 import { DiagramTable } from "@/features/diagrams/components/DiagramTable";
+import { ImportDiagramArea } from "@/features/diagrams/components/ImportDiagramArea";
 import { buttonClass } from "@/components/Button";
 import { PageTitle } from "@/components/PageTitle";
 import { Panel } from "@/components/Panel";
@@ -35,7 +36,13 @@ export function TeamRoute() {
           </p>
         )}
         <Panel title="Diagrams">
-          <DiagramTable teamId={teamId} editable={editable} />
+          {editable ? (
+            <ImportDiagramArea teamId={teamId}>
+              <DiagramTable teamId={teamId} editable />
+            </ImportDiagramArea>
+          ) : (
+            <DiagramTable teamId={teamId} editable={false} />
+          )}
         </Panel>
       </div>
     </>

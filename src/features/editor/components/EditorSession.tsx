@@ -10,6 +10,7 @@ import { CanvasNotice, type Notice } from "@/features/editor/components/CanvasNo
 import { DiagramCanvas } from "@/features/editor/components/DiagramCanvas";
 import { BlockRail } from "@/features/editor/components/BlockRail";
 import { EditorToolbar } from "@/features/editor/components/EditorToolbar";
+import { versionDocumentHref } from "@/features/editor/api/versionDocument";
 import { SessionBanners, type SavedVersion } from "@/features/editor/components/SessionBanners";
 import { SessionDialogs } from "@/features/editor/components/SessionDialogs";
 import { StepBadge } from "@/features/editor/components/StepBadge";
@@ -190,6 +191,7 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
         onFit={commands.fit}
         onHelp={() => setHelp(true)}
         onSave={save.open}
+        download={base ? { number: base, href: versionDocumentHref(diagram.id, base) } : null}
         status={status}
       />
       <div className={`grid h-[64vh] min-h-[480px] overflow-hidden rounded-b-md border border-rule ${readOnly ? "grid-cols-[1fr_20rem]" : "grid-cols-[auto_1fr_20rem]"}`}>

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { parseJsonText } from "@server/tools/cli/jsonText";
+import { parseJsonText } from "@shared/json/jsonText";
 
 // Where the first syntax error is, by the JSON grammar of RFC 8259 (outside reference for what is and
 // is not JSON); valid texts must parse exactly as JSON.parse does.

@@ -1,0 +1,28 @@
+import type { DiagramSummary } from "@shared/api/diagrams";
+import type { DiagramDocument } from "@shared/diagram/schema";
+import { createDiagram, findDiagram, summaryOf } from "@server/features/diagrams/service";
+import type { SaveCheck } from "@server/features/versions/check";
+import { saveVersion } from "@server/features/versions/service";
+import { Diagram } from "@server/db/models/diagram";
+
+/**
+ * A new diagram in the team whose version 1 is `document`, saved through the versions service so the server's
+ * check runs and its result is stored. If that save fails (e.g. 503 `check_busy`), the diagram is removed again:
+ * a failed import leaves nothing behind.
+ */
+export async function importDiagram(
+  teamId: string,
+  userId: string,
+  input: { title: string; document: DiagramDocument },
+  check: SaveCheck,
+): Promise<DiagramSummary> {
+  const created = await createDiagram(teamId, userId, { title: input.title });
+  const diagram = await findDiagram(created.id);
+  try {
+    await saveVersion(diagram, userId, { baseVersion: 0, message: "Imported from a file", document: input.document }, check);
+  } catch (e) {
+    await Diagram.destroy({ where: { id: diagram.id } });
+    throw e;
+  }
+  return summaryOf(diagram);
+}

@@ -1,0 +1,33 @@
+import { parseJsonText } from "@shared/json/jsonText";
+import type { DiagramDocument } from "@shared/diagram/schema";
+import { validDiagramOf } from "@server/features/versions/document";
+import { HttpError } from "@server/http/errors";
+
+export interface UploadedFile {
+  originalname: string;
+  buffer: Buffer;
+}
+
+const utf8 = new TextDecoder("utf-8", { fatal: true });
+
+function textOf(file: UploadedFile): string {
+  try {
+    return utf8.decode(file.buffer);
+  } catch {
+    throw new HttpError(422, "invalid_json", `${file.originalname} is not UTF-8 text, so it cannot be a JSON diagram file.`);
+  }
+}
+
+/**
+ * An uploaded .json file read as a new diagram: its document (422 `invalid_json` with line and column, or
+ * `invalid_document` with the problems) and its title, the document's own or else the file's name.
+ */
+export function uploadedDiagram(file: UploadedFile): { document: DiagramDocument; title: string } {
+  const parsed = parseJsonText(textOf(file));
+  if (!parsed.ok) {
+    const { line, column, message } = parsed.error;
+    throw new HttpError(422, "invalid_json", `${file.originalname} is not valid JSON at line ${line}, column ${column}: ${message}.`);
+  }
+  const document = validDiagramOf(parsed.value);
+  return { document, title: document.title?.trim() || file.originalname.replace(/\.json$/i, "") };
+}

@@ -1,0 +1,90 @@
+import { useState, type DragEvent, type ReactNode } from "react";
+import { useNavigate } from "react-router-dom";
+import { FileUp } from "lucide-react";
+import { toast } from "sonner";
+import { href } from "@shared/routes";
+import { buttonClass } from "@/components/Button";
+import { errorMessage, isApiError } from "@/lib/apiClient";
+import { useImportDiagram } from "@/features/diagrams/api/importDiagram";
+
+const hasFiles = (e: DragEvent) => e.dataTransfer.types.includes("Files");
+
+/**
+ * The diagram list with an "Import JSON" picker above it; a .json file dropped on the list imports too.
+ * The new diagram opens; the server's refusal (with the problems it found) is shown as an alert.
+ */
+export function ImportDiagramArea({ teamId, children }: { teamId: string; children: ReactNode }) {
+  const navigate = useNavigate();
+  const importing = useImportDiagram(teamId);
+  const [refusal, setRefusal] = useState<{ message: string; problems: string[] } | null>(null);
+  const [over, setOver] = useState(false);
+
+  const start = (file: File) => {
+    setRefusal(null);
+    if (!file.name.toLowerCase().endsWith(".json"))
+      return setRefusal({ message: `Only .json diagram files can be imported; “${file.name}” is not one.`, problems: [] });
+    importing.mutate(file, {
+      onSuccess: (d) => {
+        toast.success(`Diagram “${d.title}” imported.`);
+        void navigate(href.diagram(d.id));
+      },
+      onError: (e) => setRefusal({ message: errorMessage(e), problems: isApiError(e) ? e.problems.map((p) => p.message) : [] }),
+    });
+  };
+
+  const dragOver = (e: DragEvent) => {
+    if (!hasFiles(e)) return;
+    e.preventDefault(); // lets the drop happen
+    setOver(true);
+  };
+
+  const drop = (e: DragEvent) => {
+    if (!hasFiles(e)) return;
+    e.preventDefault();
+    setOver(false);
+    const file = e.dataTransfer.files[0];
+    if (file) start(file);
+  };
+
+  return (
+    <div
+      onDragOver={dragOver}
+      onDragLeave={() => setOver(false)}
+      onDrop={drop}
+      className={`flex flex-col gap-3 rounded ${over ? "outline-2 outline-dashed outline-signal" : ""}`}
+    >
+      <div className="flex flex-wrap items-center gap-3 text-sm">
+        <label className={`${buttonClass("secondary", "sm")} cursor-pointer focus-within:outline-2 focus-within:outline-signal`}>
+          <FileUp className="size-4" aria-hidden /> Import JSON
+          <input
+            type="file"
+            accept=".json,application/json"
+            className="sr-only"
+            disabled={importing.isPending}
+            onChange={(e) => {
+              const file = e.target.files?.[0];
+              e.target.value = ""; // picking the same file again after fixing it still fires a change
+              if (file) start(file);
+            }}
+          />
+        </label>
+        <span className="text-ink-soft" role="status">
+          {importing.isPending ? "Importing…" : "or drop a .json diagram file on the list"}
+        </span>
+      </div>
+      {refusal && (
+        <div role="alert" className="rounded border border-fault/40 bg-fault-tint px-4 py-3 text-sm">
+          <p className="font-medium text-fault">The file was not imported: {refusal.message}</p>
+          {refusal.problems.length > 0 && (
+            <ul className="mt-2 list-disc pl-5">
+              {refusal.problems.map((p, i) => (
+                <li key={i}>{p}</li>
+              ))}
+            </ul>
+          )}
+        </div>
+      )}
+      {children}
+    </div>
+  );
+}
