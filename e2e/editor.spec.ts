@@ -320,6 +320,8 @@ test("keyboard editing: duplicate, copy and paste, delete, nudge, auto layout an
   // Blocks deliberately out of order, then auto layout puts them left to right.
   for (const key of ["7", "4", "2", "1"]) await page.keyboard.press(key);
   await page.keyboard.press("f");
+  // Fit view animates the canvas: a click during it can land beside the block.
+  await settledBox(block(page, "Input r1"));
   await block(page, "Input r1").click();
   await page.getByLabel("Connect output to").selectOption({ label: "e1 port 0 (+)" });
   await page.getByRole("button", { name: "Connect", exact: true }).click();
