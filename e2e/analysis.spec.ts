@@ -1,26 +1,9 @@
 import { expect, test, type Page } from "@playwright/test";
 import { createTeam, seedDiagram, signUp, uniqueEmail } from "./helpers";
+import { unityLoop } from "./loops";
 
 /** Unity negative feedback around K/(s(s+2)), K = 4: r → e(+, −) → G → y, with G fed back into e's minus port. */
-const LOOP = {
-  format: "loopwright-diagram",
-  version: 1,
-  title: "Positioner loop",
-  parameters: { K: { value: 4, min: 0.4, max: 40, description: "positioner gain" } },
-  blocks: [
-    { id: "r", type: "input" },
-    { id: "e", type: "sum", signs: ["+", "-"] },
-    { id: "G", type: "transfer", expr: "K/(s*(s+2))" },
-    { id: "y", type: "output" },
-  ],
-  wires: [
-    { id: "w1", from: "r", to: "e", port: 0 },
-    { id: "w2", from: "e", to: "G" },
-    { id: "w3", from: "G", to: "y" },
-    { id: "w4", from: "G", to: "e", port: 1 },
-  ],
-  layout: { r: { x: 0, y: 0 }, e: { x: 160, y: 0 }, G: { x: 320, y: 0 }, y: { x: 520, y: 0 } },
-};
+const LOOP = unityLoop("Positioner loop", "K/(s*(s+2))", { K: { value: 4, min: 0.4, max: 40, description: "positioner gain" } });
 
 /** common practice: standard second-order formulas — for s² + 2s + K, ωn = √K, ζ = 1/√K, overshoot 100·exp(−ζπ/√(1−ζ²)) %. */
 const overshootFor = (K: number) => {

@@ -1,26 +1,9 @@
 import { expect, test } from "@playwright/test";
 import { createTeam, signUp, uniqueEmail } from "./helpers";
+import { unityLoop } from "./loops";
 
 /** Unity negative feedback around K/(s(s+2)): T = K/(s^2 + 2s + K) (from memory: Ogata, Modern Control Engineering). */
-const LOOP = {
-  format: "loopwright-diagram",
-  version: 1,
-  title: "Imported servo",
-  parameters: { K: 4 },
-  blocks: [
-    { id: "r", type: "input" },
-    { id: "e", type: "sum", signs: ["+", "-"] },
-    { id: "G", type: "transfer", expr: "K/(s*(s+2))" },
-    { id: "y", type: "output" },
-  ],
-  wires: [
-    { id: "w1", from: "r", to: "e", port: 0 },
-    { id: "w2", from: "e", to: "G" },
-    { id: "w3", from: "G", to: "y" },
-    { id: "w4", from: "G", to: "e", port: 1 },
-  ],
-  layout: { r: { x: 0, y: 0 }, e: { x: 160, y: 0 }, G: { x: 320, y: 0 }, y: { x: 520, y: 0 } },
-};
+const LOOP = unityLoop("Imported servo", "K/(s*(s+2))", { K: 4 });
 
 const jsonFile = (name: string, text: string) => ({ name, mimeType: "application/json", buffer: Buffer.from(text) });
 

@@ -1,26 +1,9 @@
 import { expect, test } from "@playwright/test";
 import { createTeam, seedDiagram, signUp, uniqueEmail } from "./helpers";
+import { unityLoop } from "./loops";
 
 /** A plant in unity feedback; the teammate's version changes the plant's gain. */
-const loopWith = (plant: string) => ({
-  format: "loopwright-diagram",
-  version: 1,
-  title: "Winder tension loop",
-  parameters: {},
-  blocks: [
-    { id: "r", type: "input" },
-    { id: "e", type: "sum", signs: ["+", "-"] },
-    { id: "G", type: "transfer", expr: plant },
-    { id: "y", type: "output" },
-  ],
-  wires: [
-    { id: "w1", from: "r", to: "e", port: 0 },
-    { id: "w2", from: "e", to: "G" },
-    { id: "w3", from: "G", to: "y" },
-    { id: "w4", from: "G", to: "e", port: 1 },
-  ],
-  layout: { r: { x: 0, y: 0 }, e: { x: 160, y: 0 }, G: { x: 320, y: 0 }, y: { x: 520, y: 0 } },
-});
+const loopWith = (plant: string) => unityLoop("Winder tension loop", plant);
 
 test("an open editor learns within 5 s that a teammate saved, and opens the newer version on request", async ({ page }) => {
   test.setTimeout(120_000);

@@ -4,27 +4,9 @@ import type { CheckedResult } from "@shared/api/versions";
 import { createApp } from "@server/app";
 import { createSaveCheck, DEFAULT_BUDGET } from "@server/features/versions/check";
 import { invitationToken, ORIGIN, PASSWORD, signedUp, startTestApp, uniqueEmail, type TestApp } from "./support/harness";
+import { servoDocument } from "./support/servo";
 
-// Unity negative feedback around K/(s(s+2)): T = K/(s^2 + 2s + K) (from memory: Ogata, Modern Control Engineering,
-// the standard second-order servo example).
-const servo = {
-  format: "loopwright-diagram",
-  version: 1,
-  title: "Winder tension",
-  parameters: { K: 4 },
-  blocks: [
-    { id: "r", type: "input" },
-    { id: "e", type: "sum", signs: ["+", "-"] },
-    { id: "g", type: "transfer", expr: "K/(s*(s+2))" },
-    { id: "y", type: "output" },
-  ],
-  wires: [
-    { id: "w1", from: "r", to: "e", port: 0 },
-    { id: "w2", from: "e", to: "g" },
-    { id: "w3", from: "g", to: "y" },
-    { id: "w4", from: "g", to: "e", port: 1, note: "kept: readers keep unknown fields" },
-  ],
-};
+const servo = servoDocument("Winder tension");
 
 let t: TestApp;
 let owner: Awaited<ReturnType<typeof signedUp>>;
