@@ -4,6 +4,7 @@
 import nerdamer from "nerdamer";
 import "nerdamer/Algebra.js"; // registers gcd, div, deg, partfrac with the parser
 import type { ExprNode } from "@shared/expr/ast";
+import { printForCas, type CasSyntax } from "./exprText";
 
 /** A quotient of two polynomials as nerdamer text. */
 export interface Fraction {
@@ -109,25 +110,7 @@ export function nPartialFractions(num: string, den: string): Fraction[] {
   return groups;
 }
 
+const NERDAMER: CasSyntax = { number: (n, d) => `(${n}/${d})`, spacing: "", power: "^" };
+
 /** Fully parenthesised nerdamer text of an expression tree. Example: (s + 1/2)^2 is "((s+(1/2)))^2". */
-export function exprNerdamer(e: ExprNode): string {
-  switch (e.kind) {
-    case "num":
-      return `(${e.num}/${e.den})`;
-    case "s":
-      return "s";
-    case "param":
-      return e.name;
-    case "add":
-    case "sub":
-    case "mul":
-    case "div": {
-      const op = { add: "+", sub: "-", mul: "*", div: "/" }[e.kind];
-      return `(${exprNerdamer(e.left)}${op}${exprNerdamer(e.right)})`;
-    }
-    case "neg":
-      return `(-${exprNerdamer(e.arg)})`;
-    case "pow":
-      return `(${exprNerdamer(e.base)})^${e.exp}`;
-  }
-}
+export const exprNerdamer = (e: ExprNode): string => printForCas(e, NERDAMER);

@@ -6,6 +6,7 @@ import { q, qAdd, qDiv, qMul, qNeg, qPow, qSub, type Q } from "@shared/algebra/r
 import type { ZPoly } from "@shared/algebra/zpoly";
 import type { ExprNode } from "@shared/expr/ast";
 import { runPythonSync } from "../../support/python";
+import { printForCas, type CasSyntax } from "../../support/exprText";
 
 export const num = (n: number, d = 1): ExprNode => {
   const r = q(n, d);
@@ -101,25 +102,7 @@ export const randomPoint = (symbolic: boolean): fc.Arbitrary<Point> =>
 export const runPython = <T>(program: string, input: unknown, timeoutMs = 60_000): T =>
   runPythonSync<T>({ code: program }, input, timeoutMs);
 
+const SYMPY: CasSyntax = { number: (n, d) => `Rational(${n}, ${d})`, spacing: " ", power: "**" };
+
 /** Fully parenthesised text of a tree in Python syntax, for the sympy reference. */
-export function exprPython(e: ExprNode): string {
-  switch (e.kind) {
-    case "num":
-      return `Rational(${e.num}, ${e.den})`;
-    case "s":
-      return "s";
-    case "param":
-      return e.name;
-    case "add":
-    case "sub":
-    case "mul":
-    case "div": {
-      const op = { add: "+", sub: "-", mul: "*", div: "/" }[e.kind];
-      return `(${exprPython(e.left)} ${op} ${exprPython(e.right)})`;
-    }
-    case "neg":
-      return `(-${exprPython(e.arg)})`;
-    case "pow":
-      return `(${exprPython(e.base)})**${e.exp}`;
-  }
-}
+export const exprPython = (e: ExprNode): string => printForCas(e, SYMPY);
