@@ -1,4 +1,5 @@
 import type { Sequelize } from "sequelize";
+import { initAuditModel } from "@server/db/models/audit";
 import { Diagram, DiagramVersion, initDiagramModels } from "@server/db/models/diagram";
 import { Invitation, Membership, Team, initTeamModels } from "@server/db/models/team";
 import { User, initUser } from "@server/db/models/user";
@@ -8,6 +9,7 @@ export function initModels(sequelize: Sequelize): void {
   initUser(sequelize);
   initTeamModels(sequelize);
   initDiagramModels(sequelize);
+  initAuditModel(sequelize);
   Membership.belongsTo(User, { foreignKey: "userId", as: "user" });
   Membership.belongsTo(Team, { foreignKey: "teamId", as: "team" });
   Team.hasMany(Membership, { foreignKey: "teamId", as: "memberships" });

@@ -2,6 +2,7 @@ import type { DiagramVersionView } from "@shared/api/diagrams";
 import type { CheckedResult, SaveVersion, VersionListItem } from "@shared/api/versions";
 import { Diagram, DiagramVersion } from "@server/db/models/diagram";
 import { User } from "@server/db/models/user";
+import { recordAudit } from "@server/features/audit/record";
 import type { SaveCheck } from "@server/features/versions/check";
 import { HttpError, notFound } from "@server/http/errors";
 
@@ -50,6 +51,10 @@ export async function saveVersion(diagram: Diagram, userId: string, input: SaveV
     const v = await DiagramVersion.create(
       { diagramId: diagram.id, number: current + 1, document: input.document, result: checked, message: input.message, createdBy: userId },
       { transaction },
+    );
+    await recordAudit(
+      { teamId: diagram.teamId, actorId: userId, kind: "version.saved", diagramId: diagram.id, subject: String(v.number), detail: { message: input.message } },
+      transaction,
     );
     diagram.changed("updatedAt", true);
     await diagram.save({ transaction });
