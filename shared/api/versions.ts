@@ -3,6 +3,7 @@ import type { DiagramDocument } from "@shared/diagram/schema";
 import type { Problem } from "@shared/diagram/problems";
 import type { ReductionResult } from "@shared/reduce/result";
 import type { DiagramVersionView } from "@shared/api/diagrams";
+import type { VersionSummary } from "@shared/analysis/versionSummary";
 
 /**
  * Saving a version: the editor sends the version it started from; the server refuses with 409 when another
@@ -28,11 +29,13 @@ export const CHECK_CRASHED = "check-crashed";
  * What the server stores in `diagram_versions.result` after re-running the reducer on the saved document:
  * its result, the diagram's problems, or — when the check itself did not finish — why: over the server's time or
  * memory budget, or crashed (a server bug, logged with its stack), with one problem saying so.
- * `engineMs` (the check's duration) keeps its first name: versions already stored carry it.
+ * `engineMs` (the check's duration) keeps its first name: versions already stored carry it. `summary` (the default
+ * pair's order, verdict, phase margin, overshoot; null when that pair cannot be analysed) is absent on versions stored
+ * before it existed.
  * Example: { ok: false, failure: "crashed", problems: [{ code: "check-crashed", … }], engineMs: 3.1 }.
  */
 export type CheckedResult =
-  | { ok: true; result: ReductionResult; engineMs: number }
+  | { ok: true; result: ReductionResult; engineMs: number; summary?: VersionSummary | null }
   | { ok: false; problems: Problem[]; engineMs: number }
   | { ok: false; failure: "over-budget" | "crashed"; problems: [Problem]; engineMs: number };
 
@@ -59,4 +62,11 @@ export interface VersionListItem {
   createdAt: string;
   createdBy: string;
   ok: boolean | null; // the check's verdict of the stored result; null when never checked
+  /** Error problems of a version saved with problems (0 when ok or never checked). */
+  problemCount: number;
+  /** The checked result's summary; null when there is none (saved with problems, or stored before summaries). */
+  summary: VersionSummary | null;
 }
+
+/** `POST /api/diagrams/:id/versions/:n/restore` → 201: the new version, saved with message "Restored from vN". */
+export const restoredMessage = (from: number) => `Restored from v${from}`;

@@ -117,6 +117,11 @@ const routes: Route[] = [
     expect: A(401, 404, 200, 200, 200),
   },
   {
+    name: "POST /api/diagrams/:id/versions/:n/restore",
+    call: (c) => c.post(`/api/diagrams/${diagramId}/versions/1/restore`),
+    expect: A(401, 404, 403, 201, 201),
+  },
+  {
     name: "POST /api/teams/:id/diagrams/import",
     call: (c) =>
       c.post(`/api/teams/${teamId}/diagrams/import`).attach("file", Buffer.from(JSON.stringify(gainDocument)), "matrix.json"),

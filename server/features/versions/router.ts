@@ -5,9 +5,9 @@ import type { SaveCheck } from "@server/features/versions/check";
 import { diagramDocumentOf, documentFileName } from "@server/features/versions/document";
 import { requireUser } from "@server/http/session";
 import { parseWith } from "@server/http/validate";
-import { getVersion, listVersions, saveVersion } from "@server/features/versions/service";
+import { getVersion, listVersions, restoreVersion, saveVersion } from "@server/features/versions/service";
 
-/** Versions of a diagram (mounted under /api/diagrams): list, read one, download its document, save the next. */
+/** Versions of a diagram (mounted under /api/diagrams): list, read one, download its document, save the next, restore one. */
 export function versionsRouter(check: SaveCheck): Router {
   const router = Router();
   router.get("/:id/versions", async (req, res) => {
@@ -31,6 +31,11 @@ export function versionsRouter(check: SaveCheck): Router {
     const { document, ...input } = parseWith(saveVersionSchema, req.body);
     const version = await saveVersion(diagram, user.id, { ...input, document: diagramDocumentOf(document) }, check);
     res.status(201).json({ version });
+  });
+  router.post("/:id/versions/:number/restore", async (req, res) => {
+    const user = requireUser(res);
+    const { diagram } = await diagramWithRole(user.id, req.params.id, "editor");
+    res.status(201).json({ version: await restoreVersion(diagram, user.id, Number(req.params.number), check) });
   });
   return router;
 }

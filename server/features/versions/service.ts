@@ -1,9 +1,10 @@
 import type { DiagramVersionView } from "@shared/api/diagrams";
-import type { CheckedResult, SaveVersion, VersionListItem } from "@shared/api/versions";
+import { restoredMessage, type CheckedResult, type SaveVersion, type VersionListItem } from "@shared/api/versions";
 import { Diagram, DiagramVersion } from "@server/db/models/diagram";
 import { User } from "@server/db/models/user";
 import { recordAudit } from "@server/features/audit/record";
 import type { SaveCheck } from "@server/features/versions/check";
+import { diagramDocumentOf } from "@server/features/versions/document";
 import { HttpError, notFound } from "@server/http/errors";
 
 type WithAuthor = DiagramVersion & { author?: User };
@@ -40,7 +41,13 @@ async function staleUnless(diagramId: string, baseVersion: number, current: numb
  * otherwise), and the save-time check re-runs the reducer on it in a worker. Documents with diagram problems, or
  * whose check did not finish, are kept with that as their result, so unfinished work is never lost.
  */
-export async function saveVersion(diagram: Diagram, userId: string, input: SaveVersion, check: SaveCheck): Promise<DiagramVersionView> {
+export async function saveVersion(
+  diagram: Diagram,
+  userId: string,
+  input: SaveVersion,
+  check: SaveCheck,
+  also?: { kind: "version.restored"; detail: Record<string, unknown> },
+): Promise<DiagramVersionView> {
   await staleUnless(diagram.id, input.baseVersion, (await latest(diagram.id))?.number ?? 0);
   const checked: CheckedResult = await check.run(input.document, { diagramId: diagram.id });
   const saved = await DiagramVersion.sequelize!.transaction(async (transaction) => {
@@ -56,6 +63,7 @@ export async function saveVersion(diagram: Diagram, userId: string, input: SaveV
       { teamId: diagram.teamId, actorId: userId, kind: "version.saved", diagramId: diagram.id, subject: String(v.number), detail: { message: input.message } },
       transaction,
     );
+    if (also) await recordAudit({ teamId: diagram.teamId, actorId: userId, kind: also.kind, diagramId: diagram.id, subject: String(v.number), detail: also.detail }, transaction);
     diagram.changed("updatedAt", true);
     await diagram.save({ transaction });
     return v;
@@ -71,8 +79,29 @@ export async function listVersions(diagramId: string, limit?: number): Promise<V
     message: v.message,
     createdAt: v.createdAt.toISOString(),
     createdBy: v.author?.name ?? "",
-    ok: v.result === null ? null : Boolean((v.result as CheckedResult).ok),
+    ...checkedSummary(v.result as CheckedResult | null),
   }));
+}
+
+/** The version table's reading of a stored check: its verdict, how many errors, the default pair's summary. */
+function checkedSummary(checked: CheckedResult | null): Pick<VersionListItem, "ok" | "problemCount" | "summary"> {
+  if (checked === null) return { ok: null, problemCount: 0, summary: null };
+  if (checked.ok) return { ok: true, problemCount: 0, summary: checked.summary ?? null };
+  return { ok: false, problemCount: checked.problems.filter((p) => p.severity === "error").length, summary: null };
+}
+
+/**
+ * Saves the document of version `from` as the diagram's next version ("Restored from vN"), checked like any save;
+ * the trail records the restore beside the save.
+ */
+export async function restoreVersion(diagram: Diagram, userId: string, from: number, check: SaveCheck): Promise<DiagramVersionView> {
+  const source = await getVersion(diagram.id, from);
+  const baseVersion = (await latest(diagram.id))?.number ?? 0;
+  const document = diagramDocumentOf(source.document);
+  return saveVersion(diagram, userId, { baseVersion, message: restoredMessage(from), document }, check, {
+    kind: "version.restored",
+    detail: { from },
+  });
 }
 
 export async function getVersion(diagramId: string, number: number): Promise<DiagramVersionView> {
