@@ -5,9 +5,13 @@ import { ratDenominator } from "@shared/algebra/ratfn";
 import { analyzeAt, type Analysis } from "@shared/analysis/analyze";
 import { AnalysisError } from "@shared/analysis/errors";
 import { prepareAnalysis } from "@shared/analysis/prepare";
-import type { ExactReduction } from "@shared/reduce/reduceDiagram";
+import { parseDiagram } from "@shared/diagram/parseDiagram";
+import type { Problem } from "@shared/diagram/problems";
+import { printReduction } from "@shared/reduce/printReduction";
+import { reduceDiagram, type ExactReduction, type ReduceOptions } from "@shared/reduce/reduceDiagram";
+import type { ReductionResult } from "@shared/reduce/result";
 
-/** Above this closed-loop order the save-time check gives the order only: the full analysis would cost seconds. */
+/** Above this closed-loop order only the order is given: the analysis would cost seconds (save check, compare view). */
 export const SUMMARY_MAX_ORDER = 40;
 
 /**
@@ -49,9 +53,8 @@ export function analyzeDefaultPair(reduction: ExactReduction, maxOrder = Infinit
   }
 }
 
-/** The summary of a reduction, or null when its default pair cannot be analysed (the reason is in the editor). */
-export function versionSummary(reduction: ExactReduction): VersionSummary | null {
-  const pair = analyzeDefaultPair(reduction, SUMMARY_MAX_ORDER);
+/** The summary of the default pair's analysis (null when there is no default pair or its analysis failed). */
+export function versionSummary(pair: DefaultPairAnalysis | null): VersionSummary | null {
   if (!pair) return null;
   const { input, output, order, analysis: a } = pair;
   if (!a) return order > SUMMARY_MAX_ORDER ? { input, output, order, stable: null, phaseMarginDeg: null, overshootPercent: null } : null;
@@ -63,4 +66,21 @@ export function versionSummary(reduction: ExactReduction): VersionSummary | null
     phaseMarginDeg: a.loop?.margins.phaseMarginDeg ?? null,
     overshootPercent: a.step.overshootPercent,
   };
+}
+
+export type CheckedDocument =
+  | { ok: true; result: ReductionResult; pair: DefaultPairAnalysis | null }
+  | { ok: false; problems: Problem[] };
+
+/**
+ * A document's published result and its default pair's analysis from one parse and one reduction: the save-time
+ * check (which keeps the summary) and the version comparison (which plots the analysis) both read it.
+ * Example: checkDocument(json).pair?.analysis?.loop?.margins.phaseMarginDeg.
+ */
+export function checkDocument(raw: unknown, opts: { limits?: ReduceOptions["limits"]; maxOrder?: number } = {}): CheckedDocument {
+  const parsed = parseDiagram(raw);
+  if (!parsed.ok) return { ok: false, problems: parsed.problems };
+  const reduced = reduceDiagram(parsed.diagram, { limits: opts.limits });
+  if (!reduced.ok) return reduced;
+  return { ok: true, result: printReduction(reduced.reduction), pair: analyzeDefaultPair(reduced.reduction, opts.maxOrder ?? SUMMARY_MAX_ORDER) };
 }
