@@ -1,4 +1,5 @@
 import type { DiagramDocument, Block } from "@shared/diagram/schema";
+import { hasExpression } from "@shared/diagram/blockKinds";
 import type { CheckedResult } from "@shared/api/versions";
 import { expressionLatex } from "@shared/expr/exprLatex";
 import { estimatedSize, fallbackPosition, inPoint, outPoint } from "@shared/geometry/blockBox";
@@ -70,7 +71,7 @@ export function diagramSvg({ document: doc, result, meta, pins = [], typeset }: 
   const layout = doc.layout ?? {};
   const placed = new Map<string, Placed>();
   doc.blocks.forEach((block, i) => {
-    const latex = block.type === "integrator" ? "\\frac{1}{s}" : "expr" in block ? expressionLatex(block.expr) : null;
+    const latex = block.type === "integrator" ? "\\frac{1}{s}" : hasExpression(block) ? expressionLatex(block.expr) : null;
     const tex = latex ? typeset(latex) : null;
     const at = layout[block.id] ?? fallbackPosition(i);
     placed.set(block.id, { block, x: at.x, y: at.y, ...sizeOf(block, tex), tex });
