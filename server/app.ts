@@ -12,6 +12,7 @@ import { invitationLinkRouter, teamInvitationsRouter } from "@server/features/in
 import { systemRouter } from "@server/features/system/router";
 import { teamsRouter } from "@server/features/teams/router";
 import { versionsRouter } from "@server/features/versions/router";
+import { exportRouter } from "@server/features/export/router";
 import { createSaveCheck, type SaveCheck } from "@server/features/versions/check";
 import { clientPages } from "@server/http/clientPages";
 import { originCheck } from "@server/http/csrf";
@@ -61,7 +62,7 @@ export function createApp(deps: AppDeps): Express {
   api.use("/auth", authRouter(deps.lucia, limiter));
   api.use("/teams", teamsRouter(), teamInvitationsRouter({ mailer: deps.mailer, publicUrl: config.publicUrl }, limiter), teamDiagramsRouter(saveCheck));
   api.use("/invitations", invitationLinkRouter(limiter));
-  api.use("/diagrams", diagramsRouter(), versionsRouter(saveCheck));
+  api.use("/diagrams", diagramsRouter(), versionsRouter(saveCheck), exportRouter());
   api.use(unknownApiRoute);
   app.use("/api", api);
 

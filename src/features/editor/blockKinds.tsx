@@ -6,10 +6,7 @@ import { GainNode, IntegratorNode, TransferNode } from "@/features/editor/compon
 import { SumNode } from "@/features/editor/components/nodes/SumNode";
 import { BranchNode, InputNode, OutputNode } from "@/features/editor/components/nodes/TerminalNodes";
 
-/** How the overview of a large diagram outlines a block (see OverviewLayer). */
-export type OverviewShape = "circle" | "dot" | "triangle" | "pill" | "box";
-
-/** What the editor shows and does for one block kind; its signal role lives in shared/diagram/blockKinds.ts. */
+/** What the editor shows and does for one block kind; its signal role lives in shared/diagram/blockKinds.ts, its outline in shared/geometry/blockShape.ts. */
 export interface BlockKindView {
   /** The kind's name in labels and headings. */
   name: string;
@@ -21,7 +18,6 @@ export interface BlockKindView {
   create: (id: string) => Block;
   /** The canvas node that draws it. */
   node: NodeTypes[string];
-  overview: OverviewShape;
 }
 
 /** Every block kind of the editor in one row each, in rail order; a new kind in the schema makes the compiler ask for its row. */
@@ -32,7 +28,6 @@ export const BLOCK_VIEWS: Record<BlockType, BlockKindView> = {
     idPrefix: "r",
     create: (id) => ({ id, type: "input" }),
     node: InputNode,
-    overview: "pill",
   },
   sum: {
     name: "Summing junction",
@@ -41,7 +36,6 @@ export const BLOCK_VIEWS: Record<BlockType, BlockKindView> = {
     // A comparator: + reference, − feedback.
     create: (id) => ({ id, type: "sum", signs: ["+", "-"] }),
     node: SumNode,
-    overview: "circle",
   },
   gain: {
     name: "Gain",
@@ -49,7 +43,6 @@ export const BLOCK_VIEWS: Record<BlockType, BlockKindView> = {
     idPrefix: "k",
     create: (id) => ({ id, type: "gain", expr: "1" }),
     node: GainNode,
-    overview: "triangle",
   },
   transfer: {
     name: "Transfer function",
@@ -57,7 +50,6 @@ export const BLOCK_VIEWS: Record<BlockType, BlockKindView> = {
     idPrefix: "G",
     create: (id) => ({ id, type: "transfer", expr: "1/(s + 1)" }),
     node: TransferNode,
-    overview: "box",
   },
   integrator: {
     name: "Integrator",
@@ -65,7 +57,6 @@ export const BLOCK_VIEWS: Record<BlockType, BlockKindView> = {
     idPrefix: "int",
     create: (id) => ({ id, type: "integrator" }),
     node: IntegratorNode,
-    overview: "box",
   },
   branch: {
     name: "Pickoff point",
@@ -73,7 +64,6 @@ export const BLOCK_VIEWS: Record<BlockType, BlockKindView> = {
     idPrefix: "p",
     create: (id) => ({ id, type: "branch" }),
     node: BranchNode,
-    overview: "dot",
   },
   output: {
     name: "Output",
@@ -81,7 +71,6 @@ export const BLOCK_VIEWS: Record<BlockType, BlockKindView> = {
     idPrefix: "y",
     create: (id) => ({ id, type: "output" }),
     node: OutputNode,
-    overview: "pill",
   },
 };
 

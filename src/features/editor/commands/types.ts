@@ -16,10 +16,7 @@ export interface EditorDoc {
   layout?: DiagramDocument["layout"];
 }
 
-export interface Point {
-  x: number;
-  y: number;
-}
+export type { Point } from "@shared/geometry/wireRoute";
 
 /** What is selected on the canvas, by id. */
 export interface Selection {

@@ -1,10 +1,11 @@
 import { memo, useMemo, type KeyboardEvent, type MouseEvent } from "react";
 import { useStore, ViewportPortal, type ReactFlowState } from "@xyflow/react";
 import type { Block } from "@shared/diagram/schema";
-import { BLOCK_VIEWS } from "@/features/editor/blockKinds";
+import { BLOCK_SHAPES } from "@shared/geometry/blockShape";
 import type { Severity } from "@shared/diagram/problems";
-import { boundsOf, inPoint, nodeBox, outPoint } from "@/features/editor/geometry/blockBox";
-import { arrowHead, midpointAlong, roundedPath, wireRoute, type Box } from "@/features/editor/geometry/wireRoute";
+import { boundsOf, inPoint, outPoint } from "@shared/geometry/blockBox";
+import { nodeBox } from "@/features/editor/geometry/nodeBox";
+import { arrowHead, midpointAlong, roundedPath, wireRoute, type Box } from "@shared/geometry/wireRoute";
 import { strokeColor } from "@/features/editor/components/nodes/nodeStyle";
 import { BreakMark, wireLook } from "@/features/editor/components/SignalEdgeView";
 import { portOfHandle, type FlowNode, type SignalEdge } from "@/features/editor/lib/flowModel";
@@ -52,7 +53,7 @@ const OverviewBlock = memo(function OverviewBlock({ block, named, x, y, width: w
     strokeWidth: selected || highlighted ? 4 : 2,
     strokeDasharray: problem === "error" && !selected && !highlighted ? "6 4" : undefined,
   };
-  const look = BLOCK_VIEWS[block.type].overview;
+  const look = BLOCK_SHAPES[block.type];
   const shape = {
     circle: () => <circle cx={x + w / 2} cy={y + h / 2} r={w / 2} {...paint} />,
     dot: () => <circle cx={x + w / 2} cy={y + h / 2} r={6} fill={stroke} />,

@@ -1,6 +1,6 @@
 import { memo, useMemo } from "react";
 import { BaseEdge, useStore, type EdgeProps, type InternalNode, type ReactFlowState } from "@xyflow/react";
-import { midpointAlong, roundedPath, sameBox, wireRoute, type Box, type WirePlace } from "@/features/editor/geometry/wireRoute";
+import { midpointAlong, roundedPath, sameBox, wireRoute, type Box, type WirePlace } from "@shared/geometry/wireRoute";
 import type { Severity } from "@shared/diagram/problems";
 import type { SignalEdge } from "@/features/editor/lib/flowModel";
 

@@ -1,10 +1,6 @@
 import type { Point } from "@/features/editor/commands/types";
-import type { Box } from "@/features/editor/geometry/wireRoute";
-
-export interface Size {
-  width: number;
-  height: number;
-}
+import type { Size } from "@shared/geometry/blockBox";
+import type { Box } from "@shared/geometry/wireRoute";
 
 /** Snap of the reveal region, so it changes only every few hundred flow pixels of panning. */
 const REGION_STEP = 400;

@@ -7,12 +7,14 @@ import { copySelection, deleteSelection, duplicate, paste, PASTE_OFFSET, selectA
 import { connect, type ConnectArgs } from "@/features/editor/commands/wires";
 import type { EditorDoc, Point, Selection } from "@/features/editor/commands/types";
 import type { Act } from "@/features/editor/components/EditorContext";
-import { boundsOf, nodeBox } from "@/features/editor/geometry/blockBox";
+import { boundsOf } from "@shared/geometry/blockBox";
+import { nodeBox } from "@/features/editor/geometry/nodeBox";
 import { useFitBox, WHOLE_DIAGRAM } from "@/features/editor/hooks/useFitBox";
 import { useShortcuts } from "@/features/editor/hooks/useShortcuts";
 import { autoLayout } from "@/features/editor/lib/autoLayout";
 import { BLOCK_TYPES, BLOCK_VIEWS } from "@/features/editor/blockKinds";
-import { fallbackPosition, type FlowNode } from "@/features/editor/lib/flowModel";
+import { fallbackPosition } from "@shared/geometry/blockBox";
+import type { FlowNode } from "@/features/editor/lib/flowModel";
 import { errorMessage } from "@/lib/apiClient";
 
 interface Args {

@@ -1,6 +1,6 @@
 import { useCallback } from "react";
 import { getViewportForBounds, useReactFlow, useStoreApi } from "@xyflow/react";
-import type { Box } from "@/features/editor/geometry/wireRoute";
+import type { Box } from "@shared/geometry/wireRoute";
 
 export interface FitOptions {
   /** Room around the box, as a fraction of the view. */

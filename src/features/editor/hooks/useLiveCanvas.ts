@@ -1,9 +1,10 @@
 import { useCallback, useEffect, useMemo } from "react";
 import { useStore, type ReactFlowState, type Viewport } from "@xyflow/react";
 import { FAR_ZOOM, useZoomBelow } from "@/features/editor/components/nodes/farView";
-import { boundsOf, nodeBox } from "@/features/editor/geometry/blockBox";
+import { boundsOf } from "@shared/geometry/blockBox";
+import { nodeBox } from "@/features/editor/geometry/nodeBox";
 import { inBox, revealRegion } from "@/features/editor/geometry/viewport";
-import { sameBox, type Box } from "@/features/editor/geometry/wireRoute";
+import { sameBox, type Box } from "@shared/geometry/wireRoute";
 import { useFitBox, WHOLE_DIAGRAM } from "@/features/editor/hooks/useFitBox";
 import type { FlowNode, SignalEdge } from "@/features/editor/lib/flowModel";
 

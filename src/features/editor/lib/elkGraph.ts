@@ -1,7 +1,7 @@
 import type { ElkExtendedEdge, ElkNode, ElkPort } from "elkjs/lib/elk-api";
 import type { Block } from "@shared/diagram/schema";
 import type { EditorDoc, Point } from "@/features/editor/commands/types";
-import { sumPortPlaces } from "@/features/editor/geometry/sumPorts";
+import { sumPortPlaces } from "@shared/geometry/sumPorts";
 
 type Size = { width: number; height: number };
 const ELK_SIDE = { left: "WEST", top: "NORTH", bottom: "SOUTH" } as const;

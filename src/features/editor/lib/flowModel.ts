@@ -3,7 +3,8 @@ import type { Block, BlockType } from "@shared/diagram/schema";
 import type { Severity } from "@shared/diagram/problems";
 import { BLOCK_VIEWS } from "@/features/editor/blockKinds";
 import type { EditorDoc, EditorWire, Point, Selection } from "@/features/editor/commands/types";
-import { sumPortPlaces, type Side } from "@/features/editor/geometry/sumPorts";
+import { fallbackPosition } from "@shared/geometry/blockBox";
+import { sumPortPlaces, type Side } from "@shared/geometry/sumPorts";
 
 /** What a block's node draws: the block itself and how the editor marks it. No callbacks live here. */
 export interface BlockNodeData<B extends Block = Block> extends Record<string, unknown> {
@@ -41,9 +42,6 @@ export const inHandle = (port: number | undefined) => (port === undefined ? "in"
 /** The junction port an input handle stands for ("in2" → 2); undefined for a single-input block's "in". */
 export const portOfHandle = (handle: string | null | undefined) => (handle && handle.startsWith("in") && handle !== "in" ? Number(handle.slice(2)) : undefined);
 export const OUT_HANDLE = "out";
-
-/** Where a block without a stored position is placed: a loose grid in document order. */
-export const fallbackPosition = (index: number): Point => ({ x: 48 + (index % 6) * 176, y: 48 + Math.floor(index / 6) * 128 });
 
 const blockAriaLabel = (b: Block) => `${BLOCK_VIEWS[b.type].name} ${b.id}${b.label ? ` (${b.label})` : ""}`;
 

@@ -1,8 +1,9 @@
 import { describe, expect, it } from "vitest";
 import type { Block } from "@shared/diagram/schema";
 import { emptyDocument } from "@/features/editor/commands/document";
-import { boundsOf, boxOf, estimatedSize, inPoint, nodeBox, outPoint } from "@/features/editor/geometry/blockBox";
-import { sumDiameter } from "@/features/editor/geometry/sumPorts";
+import { boundsOf, boxOf, estimatedSize, inPoint, outPoint } from "@shared/geometry/blockBox";
+import { nodeBox } from "@/features/editor/geometry/nodeBox";
+import { sumDiameter } from "@shared/geometry/sumPorts";
 import { buildNodes } from "@/features/editor/lib/flowModel";
 import { problemMarks } from "@/features/editor/lib/marks";
 

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { buildEdges, buildNodes, fallbackPosition, inHandle, portOfHandle } from "@/features/editor/lib/flowModel";
+import { fallbackPosition } from "@shared/geometry/blockBox";
+import { buildEdges, buildNodes, inHandle, portOfHandle } from "@/features/editor/lib/flowModel";
 import { problemMarks, stepFootprint } from "@/features/editor/lib/marks";
 import { unityLoop } from "../support";
 

@@ -1,7 +1,7 @@
 import { useMemo } from "react";
 import { Tex } from "@/features/editor/components/Tex";
 import { useFarView } from "@/features/editor/components/nodes/farView";
-import { expressionFraction, expressionLatex } from "@/features/editor/lib/exprLatex";
+import { expressionFraction, expressionLatex } from "@shared/expr/exprLatex";
 
 /** A plain-text fraction (or single line): three elements where typesetting takes dozens. */
 export function PlainFraction({ num, den }: { num: string; den: string | null }) {

@@ -7,7 +7,7 @@ import { blockMemo } from "@/features/editor/components/nodes/blockMemo";
 import { useFarView } from "@/features/editor/components/nodes/farView";
 import { OutPort } from "@/features/editor/components/nodes/Ports";
 import { handleClass, strokeColor } from "@/features/editor/components/nodes/nodeStyle";
-import { sumDiameter, sumPortPlaces, type PortPlace } from "@/features/editor/geometry/sumPorts";
+import { sumDiameter, sumPortPlaces, type PortPlace } from "@shared/geometry/sumPorts";
 import { inHandle, type NodeOf } from "@/features/editor/lib/flowModel";
 
 const POSITION = { left: Position.Left, top: Position.Top, bottom: Position.Bottom } as const;

@@ -4,7 +4,7 @@ import { setExpression } from "@/features/editor/commands/blocks";
 import { parameterNameRefusal, setParameter } from "@/features/editor/commands/parameters";
 import { useEditorActions } from "@/features/editor/components/EditorContext";
 import { Tex } from "@/features/editor/components/Tex";
-import { exprLatex } from "@/features/editor/lib/exprLatex";
+import { exprLatex } from "@shared/expr/exprLatex";
 
 interface Props {
   blockId: string;

@@ -3,7 +3,7 @@ import { Button } from "@/components/Button";
 import { addSumPort, removeSumPort, setSign } from "@/features/editor/commands/sum";
 import type { EditorDoc } from "@/features/editor/commands/types";
 import { useEditorActions } from "@/features/editor/components/EditorContext";
-import { sumPortPlaces } from "@/features/editor/geometry/sumPorts";
+import { sumPortPlaces } from "@shared/geometry/sumPorts";
 
 type Sum = Extract<Block, { type: "sum" }>;
 const SIDE = { left: "left", top: "top", bottom: "bottom" } as const;

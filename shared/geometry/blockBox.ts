@@ -1,9 +1,11 @@
 import type { Block } from "@shared/diagram/schema";
-import type { Point } from "@/features/editor/commands/types";
-import type { FlowNode } from "@/features/editor/lib/flowModel";
-import { sumDiameter, sumPortPlaces, type Side } from "@/features/editor/geometry/sumPorts";
-import type { Size } from "@/features/editor/geometry/viewport";
-import type { Box } from "@/features/editor/geometry/wireRoute";
+import { sumDiameter, sumPortPlaces, type Side } from "@shared/geometry/sumPorts";
+import type { Box, Point } from "@shared/geometry/wireRoute";
+
+export interface Size {
+  width: number;
+  height: number;
+}
 
 /** Approximate advance of one character of a block's text (mono 14 px; typeset formulas run a little wider). */
 const CHAR = 8.5;
@@ -11,8 +13,8 @@ const textWidth = (text: string, min: number, max: number) => Math.min(max, Math
 
 /**
  * About the size a block is drawn at, from its type and text, for a block the canvas has not measured yet
- * (the overview of a large diagram never mounts its blocks). Sizes follow the block views' own classes.
- * Example: a sum with 2 signs → 48 × 48; an integrator → 64 × 48.
+ * (the overview of a large diagram never mounts its blocks; the SVG export has no canvas). Sizes follow the
+ * editor's block views' own classes. Example: a sum with 2 signs → 48 × 48; an integrator → 64 × 48.
  */
 export function estimatedSize(block: Block): Size {
   switch (block.type) {
@@ -36,7 +38,10 @@ export function estimatedSize(block: Block): Size {
   }
 }
 
-/** The block's box: its measured size when the canvas has one, else the estimate. */
+/** Where a block without a stored position is placed: a loose grid in document order. Example: 0 → (48, 48). */
+export const fallbackPosition = (index: number): Point => ({ x: 48 + (index % 6) * 176, y: 48 + Math.floor(index / 6) * 128 });
+
+/** The block's box: its measured size when there is one, else the estimate. */
 export const boxOf = (block: Block, at: Point, measured: Size | undefined): Box => ({ ...at, ...(measured ?? estimatedSize(block)) });
 
 /** Where a wire leaves a block: the middle of its right side. */
@@ -61,6 +66,3 @@ export function boundsOf(boxes: Iterable<Box>): Box | null {
   }
   return x0 === Infinity ? null : { x: x0, y: y0, width: x1 - x0, height: y1 - y0 };
 }
-
-/** A canvas node's box: where it is drawn now (mid-drag included) and its measured or estimated size. */
-export const nodeBox = (n: FlowNode): Box => boxOf(n.data.block, n.position, n.measured?.width && n.measured.height ? { width: n.measured.width, height: n.measured.height } : undefined);

@@ -1,8 +1,8 @@
 import katex from "katex";
 import { describe, expect, it } from "vitest";
 import { parseExpression } from "@shared/expr/parse";
-import { runPythonSync } from "../../../support/python";
-import { boundedMemo, expressionFraction, expressionLatex, exprLatex, exprText, nameLatex } from "@/features/editor/lib/exprLatex";
+import { runPythonSync } from "../../support/python";
+import { boundedMemo, expressionFraction, expressionLatex, exprLatex, exprText, nameLatex } from "@shared/expr/exprLatex";
 
 const latexOf = (text: string, parameters: string[] = ["K", "tau", "K_p", "Kp", "a"]) => {
   const parsed = parseExpression(text, { allowS: true, parameters });

@@ -1,5 +1,9 @@
-import type { Point } from "@/features/editor/commands/types";
-import type { Side } from "@/features/editor/geometry/sumPorts";
+import type { Side } from "@shared/geometry/sumPorts";
+
+export interface Point {
+  x: number;
+  y: number;
+}
 
 export interface Box {
   x: number;

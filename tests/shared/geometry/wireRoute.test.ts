@@ -1,8 +1,8 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import type { Point } from "@/features/editor/commands/types";
-import { sumDiameter, sumPortPlaces, type Side } from "@/features/editor/geometry/sumPorts";
-import { arrowHead, GAP, midpointAlong, roundedPath, wireRoute, type Box } from "@/features/editor/geometry/wireRoute";
+import { sumDiameter, sumPortPlaces, type Side } from "@shared/geometry/sumPorts";
+import { arrowHead, GAP, midpointAlong, roundedPath, wireRoute, type Box } from "@shared/geometry/wireRoute";
 
 const box = (x: number, y: number, width = 80, height = 48): Box => ({ x, y, width, height });
 /** Output on the right edge, middle height. */

@@ -1,0 +1,36 @@
+import { describe, expect, it } from "vitest";
+import { DOMParser } from "@xmldom/xmldom";
+import { diagramSvg } from "@shared/export/diagramSvg";
+import { diagramDocumentSchema } from "@shared/diagram/schema";
+import { servoDocument } from "../../api/support/servo";
+
+// A stand-in typesetter: the builder only places what it is given.
+const typeset = (tex: string) => ({ svg: `<svg width="40" height="20"><path d="M0 0 L40 20"/><desc>${tex.length}</desc></svg>`, width: 40, height: 20 });
+const doc = diagramDocumentSchema.parse({ ...servoDocument("x"), layout: { r: { x: 0, y: 40 }, e: { x: 120, y: 34 }, g: { x: 240, y: 34 }, y: { x: 400, y: 40 } } });
+const build = (title = "Servo", pins = undefined as Parameters<typeof diagramSvg>[0]["pins"]) =>
+  diagramSvg({ document: doc, result: null, meta: { title, version: 3, savedAt: "2026-12-03T07:00:00.000Z" }, pins, typeset });
+const parse = (svg: string) => new DOMParser().parseFromString(svg, "image/svg+xml");
+
+describe("diagramSvg (common practice: SVG 1.1 as XML)", () => {
+  it("parses as XML, has no foreignObject, and names every block in a <title>", () => {
+    const svg = build();
+    const xml = parse(svg);
+    expect(xml.getElementsByTagName("foreignObject").length).toBe(0);
+    const titles = Array.from(xml.getElementsByTagName("title")).map((t) => t.textContent);
+    for (const b of doc.blocks) expect(titles.some((t) => t?.startsWith(b.id))).toBe(true);
+    expect(xml.getElementsByTagName("g").length).toBeGreaterThanOrEqual(doc.blocks.length);
+  });
+  it("draws an arrowhead per wire and the junction's signs", () => {
+    const xml = parse(build());
+    const heads = Array.from(xml.getElementsByTagName("path")).filter((p) => p.getAttribute("class") === "arrowhead");
+    expect(heads.length).toBe(doc.wires.length);
+    const signs = Array.from(xml.getElementsByTagName("text")).filter((t) => t.getAttribute("class") === "sign").map((t) => t.textContent);
+    expect(signs).toEqual(["+", "−"]);
+  });
+  it("escapes user strings and draws pins", () => {
+    const svg = build("A <&> B", [{ id: "c1", target: { blockId: "g" }, label: "Check <gain>" }]);
+    expect(svg).toContain("A &lt;&amp;&gt; B");
+    const pins = Array.from(parse(svg).getElementsByTagName("g")).filter((g) => g.getAttribute("class") === "pin");
+    expect(pins.length).toBe(1);
+  });
+});
