@@ -35,6 +35,7 @@ export function SharePanel({ diagramId, openVersion }: Props) {
   if (openVersion === 0) return <p className="text-sm text-ink-soft">Save a version first: a share link opens a saved version.</p>;
 
   const submit = () => {
+    if (!/^\s*\d*\s*$/.test(days)) return setError(`Expires after: a whole number of days from 1 to ${MAX_SHARE_LINK_DAYS}, or empty for never.`);
     const parsed = createShareLinkSchema.safeParse({
       version: target === "open" ? openVersion : null,
       expiresInDays: days.trim() === "" ? null : Number(days),
