@@ -10,9 +10,12 @@ import { authRouter } from "@server/features/auth/router";
 import { diagramsRouter, teamDiagramsRouter } from "@server/features/diagrams/router";
 import { invitationLinkRouter, teamInvitationsRouter } from "@server/features/invitations/router";
 import { systemRouter } from "@server/features/system/router";
+import { capabilityHeaders } from "@server/features/shareLinks/headers";
+import { sharePage } from "@server/features/shareLinks/page";
+import { diagramShareLinksRouter, sharedLinkRouter, teamShareLinksRouter } from "@server/features/shareLinks/router";
 import { teamsRouter } from "@server/features/teams/router";
 import { versionsRouter } from "@server/features/versions/router";
-import { exportRouter } from "@server/features/export/router";
+import { exportRouter, sharedExportRouter } from "@server/features/export/router";
 import { createSaveCheck, type SaveCheck } from "@server/features/versions/check";
 import { clientPages } from "@server/http/clientPages";
 import { originCheck } from "@server/http/csrf";
@@ -20,6 +23,7 @@ import { errorHandler, unknownApiRoute } from "@server/http/errors";
 import { authLimiter } from "@server/http/rateLimit";
 import { requestLog } from "@server/http/requestLog";
 import { sessionMiddleware } from "@server/http/session";
+import { paths } from "@shared/routes";
 import type { FakeMailService } from "@server/mail/fakeMailService";
 import { mailboxPage } from "@server/mail/mailboxPage";
 import type { Mailer } from "@server/mail/mailer";
@@ -60,9 +64,10 @@ export function createApp(deps: AppDeps): Express {
   api.use(sessionMiddleware(deps.lucia));
   api.use(systemRouter({ sequelize: deps.sequelize, mailbox: deps.mailbox, demo: config.demo }));
   api.use("/auth", authRouter(deps.lucia, limiter));
-  api.use("/teams", teamsRouter(), teamInvitationsRouter({ mailer: deps.mailer, publicUrl: config.publicUrl }, limiter), teamDiagramsRouter(saveCheck));
+  api.use("/teams", teamsRouter(), teamInvitationsRouter({ mailer: deps.mailer, publicUrl: config.publicUrl }, limiter), teamDiagramsRouter(saveCheck), teamShareLinksRouter());
   api.use("/invitations", invitationLinkRouter(limiter));
-  api.use("/diagrams", diagramsRouter(), versionsRouter(saveCheck), exportRouter());
+  api.use("/diagrams", diagramsRouter(), versionsRouter(saveCheck), exportRouter(), diagramShareLinksRouter({ publicUrl: config.publicUrl }));
+  api.use("/shared", capabilityHeaders, sharedExportRouter(), sharedLinkRouter());
   api.use(unknownApiRoute);
   app.use("/api", api);
 
@@ -72,9 +77,12 @@ export function createApp(deps: AppDeps): Express {
   }
 
   const clientDir = resolve(config.clientDir);
-  if (existsSync(join(clientDir, "index.html"))) {
+  const page = existsSync(join(clientDir, "index.html")) ? clientPages(clientDir) : null;
+  // A share link's page: its token is checked (404/410) before any page is sent.
+  app.use("/s/", requestLog(log), capabilityHeaders);
+  app.get(paths.share, sharePage(page));
+  if (page) {
     app.use(express.static(clientDir, { index: false, maxAge: "1h" }));
-    const page = clientPages(clientDir);
     // SPA fallback: every other GET that wants HTML gets the client, which routes it.
     app.get(/^\/(?!api\/|dev\/).*/, (req, res, next) =>
       req.accepts("html") ? void res.type("html").set("Cache-Control", "no-cache").send(page(req.path)) : next(),

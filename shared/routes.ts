@@ -11,6 +11,7 @@ export const paths = {
   team: "/teams/:teamId",
   members: "/teams/:teamId/members",
   diagram: "/diagrams/:id",
+  share: "/s/:token",
 } as const;
 
 type Path = (typeof paths)[keyof typeof paths];
@@ -53,6 +54,7 @@ export const href = {
   team: (teamId: string) => fillPath(paths.team, { teamId }),
   members: (teamId: string) => fillPath(paths.members, { teamId }),
   diagram: (id: string) => fillPath(paths.diagram, { id }),
+  share: (token: string) => fillPath(paths.share, { token }),
 };
 
 /** Only same-site paths are followed after sign-in, so a crafted ?next= cannot send anyone elsewhere. */

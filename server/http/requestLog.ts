@@ -1,13 +1,19 @@
 import type { RequestHandler } from "express";
 import type { Logger } from "pino";
 
-/** One structured log line per API request: method, path, status, duration. */
+/** Paths whose segment after the prefix is a capability token: logged as "[token]", so a log leaks no working link. */
+const TOKEN_PATHS = /^(\/s\/|\/api\/shared\/)[^/]+/;
+
+/** The path as logged: no query string, and share-link tokens redacted. Example: "/s/abc" → "/s/[token]". */
+export const loggedPath = (url: string): string => url.split("?")[0].replace(TOKEN_PATHS, "$1[token]");
+
+/** One structured log line per request: method, path, status, duration. */
 export function requestLog(log: Logger): RequestHandler {
   return (req, res, next) => {
     const start = process.hrtime.bigint();
     res.on("finish", () => {
       const ms = Number(process.hrtime.bigint() - start) / 1e6;
-      log.info({ method: req.method, path: req.originalUrl.split("?")[0], status: res.statusCode, ms: Math.round(ms * 10) / 10 }, "request");
+      log.info({ method: req.method, path: loggedPath(req.originalUrl), status: res.statusCode, ms: Math.round(ms * 10) / 10 }, "request");
     });
     next();
   };

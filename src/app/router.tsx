@@ -2,6 +2,7 @@ import { lazy } from "react";
 import { createBrowserRouter, Navigate } from "react-router-dom";
 import { AppShell } from "@/app/layout/AppShell";
 import { RequireAuth } from "@/app/RequireAuth";
+import { SharedShell } from "@/app/layout/SharedShell";
 import { loadDiagramRoute } from "@/app/routes/loadDiagramRoute";
 import { RouteError } from "@/app/routes/RouteError";
 import { paths } from "@shared/routes";
@@ -14,9 +15,12 @@ const TeamsRoute = lazy(() => import("@/app/routes/TeamsRoute").then((m) => ({ d
 const TeamRoute = lazy(() => import("@/app/routes/TeamRoute").then((m) => ({ default: m.TeamRoute })));
 const MembersRoute = lazy(() => import("@/app/routes/MembersRoute").then((m) => ({ default: m.MembersRoute })));
 const DiagramRoute = lazy(() => loadDiagramRoute().then((m) => ({ default: m.DiagramRoute })));
+const SharedRoute = lazy(() => import("@/app/routes/SharedRoute").then((m) => ({ default: m.SharedRoute })));
 const NotFoundRoute = lazy(() => import("@/app/routes/NotFoundRoute").then((m) => ({ default: m.NotFoundRoute })));
 
 export const router = createBrowserRouter([
+  // A share link's page stands outside the app's shell: no session, sign-in or team navigation.
+  { element: <SharedShell />, errorElement: <RouteError />, children: [{ path: paths.share, element: <SharedRoute /> }] },
   {
     element: <AppShell />,
     errorElement: <RouteError />,

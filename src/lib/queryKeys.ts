@@ -13,4 +13,7 @@ export const queryKeys = {
   diagram: (id: string) => ["diagrams", id] as const,
   newestVersion: (id: string) => ["diagrams", id, "versions", "newest"] as const,
   invitation: (token: string) => ["invitations", token] as const,
+  shareLinks: (diagramId: string) => ["diagrams", diagramId, "share-links"] as const,
+  teamShareLinks: (teamId: string) => ["teams", teamId, "share-links"] as const,
+  shared: (token: string) => ["shared", token] as const,
 };

@@ -25,6 +25,11 @@ async function pendingInvitation(): Promise<{ id: string; token: string }> {
   return { id: res.body.invitation.id, token: invitationToken(t.mailbox, email) };
 }
 
+async function shareLink(): Promise<{ id: string; url: string }> {
+  const res = await clients.owner.post(`/api/diagrams/${diagramId}/share-links`).send({ version: null, expiresInDays: null });
+  return res.body.shareLink;
+}
+
 beforeAll(async () => {
   t = await startTestApp();
   clients.anonymous = t.client();
@@ -120,6 +125,23 @@ const routes: Route[] = [
     name: "POST /api/diagrams/:id/versions/:n/restore",
     call: (c) => c.post(`/api/diagrams/${diagramId}/versions/1/restore`),
     expect: A(401, 404, 403, 201, 201),
+  },
+  {
+    name: "POST /api/diagrams/:id/share-links",
+    call: (c) => c.post(`/api/diagrams/${diagramId}/share-links`).send({ version: 1, expiresInDays: 7 }),
+    expect: A(401, 404, 403, 201, 201),
+  },
+  { name: "GET /api/diagrams/:id/share-links", call: (c) => c.get(`/api/diagrams/${diagramId}/share-links`), expect: A(401, 404, 403, 200, 200) },
+  {
+    name: "DELETE /api/diagrams/:id/share-links/:linkId",
+    call: async (c) => c.delete(`/api/diagrams/${diagramId}/share-links/${(await shareLink()).id}`),
+    expect: A(401, 404, 403, 204, 204),
+  },
+  { name: "GET /api/teams/:id/share-links", call: (c) => c.get(`/api/teams/${teamId}/share-links`), expect: A(401, 404, 403, 200, 200) },
+  {
+    name: "GET /api/shared/:token (no session needed)",
+    call: async (c) => c.get(`/api/shared/${(await shareLink()).url.split("/s/")[1]}`),
+    expect: A(200, 200, 200, 200, 200),
   },
   {
     name: "POST /api/teams/:id/diagrams/import",

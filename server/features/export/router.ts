@@ -3,6 +3,7 @@ import type { CheckedResult } from "@shared/api/versions";
 import type { DiagramDocument } from "@shared/diagram/schema";
 import { exportVersionSvg, svgToPng } from "@server/export/exportVersion";
 import { diagramWithRole } from "@server/features/diagrams/access";
+import { resolveShareToken } from "@server/features/shareLinks/resolve";
 import { documentFileName } from "@server/features/versions/document";
 import { getVersion } from "@server/features/versions/service";
 import { requireUser } from "@server/http/session";
@@ -17,15 +18,33 @@ export function exportRouter(): Router {
     const name = (ext: string) => documentFileName(diagram.title, v.number).replace(/\.json$/, ext);
     return { svg, name };
   };
-  router.get("/:id/versions/:number/export.svg", async (req, res) => {
-    const { svg, name } = await svgOf(req, res);
+  serveFigures(router, "/:id/versions/:number", svgOf);
+  return router;
+}
+
+/** The figure of the version a share link opens (mounted under /api/shared; no session: the token is the grant). */
+export function sharedExportRouter(): Router {
+  const router = Router();
+  serveFigures(router, "/:token", async (req) => {
+    const { title, version: v } = await resolveShareToken(String(req.params.token));
+    const svg = await exportVersionSvg({ title, versionNumber: v.number, savedAt: v.createdAt.toISOString(), document: v.document as DiagramDocument, result: v.result as CheckedResult | null });
+    return { svg, name: (ext: string) => documentFileName(title, v.number).replace(/\.json$/, ext) };
+  });
+  return router;
+}
+
+type Figure = (req: Request, res: Response) => Promise<{ svg: string; name: (ext: string) => string }>;
+
+/** `<base>/export.svg` and `<base>/export.png` (2×), as attachments with `?download=1`. */
+function serveFigures(router: Router, base: string, figure: Figure): void {
+  router.get(`${base}/export.svg`, async (req, res) => {
+    const { svg, name } = await figure(req, res);
     if (req.query.download === "1") res.attachment(name(".svg"));
     res.type("image/svg+xml").send(svg);
   });
-  router.get("/:id/versions/:number/export.png", async (req, res) => {
-    const { svg, name } = await svgOf(req, res);
+  router.get(`${base}/export.png`, async (req, res) => {
+    const { svg, name } = await figure(req, res);
     if (req.query.download === "1") res.attachment(name(".png"));
     res.type("image/png").send(svgToPng(svg));
   });
-  return router;
 }

@@ -4,6 +4,7 @@ import { useTeam } from "@/features/teams/api/getTeam";
 import { CreateDiagramForm } from "@/features/diagrams/components/CreateDiagramForm";
 import { DiagramTable } from "@/features/diagrams/components/DiagramTable";
 import { ImportDiagramArea } from "@/features/diagrams/components/ImportDiagramArea";
+import { TeamShareLinks } from "@/features/shareLinks/components/TeamShareLinks";
 import { buttonClass } from "@/components/Button";
 import { PageTitle } from "@/components/PageTitle";
 import { Panel } from "@/components/Panel";
@@ -44,6 +45,11 @@ export function TeamRoute() {
             <DiagramTable teamId={teamId} editable={false} />
           )}
         </Panel>
+        {editable && (
+          <Panel title="Share links">
+            <TeamShareLinks teamId={teamId} />
+          </Panel>
+        )}
       </div>
     </>
   );

@@ -12,7 +12,7 @@ import { useNewestVersion } from "@/features/editor/api/getNewestVersion";
 import type { SavedVersion } from "@/features/editor/components/SessionBanners";
 import { emptyDocument, withWireIds } from "@/features/editor/commands/document";
 import type { EditorDoc } from "@/features/editor/commands/types";
-import { EditorSession } from "@/features/editor/components/EditorSession";
+import { EditorSession, type ShareSlot } from "@/features/editor/components/EditorSession";
 import { warmLiveWorker } from "@/features/editor/hooks/useLiveDiagram";
 import { href } from "@shared/routes";
 
@@ -31,7 +31,7 @@ function openLatest(detail: DiagramDetail): Opened {
 const newerOf = (a: SavedVersion | null, b: SavedVersion | null): SavedVersion | null => (!a ? b : !b ? a : b.number > a.number ? b : a);
 
 /** /diagrams/:id — loads the diagram and opens an editing session on its latest version. */
-export function EditorPage({ id }: { id: string }) {
+export function EditorPage({ id, share }: { id: string; share?: ShareSlot }) {
   const detail = useEditorDiagram(id);
   // A teammate's save shows within a few seconds: the newest version is polled apart from the (large) detail.
   const newest = useNewestVersion(id);
@@ -84,6 +84,7 @@ export function EditorPage({ id }: { id: string }) {
           baseVersion={current.opened.baseVersion}
           latestNow={newerOf(detail.data.latestVersion, newest.data ?? null)}
           onReload={reload}
+          share={share}
         />
       </ReactFlowProvider>
     </>

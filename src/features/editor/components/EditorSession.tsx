@@ -1,4 +1,4 @@
-import { lazy, Suspense, useCallback, useMemo, useRef, useState } from "react";
+import { lazy, Suspense, useCallback, useMemo, useRef, useState, type ReactNode } from "react";
 import type { DiagramDetail } from "@shared/api/diagrams";
 import type { Problem } from "@shared/diagram/problems";
 import { Panel } from "@/components/Panel";
@@ -13,6 +13,7 @@ import { EditorToolbar } from "@/features/editor/components/EditorToolbar";
 import { versionDocumentHref } from "@/features/editor/api/versionDocument";
 import { SessionBanners, type SavedVersion } from "@/features/editor/components/SessionBanners";
 import { SessionDialogs } from "@/features/editor/components/SessionDialogs";
+import { Dialog } from "@/features/editor/components/dialogs/Dialog";
 import { StepBadge } from "@/features/editor/components/StepBadge";
 import { ParameterTable } from "@/features/editor/components/panels/ParameterTable";
 import { ProblemList } from "@/features/editor/components/panels/ProblemList";
@@ -35,6 +36,9 @@ import { pairKey, resultView } from "@/features/editor/lib/resultView";
 // The analysis views carry the charting library: a chunk of their own, loaded after the canvas.
 const AnalysisPanel = lazy(() => import("@/features/editor/components/analysis/AnalysisPanel").then((m) => ({ default: m.AnalysisPanel })));
 
+/** The share dialog's body for a diagram and the version open; the app passes it in from the share-links feature. */
+export type ShareSlot = (target: { diagramId: string; openVersion: number }) => ReactNode;
+
 interface Props {
   diagram: DiagramDetail["diagram"];
   initialDoc: EditorDoc;
@@ -42,11 +46,15 @@ interface Props {
   /** The latest version the server knows now (refetched in the background). */
   latestNow: SavedVersion | null;
   onReload: () => Promise<void>;
+  /** Read only whatever the role: nothing to save, no draft kept, no team notices (a share link's reader). */
+  viewOnly?: boolean;
+  /** Offers the toolbar's Share action to editors and owners. */
+  share?: ShareSlot;
 }
 
 /** One editing session on one version: document + history, canvas, panels, live result, saving. */
-export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onReload }: Props) {
-  const readOnly = diagram.role === "viewer";
+export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onReload, viewOnly = false, share }: Props) {
+  const readOnly = viewOnly || diagram.role === "viewer";
   const history = useEditorHistory(initialDoc);
   const { doc, run } = history;
   const [savedDoc, setSavedDoc] = useState(initialDoc);
@@ -118,6 +126,7 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
     },
   });
   const [help, setHelp] = useState(false);
+  const [sharing, setSharing] = useState(false);
   const firstField = useRef<HTMLInputElement>(null);
   const canvasBox = useRef<HTMLDivElement>(null);
 
@@ -157,30 +166,34 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
     draft.closeOffer();
   };
 
-  const status = readOnly
-    ? "Read only: you are a viewer of this team"
-    : dirty
-      ? `Unsaved changes${base ? ` since v${base}` : ""}${draft.failed ? " (this browser refused to keep a draft)" : " · draft kept in this browser"}`
-      : base
-        ? `Saved as v${base}`
-        : "No version saved yet";
+  const status = viewOnly
+    ? `Read only: version ${base}`
+    : readOnly
+      ? "Read only: you are a viewer of this team"
+      : dirty
+        ? `Unsaved changes${base ? ` since v${base}` : ""}${draft.failed ? " (this browser refused to keep a draft)" : " · draft kept in this browser"}`
+        : base
+          ? `Saved as v${base}`
+          : "No version saved yet";
 
   return (
     <EditorContext.Provider value={useMemo(() => ({ act, readOnly }), [act, readOnly])}>
-      <SessionBanners
-        diagram={diagram}
-        readOnly={readOnly}
-        base={base}
-        latestNow={latestNow}
-        dirty={dirty}
-        draft={draft.offer}
-        onRestore={restoreDraft}
-        onDiscardDraft={() => {
-          draft.clear();
-          draft.closeOffer();
-        }}
-        onReload={() => void onReload()}
-      />
+      {!viewOnly && (
+        <SessionBanners
+          diagram={diagram}
+          readOnly={readOnly}
+          base={base}
+          latestNow={latestNow}
+          dirty={dirty}
+          draft={draft.offer}
+          onRestore={restoreDraft}
+          onDiscardDraft={() => {
+            draft.clear();
+            draft.closeOffer();
+          }}
+          onReload={() => void onReload()}
+        />
+      )}
       <EditorToolbar
         readOnly={readOnly}
         undoLabel={history.undoLabel}
@@ -192,7 +205,8 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
         onFit={commands.fit}
         onHelp={() => setHelp(true)}
         onSave={save.open}
-        download={base ? { number: base, href: versionDocumentHref(diagram.id, base) } : null}
+        download={base && !viewOnly ? { number: base, href: versionDocumentHref(diagram.id, base) } : null}
+        onShare={share && !viewOnly ? () => setSharing(true) : undefined}
         status={status}
       />
       <div className={`grid h-[64vh] min-h-[480px] overflow-hidden rounded-b-md border border-rule ${readOnly ? "grid-cols-[1fr_20rem]" : "grid-cols-[auto_1fr_20rem]"}`}>
@@ -273,6 +287,11 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
           await onReload();
         }}
       />
+      {sharing && share && (
+        <Dialog title="Share a read-only link" wide onClose={() => setSharing(false)}>
+          {share({ diagramId: diagram.id, openVersion: base })}
+        </Dialog>
+      )}
     </EditorContext.Provider>
   );
 }

@@ -1,4 +1,4 @@
-import { Download, Keyboard, LayoutGrid, Maximize, Redo2, Save, Undo2 } from "lucide-react";
+import { Download, Keyboard, LayoutGrid, Maximize, Redo2, Save, Share2, Undo2 } from "lucide-react";
 import type { ReactNode } from "react";
 import { Button } from "@/components/Button";
 
@@ -15,13 +15,15 @@ interface Props {
   onSave: () => void;
   /** The open version's number and its document's download link; null before the first save. */
   download: { number: number; href: string } | null;
+  /** Opens the share dialog; none: no Share action (viewers, view-only sessions). */
+  onShare?: () => void;
   status: ReactNode;
 }
 
 const tool = "inline-flex items-center gap-1.5 rounded px-2 py-1.5 text-sm text-ink hover:bg-paper-sunk disabled:cursor-not-allowed disabled:opacity-40";
 
 /** The commands above the canvas; every one also has a key (see the shortcuts dialog). */
-export function EditorToolbar({ readOnly, undoLabel, redoLabel, onUndo, onRedo, onLayout, layingOut, onFit, onHelp, onSave, download, status }: Props) {
+export function EditorToolbar({ readOnly, undoLabel, redoLabel, onUndo, onRedo, onLayout, layingOut, onFit, onHelp, onSave, download, onShare, status }: Props) {
   return (
     <div role="toolbar" aria-label="Editor" className="flex flex-wrap items-center gap-1 rounded-t-md border border-b-0 border-rule bg-paper-raised px-2 py-1.5">
       {!readOnly && (
@@ -48,6 +50,11 @@ export function EditorToolbar({ readOnly, undoLabel, redoLabel, onUndo, onRedo, 
         <a className={tool} href={download.href} download title={`Download version ${download.number} (as saved) as a .json file`}>
           <Download className="size-4" aria-hidden /> Download JSON
         </a>
+      )}
+      {onShare && !readOnly && (
+        <button type="button" className={tool} onClick={onShare} title="Make a read-only link that opens without an account">
+          <Share2 className="size-4" aria-hidden /> Share
+        </button>
       )}
       <div className="ml-auto flex items-center gap-3">
         <span className="text-xs text-ink-soft" role="status">{status}</span>

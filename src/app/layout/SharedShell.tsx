@@ -1,0 +1,33 @@
+import { Suspense } from "react";
+import { Outlet } from "react-router-dom";
+import { Logo } from "@/components/Logo";
+import { Loading } from "@/components/QueryState";
+import { SafetyNote } from "@/components/SafetyNote";
+
+/**
+ * The frame of a page opened from a share link: the product's name and the safety caution, but no session,
+ * sign-in or team navigation (the reader may have no account, and the link grants nothing beyond its page).
+ */
+export function SharedShell() {
+  return (
+    <div className="flex min-h-screen flex-col">
+      <header className="border-b border-rule bg-paper-raised">
+        <div className="flex items-center gap-2 px-4 py-3 text-lg font-semibold tracking-tight sm:px-6">
+          <Logo className="size-7" />
+          Loopwright
+          <span className="ml-2 text-xs font-medium tracking-wide text-ink-faint uppercase">Shared read-only view</span>
+        </div>
+      </header>
+      <main id="main" tabIndex={-1} className="w-full flex-1 px-4 py-4 sm:px-6">
+        <Suspense fallback={<Loading label="Loading the page…" />}>
+          <Outlet />
+        </Suspense>
+      </main>
+      <footer className="border-t border-rule bg-paper-sunk">
+        <div className="mx-auto max-w-6xl px-4 py-4 sm:px-6">
+          <SafetyNote />
+        </div>
+      </footer>
+    </div>
+  );
+}
