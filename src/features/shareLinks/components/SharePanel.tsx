@@ -79,7 +79,7 @@ export function SharePanel({ diagramId, openVersion }: Props) {
         </div>
       </form>
       {created && (
-        <div role="region" aria-label="New share link" className="flex flex-col gap-2 rounded border border-signal/40 bg-signal-tint p-3">
+        <div role="region" aria-label="Link created" className="flex flex-col gap-2 rounded border border-signal/40 bg-signal-tint p-3">
           <TextField label="Share link" readOnly value={created.url} onFocus={(e) => e.currentTarget.select()} />
           <p className="text-xs text-ink-soft">
             Opens {created.version === null ? "the latest version" : `version ${created.version}`} read-only, without an account,{" "}
