@@ -7,6 +7,7 @@ import type { Sequelize } from "sequelize";
 import type { AppLucia } from "@server/auth/lucia";
 import type { Config } from "@server/config";
 import { authRouter } from "@server/features/auth/router";
+import { commentsRouter } from "@server/features/comments/router";
 import { diagramsRouter, teamDiagramsRouter } from "@server/features/diagrams/router";
 import { invitationLinkRouter, teamInvitationsRouter } from "@server/features/invitations/router";
 import { systemRouter } from "@server/features/system/router";
@@ -62,6 +63,7 @@ export function createApp(deps: AppDeps): Express {
   api.use("/teams", teamsRouter(), teamInvitationsRouter({ mailer: deps.mailer, publicUrl: config.publicUrl }, limiter), teamDiagramsRouter(saveCheck));
   api.use("/invitations", invitationLinkRouter(limiter));
   api.use("/diagrams", diagramsRouter(), versionsRouter(saveCheck));
+  api.use("/diagrams", commentsRouter({ mailer: deps.mailer, publicUrl: config.publicUrl, log }));
   api.use(unknownApiRoute);
   app.use("/api", api);
 

@@ -1,5 +1,6 @@
 import type { Sequelize } from "sequelize";
 import { initAuditModel } from "@server/db/models/audit";
+import { Comment, initCommentModel } from "@server/db/models/comment";
 import { Diagram, DiagramVersion, initDiagramModels } from "@server/db/models/diagram";
 import { Invitation, Membership, Team, initTeamModels } from "@server/db/models/team";
 import { User, initUser } from "@server/db/models/user";
@@ -10,6 +11,7 @@ export function initModels(sequelize: Sequelize): void {
   initTeamModels(sequelize);
   initDiagramModels(sequelize);
   initAuditModel(sequelize);
+  initCommentModel(sequelize);
   Membership.belongsTo(User, { foreignKey: "userId", as: "user" });
   Membership.belongsTo(Team, { foreignKey: "teamId", as: "team" });
   Team.hasMany(Membership, { foreignKey: "teamId", as: "memberships" });
@@ -18,4 +20,6 @@ export function initModels(sequelize: Sequelize): void {
   Diagram.belongsTo(User, { foreignKey: "createdBy", as: "creator" });
   Diagram.hasMany(DiagramVersion, { foreignKey: "diagramId", as: "versions" });
   DiagramVersion.belongsTo(User, { foreignKey: "createdBy", as: "author" });
+  Comment.belongsTo(User, { foreignKey: "authorId", as: "author" });
+  Comment.belongsTo(User, { foreignKey: "resolvedBy", as: "resolver" });
 }
