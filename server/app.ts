@@ -7,6 +7,7 @@ import type { Sequelize } from "sequelize";
 import type { AppLucia } from "@server/auth/lucia";
 import type { Config } from "@server/config";
 import { authRouter } from "@server/features/auth/router";
+import { commentsRouter } from "@server/features/comments/router";
 import { diagramsRouter, teamDiagramsRouter } from "@server/features/diagrams/router";
 import { invitationLinkRouter, teamInvitationsRouter } from "@server/features/invitations/router";
 import { systemRouter } from "@server/features/system/router";
@@ -68,6 +69,7 @@ export function createApp(deps: AppDeps): Express {
   api.use("/invitations", invitationLinkRouter(limiter));
   api.use("/diagrams", diagramsRouter(), versionsRouter(saveCheck), exportRouter(), diagramShareLinksRouter({ publicUrl: config.publicUrl }));
   api.use("/shared", capabilityHeaders, sharedExportRouter(), sharedLinkRouter());
+  api.use("/diagrams", commentsRouter({ mailer: deps.mailer, publicUrl: config.publicUrl, log }));
   api.use(unknownApiRoute);
   app.use("/api", api);
 

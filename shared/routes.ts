@@ -55,6 +55,9 @@ export const href = {
   members: (teamId: string) => fillPath(paths.members, { teamId }),
   diagram: (id: string) => fillPath(paths.diagram, { id }),
   share: (token: string) => fillPath(paths.share, { token }),
+  /** A review comment: the diagram page opens its version's comments with the comment's thread selected. */
+  diagramComment: (id: string, version: number, commentId: string) =>
+    `${fillPath(paths.diagram, { id })}?version=${version}&comment=${encodeURIComponent(commentId)}`,
 };
 
 /** Only same-site paths are followed after sign-in, so a crafted ?next= cannot send anyone elsewhere. */

@@ -30,6 +30,10 @@ async function shareLink(): Promise<{ id: string; url: string }> {
   return res.body.shareLink;
 }
 
+async function ownerThread(): Promise<string> {
+  return (await clients.owner.post(`/api/diagrams/${diagramId}/versions/1/comments`).send({ body: "Thread" })).body.thread.id;
+}
+
 beforeAll(async () => {
   t = await startTestApp();
   clients.anonymous = t.client();
@@ -142,6 +146,31 @@ const routes: Route[] = [
     name: "GET /api/shared/:token (no session needed)",
     call: async (c) => c.get(`/api/shared/${(await shareLink()).url.split("/s/")[1]}`),
     expect: A(200, 200, 200, 200, 200),
+  },
+  {
+    name: "GET /api/diagrams/:id/versions/:n/comments",
+    call: (c) => c.get(`/api/diagrams/${diagramId}/versions/1/comments`),
+    expect: A(401, 404, 200, 200, 200),
+  },
+  {
+    name: "POST /api/diagrams/:id/versions/:n/comments",
+    call: (c) => c.post(`/api/diagrams/${diagramId}/versions/1/comments`).send({ body: "Matrix" }),
+    expect: A(401, 404, 201, 201, 201),
+  },
+  {
+    name: "POST /api/diagrams/:id/comments/:commentId/replies",
+    call: async (c) => c.post(`/api/diagrams/${diagramId}/comments/${await ownerThread()}/replies`).send({ body: "Re" }),
+    expect: A(401, 404, 201, 201, 201),
+  },
+  {
+    name: "POST /api/diagrams/:id/comments/:commentId/resolve",
+    call: async (c) => c.post(`/api/diagrams/${diagramId}/comments/${await ownerThread()}/resolve`),
+    expect: A(401, 404, 200, 200, 200),
+  },
+  {
+    name: "POST /api/diagrams/:id/comments/:commentId/reopen",
+    call: async (c) => c.post(`/api/diagrams/${diagramId}/comments/${await ownerThread()}/reopen`),
+    expect: A(401, 404, 200, 200, 200),
   },
   {
     name: "POST /api/teams/:id/diagrams/import",
