@@ -11,6 +11,8 @@ export const paths = {
   team: "/teams/:teamId",
   members: "/teams/:teamId/members",
   diagram: "/diagrams/:id",
+  versions: "/diagrams/:id/versions",
+  compare: "/diagrams/:id/compare",
   share: "/s/:token",
 } as const;
 
@@ -54,6 +56,11 @@ export const href = {
   team: (teamId: string) => fillPath(paths.team, { teamId }),
   members: (teamId: string) => fillPath(paths.members, { teamId }),
   diagram: (id: string) => fillPath(paths.diagram, { id }),
+  /** One saved version, opened read-only in the diagram page. */
+  diagramVersion: (id: string, version: number) => `${fillPath(paths.diagram, { id })}?version=${version}`,
+  versions: (id: string) => fillPath(paths.versions, { id }),
+  /** Two saved versions side by side: what changed from `from` to `to` and what it did to the response. */
+  compare: (id: string, from: number, to: number) => `${fillPath(paths.compare, { id })}?from=${from}&to=${to}`,
   share: (token: string) => fillPath(paths.share, { token }),
   /** A review comment: the diagram page opens its version's comments with the comment's thread selected. */
   diagramComment: (id: string, version: number, commentId: string) =>

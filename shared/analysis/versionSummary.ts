@@ -29,6 +29,9 @@ export const versionSummarySchema = z.object({
 });
 export type VersionSummary = z.infer<typeof versionSummarySchema>;
 
+/** The closed loop's order as analysed: its poles counted with multiplicity. Example: 1/(s+1)² → 2. */
+export const analysisOrder = (a: Pick<Analysis, "poles">): number => a.poles.reduce((n, p) => n + p.multiplicity, 0);
+
 /** The default pair of a reduction analysed at the nominal values, without the (slow) stable parameter ranges. */
 export interface DefaultPairAnalysis {
   input: string;
@@ -61,7 +64,7 @@ export function versionSummary(pair: DefaultPairAnalysis | null): VersionSummary
   return {
     input,
     output,
-    order: a.poles.length,
+    order: analysisOrder(a),
     stable: a.stability.verdict,
     phaseMarginDeg: a.loop?.margins.phaseMarginDeg ?? null,
     overshootPercent: a.step.overshootPercent,

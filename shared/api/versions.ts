@@ -68,5 +68,12 @@ export interface VersionListItem {
   summary: VersionSummary | null;
 }
 
+/** The version table's reading of a stored check: its verdict, how many errors, the default pair's summary. */
+export function checkedSummary(checked: CheckedResult | null): Pick<VersionListItem, "ok" | "problemCount" | "summary"> {
+  if (checked === null) return { ok: null, problemCount: 0, summary: null };
+  if (checked.ok) return { ok: true, problemCount: 0, summary: checked.summary ?? null };
+  return { ok: false, problemCount: checked.problems.filter((p) => p.severity === "error").length, summary: null };
+}
+
 /** `POST /api/diagrams/:id/versions/:n/restore` → 201: the new version, saved with message "Restored from vN". */
 export const restoredMessage = (from: number) => `Restored from v${from}`;

@@ -15,6 +15,8 @@ const TeamsRoute = lazy(() => import("@/app/routes/TeamsRoute").then((m) => ({ d
 const TeamRoute = lazy(() => import("@/app/routes/TeamRoute").then((m) => ({ default: m.TeamRoute })));
 const MembersRoute = lazy(() => import("@/app/routes/MembersRoute").then((m) => ({ default: m.MembersRoute })));
 const DiagramRoute = lazy(() => loadDiagramRoute().then((m) => ({ default: m.DiagramRoute })));
+const VersionsRoute = lazy(() => import("@/app/routes/VersionsRoute").then((m) => ({ default: m.VersionsRoute })));
+const CompareRoute = lazy(() => import("@/app/routes/CompareRoute").then((m) => ({ default: m.CompareRoute })));
 const SharedRoute = lazy(() => import("@/app/routes/SharedRoute").then((m) => ({ default: m.SharedRoute })));
 const NotFoundRoute = lazy(() => import("@/app/routes/NotFoundRoute").then((m) => ({ default: m.NotFoundRoute })));
 
@@ -36,6 +38,8 @@ export const router = createBrowserRouter([
           { path: paths.team, element: <TeamRoute /> },
           { path: paths.members, element: <MembersRoute /> },
           { path: paths.diagram, element: <DiagramRoute /> },
+          { path: paths.versions, element: <VersionsRoute /> },
+          { path: paths.compare, element: <CompareRoute /> },
         ],
       },
       { path: "*", element: <NotFoundRoute /> },

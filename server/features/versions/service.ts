@@ -1,5 +1,5 @@
 import type { DiagramVersionView } from "@shared/api/diagrams";
-import { restoredMessage, type CheckedResult, type SaveVersion, type VersionListItem } from "@shared/api/versions";
+import { checkedSummary, restoredMessage, type CheckedResult, type SaveVersion, type VersionListItem } from "@shared/api/versions";
 import { Diagram, DiagramVersion } from "@server/db/models/diagram";
 import { User } from "@server/db/models/user";
 import { recordAudit } from "@server/features/audit/record";
@@ -81,13 +81,6 @@ export async function listVersions(diagramId: string, limit?: number): Promise<V
     createdBy: v.author?.name ?? "",
     ...checkedSummary(v.result as CheckedResult | null),
   }));
-}
-
-/** The version table's reading of a stored check: its verdict, how many errors, the default pair's summary. */
-function checkedSummary(checked: CheckedResult | null): Pick<VersionListItem, "ok" | "problemCount" | "summary"> {
-  if (checked === null) return { ok: null, problemCount: 0, summary: null };
-  if (checked.ok) return { ok: true, problemCount: 0, summary: checked.summary ?? null };
-  return { ok: false, problemCount: checked.problems.filter((p) => p.severity === "error").length, summary: null };
 }
 
 /**

@@ -50,10 +50,12 @@ interface Props {
   viewOnly?: boolean;
   /** Offers the toolbar's Share action to editors and owners. */
   share?: ShareSlot;
+  /** A saved version whose server check found errors; the status says so while that version is open unchanged. */
+  savedProblems?: { number: number; count: number } | null;
 }
 
 /** One editing session on one version: document + history, canvas, panels, live result, saving. */
-export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onReload, viewOnly = false, share }: Props) {
+export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onReload, viewOnly = false, share, savedProblems = null }: Props) {
   const readOnly = viewOnly || diagram.role === "viewer";
   const history = useEditorHistory(initialDoc);
   const { doc, run } = history;
@@ -166,7 +168,7 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
     draft.closeOffer();
   };
 
-  const status = viewOnly
+  const statusText = viewOnly
     ? `Read only: version ${base}`
     : readOnly
       ? "Read only: you are a viewer of this team"
@@ -175,6 +177,19 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
         : base
           ? `Saved as v${base}`
           : "No version saved yet";
+  const saveProblems = useMemo(() => view.problems.filter((p) => p.severity === "error"), [view.problems]);
+  const flawed = savedProblems && savedProblems.number === base && !dirty ? savedProblems.count : null;
+  const status = (
+    <>
+      {statusText}
+      {flawed !== null && (
+        <strong className="font-medium text-fault">
+          {" "}
+          · v{base} was saved with {flawed} problem{flawed === 1 ? "" : "s"}
+        </strong>
+      )}
+    </>
+  );
 
   return (
     <EditorContext.Provider value={useMemo(() => ({ act, readOnly }), [act, readOnly])}>
@@ -282,6 +297,7 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
         readOnly={readOnly}
         onCloseHelp={() => setHelp(false)}
         blocker={guard.blocker}
+        problems={saveProblems}
         onReload={async () => {
           draft.clear();
           await onReload();

@@ -1,6 +1,7 @@
 import { useState } from "react";
 import type { Blocker } from "react-router-dom";
 import type { DiagramDetail } from "@shared/api/diagrams";
+import type { Problem } from "@shared/diagram/problems";
 import { ConflictDialog } from "@/features/editor/components/dialogs/ConflictDialog";
 import { HelpDialog } from "@/features/editor/components/dialogs/HelpDialog";
 import { LeaveDialog } from "@/features/editor/components/dialogs/LeaveDialog";
@@ -16,16 +17,18 @@ interface Props {
   onCloseHelp: () => void;
   blocker: Blocker;
   onReload: () => Promise<void>;
+  /** Errors of the document as the live check sees it now. */
+  problems: Problem[];
 }
 
 /** The editor's modal questions, one at a time. */
-export function SessionDialogs({ diagram, base, save, help, readOnly, onCloseHelp, blocker, onReload }: Props) {
+export function SessionDialogs({ diagram, base, save, help, readOnly, onCloseHelp, blocker, onReload, problems }: Props) {
   const [reloading, setReloading] = useState(false);
   const d = save.dialog;
   return (
     <>
       {d?.kind === "save" && (
-        <SaveDialog nextNumber={base + 1} pending={save.saving} error={save.error} onSave={save.submit} onClose={save.close} />
+        <SaveDialog nextNumber={base + 1} pending={save.saving} error={save.error} problems={problems} onSave={save.submit} onClose={save.close} />
       )}
       {d?.kind === "conflict" && (
         <ConflictDialog

@@ -36,7 +36,15 @@ export interface Marks {
   wireProblems: ReadonlyMap<string, Severity>;
   /** Wire id where the analysis breaks the loop, if any. */
   breakWire: string | null;
+  /** A comparison's marks: how each block or wire differs from the other version (drawn highlighted, named in its label). */
+  changes?: ReadonlyMap<string, Change>;
 }
+
+/** How a block or wire of one version differs from the other one's. */
+export type Change = "added" | "removed" | "changed";
+
+const changeAttrs = (change: Change) => ({ "data-change": change });
+const changeSuffix = (change: Change | undefined) => (change ? `, ${change} in this comparison` : "");
 
 export const inHandle = (port: number | undefined) => (port === undefined ? "in" : `in${port}`);
 /** The junction port an input handle stands for ("in2" → 2); undefined for a single-input block's "in". */
@@ -63,7 +71,8 @@ const stepAttrs = (on: boolean) => (on ? { "aria-current": "step" as const } : u
 export function buildNodes(doc: EditorDoc, marks: Marks, t: Transient): FlowNode[] {
   const selected = new Set(t.selection.blocks);
   return doc.blocks.map((block, index) => {
-    const highlighted = marks.highlightBlocks.has(block.id);
+    const change = marks.changes?.get(block.id);
+    const highlighted = marks.highlightBlocks.has(block.id) || change !== undefined;
     return {
       id: block.id,
       type: block.type,
@@ -71,8 +80,8 @@ export function buildNodes(doc: EditorDoc, marks: Marks, t: Transient): FlowNode
       data: { block, highlighted, problem: marks.blockProblems.get(block.id) ?? null },
       selected: selected.has(block.id),
       measured: t.measured.get(block.id),
-      ariaLabel: blockAriaLabel(block),
-      domAttributes: stepAttrs(highlighted),
+      ariaLabel: blockAriaLabel(block) + changeSuffix(change),
+      domAttributes: change ? changeAttrs(change) : stepAttrs(highlighted),
     } as FlowNode;
   });
 }
@@ -84,7 +93,8 @@ export function buildEdges(doc: EditorDoc, marks: Marks, selection: Selection): 
   return doc.wires.map((w) => {
     const target = blocks.get(w.to);
     const side: Side = target?.type === "sum" && w.port !== undefined ? (sumPortPlaces(target.signs.length)[w.port]?.side ?? "left") : "left";
-    const highlighted = marks.highlightWires.has(w.id);
+    const change = marks.changes?.get(w.id);
+    const highlighted = marks.highlightWires.has(w.id) || change !== undefined;
     const isBreak = marks.breakWire === w.id;
     return {
       id: w.id,
@@ -95,8 +105,9 @@ export function buildEdges(doc: EditorDoc, marks: Marks, selection: Selection): 
       targetHandle: inHandle(target?.type === "sum" ? w.port : undefined),
       selected: selected.has(w.id),
       data: { highlighted, problem: marks.wireProblems.get(w.id) ?? null, isBreak, side },
-      ariaLabel: wireAriaLabel(w, target, isBreak),
-      domAttributes: stepAttrs(highlighted),
+      ariaLabel: wireAriaLabel(w, target, isBreak) + changeSuffix(change),
+      // Data attributes are valid on any element; the library's SVG attribute type does not list them.
+      domAttributes: (change ? changeAttrs(change) : stepAttrs(highlighted)) as SignalEdge["domAttributes"],
     };
   });
 }
