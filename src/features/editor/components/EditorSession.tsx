@@ -14,6 +14,7 @@ import { versionDocumentHref } from "@/features/editor/api/versionDocument";
 import { SessionBanners, type SavedVersion } from "@/features/editor/components/SessionBanners";
 import { SessionDialogs } from "@/features/editor/components/SessionDialogs";
 import { Dialog } from "@/features/editor/components/dialogs/Dialog";
+import { CompareWithLocal } from "@/features/editor/components/compare/CompareWithLocal";
 import { StepBadge } from "@/features/editor/components/StepBadge";
 import { ParameterTable } from "@/features/editor/components/panels/ParameterTable";
 import { ProblemList } from "@/features/editor/components/panels/ProblemList";
@@ -129,6 +130,7 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
   });
   const [help, setHelp] = useState(false);
   const [sharing, setSharing] = useState(false);
+  const [comparing, setComparing] = useState<number | null>(null);
   const firstField = useRef<HTMLInputElement>(null);
   const canvasBox = useRef<HTMLDivElement>(null);
 
@@ -207,6 +209,7 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
             draft.closeOffer();
           }}
           onReload={() => void onReload()}
+          onCompare={setComparing}
         />
       )}
       <EditorToolbar
@@ -303,6 +306,11 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
           await onReload();
         }}
       />
+      {comparing !== null && (
+        <Dialog title={`v${comparing} compared with ${dirty ? "your changes" : `v${base}`}`} full onClose={() => setComparing(null)}>
+          <CompareWithLocal diagramId={diagram.id} number={comparing} doc={doc} label={dirty ? "Your changes" : `v${base}`} />
+        </Dialog>
+      )}
       {sharing && share && (
         <Dialog title="Share a read-only link" wide onClose={() => setSharing(false)}>
           {share({ diagramId: diagram.id, openVersion: base })}

@@ -21,12 +21,14 @@ interface Props {
   onRestore: () => void;
   onDiscardDraft: () => void;
   onReload: () => void;
+  /** Shows the newer version beside the open document (with its unsaved changes), without leaving the editor. */
+  onCompare: (newer: number) => void;
 }
 
 const note = "mb-3 flex flex-wrap items-center gap-x-4 gap-y-2 rounded border px-3 py-2 text-sm";
 
 /** Notes above the editor: archived, read only, a draft to restore, a newer version saved by someone else. */
-export function SessionBanners({ diagram, readOnly, base, latestNow, dirty, draft, onRestore, onDiscardDraft, onReload }: Props) {
+export function SessionBanners({ diagram, readOnly, base, latestNow, dirty, draft, onRestore, onDiscardDraft, onReload, onCompare }: Props) {
   // "Keep editing" hides the notice for that version; a later one shows it again.
   const [kept, setKept] = useState(0);
   return (
@@ -57,6 +59,7 @@ export function SessionBanners({ diagram, readOnly, base, latestNow, dirty, draf
             {readOnly ? "" : " Saving will ask whether to load it or keep yours as a new diagram."}
           </p>
           {(readOnly || !dirty) && <Button size="sm" onClick={onReload}>Open v{latestNow.number}</Button>}
+          <Button size="sm" onClick={() => onCompare(latestNow.number)}>{dirty ? "Compare with my changes" : `Compare with v${base || 0}`}</Button>
           <Button size="sm" variant="quiet" onClick={() => setKept(latestNow.number)}>Keep editing</Button>
         </div>
       )}

@@ -7,10 +7,12 @@ interface Props {
   children: ReactNode;
   /** Wider dialogs for tables (the shortcut list). */
   wide?: boolean;
+  /** Nearly the whole window, scrolling inside (a comparison of two diagrams). */
+  full?: boolean;
 }
 
 /** A modal on the native <dialog>: focus stays inside, Esc closes, the page behind is inert. */
-export function Dialog({ title, onClose, children, wide = false }: Props) {
+export function Dialog({ title, onClose, children, wide = false, full = false }: Props) {
   const ref = useRef<HTMLDialogElement>(null);
   const titleId = useId();
   useEffect(() => {
@@ -26,7 +28,7 @@ export function Dialog({ title, onClose, children, wide = false }: Props) {
         e.preventDefault();
         onClose();
       }}
-      className={`m-auto w-[calc(100%-2rem)] ${wide ? "max-w-2xl" : "max-w-md"} rounded-md border border-rule bg-paper-raised p-0 text-ink shadow-lg backdrop:bg-ink/30`}
+      className={`m-auto w-[calc(100%-2rem)] ${full ? "max-h-[92vh] max-w-7xl overflow-y-auto" : wide ? "max-w-2xl" : "max-w-md"} rounded-md border border-rule bg-paper-raised p-0 text-ink shadow-lg backdrop:bg-ink/30`}
     >
       <div className="flex items-center justify-between border-b border-rule px-5 py-3">
         <h2 id={titleId} className="text-base font-semibold">
