@@ -111,4 +111,13 @@ test("a teammate's newer version is compared with the local changes without losi
   await dialog.getByRole("button", { name: "Close" }).click();
   await expect(toolbar(page).getByRole("status")).toContainText("Unsaved changes since v1");
   await expect(page.getByLabel("Transfer function of s")).toHaveValue("2/(s + 1)");
+
+  // Opening the newer version keeps the local changes as a draft, offered back on top of it.
+  await notice.getByRole("button", { name: "Open v2, keep my changes as a draft" }).click();
+  await expect(toolbar(page).getByRole("status")).toContainText("Saved as v2", COLD_LOAD);
+  await expect.poll(() => compact(page), COLD_LOAD).toBe("3/(s+4)");
+  const draft = page.getByRole("region", { name: "Unsaved draft" });
+  await expect(draft).toContainText("made on top of v1");
+  await draft.getByRole("button", { name: "Restore draft" }).click();
+  await expect.poll(() => compact(page), COLD_LOAD).toBe("2/(s+3)");
 });

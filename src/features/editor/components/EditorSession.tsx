@@ -202,6 +202,7 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
           base={base}
           latestNow={latestNow}
           dirty={dirty}
+          draftKept={!draft.failed}
           draft={draft.offer}
           onRestore={restoreDraft}
           onDiscardDraft={() => {

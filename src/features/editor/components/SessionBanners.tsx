@@ -17,6 +17,8 @@ interface Props {
   latestNow: SavedVersion | null;
   /** The session has changes not saved yet: opening the newer version would drop them. */
   dirty: boolean;
+  /** This browser holds the unsaved changes as a draft: opening the newer version then loses nothing (it offers them back). */
+  draftKept: boolean;
   draft: Draft | null;
   onRestore: () => void;
   onDiscardDraft: () => void;
@@ -28,7 +30,7 @@ interface Props {
 const note = "mb-3 flex flex-wrap items-center gap-x-4 gap-y-2 rounded border px-3 py-2 text-sm";
 
 /** Notes above the editor: archived, read only, a draft to restore, a newer version saved by someone else. */
-export function SessionBanners({ diagram, readOnly, base, latestNow, dirty, draft, onRestore, onDiscardDraft, onReload, onCompare }: Props) {
+export function SessionBanners({ diagram, readOnly, base, latestNow, dirty, draftKept, draft, onRestore, onDiscardDraft, onReload, onCompare }: Props) {
   // "Keep editing" hides the notice for that version; a later one shows it again.
   const [kept, setKept] = useState(0);
   return (
@@ -59,6 +61,9 @@ export function SessionBanners({ diagram, readOnly, base, latestNow, dirty, draf
             {readOnly ? "" : " Saving will ask whether to load it or keep yours as a new diagram."}
           </p>
           {(readOnly || !dirty) && <Button size="sm" onClick={onReload}>Open v{latestNow.number}</Button>}
+          {!readOnly && dirty && draftKept && (
+            <Button size="sm" onClick={onReload}>Open v{latestNow.number}, keep my changes as a draft</Button>
+          )}
           <Button size="sm" onClick={() => onCompare(latestNow.number)}>{dirty ? "Compare with my changes" : `Compare with v${base || 0}`}</Button>
           <Button size="sm" variant="quiet" onClick={() => setKept(latestNow.number)}>Keep editing</Button>
         </div>
