@@ -1,13 +1,13 @@
-import { Suspense } from "react";
-import { Outlet, useMatch } from "react-router-dom";
+import { useMatch } from "react-router-dom";
 import { Header } from "@/app/layout/Header";
-import { Loading } from "@/components/QueryState";
-import { SafetyNote } from "@/components/SafetyNote";
+import { ShellBody } from "@/app/layout/ShellBody";
 import { paths } from "@shared/routes";
 
 export function AppShell() {
-  // The editor needs the whole width for its canvas; reading pages keep a comfortable measure.
-  const wide = useMatch(paths.diagram) !== null;
+  // The editor and the comparison need the whole width for their canvases; reading pages keep a comfortable measure.
+  const editor = useMatch(paths.diagram) !== null;
+  const compare = useMatch(paths.compare) !== null;
+  const wide = editor || compare;
   return (
     <div className="flex min-h-screen flex-col">
       <a
@@ -17,16 +17,7 @@ export function AppShell() {
         Skip to content
       </a>
       <Header />
-      <main id="main" tabIndex={-1} className={`mx-auto w-full flex-1 px-4 sm:px-6 ${wide ? "max-w-none py-4" : "max-w-6xl py-8"}`}>
-        <Suspense fallback={<Loading label="Loading the page…" />}>
-          <Outlet />
-        </Suspense>
-      </main>
-      <footer className="border-t border-rule bg-paper-sunk">
-        <div className="mx-auto max-w-6xl px-4 py-4 sm:px-6">
-          <SafetyNote />
-        </div>
-      </footer>
+      <ShellBody wide={wide} />
     </div>
   );
 }

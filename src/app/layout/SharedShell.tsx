@@ -1,8 +1,5 @@
-import { Suspense } from "react";
-import { Outlet } from "react-router-dom";
+import { ShellBody } from "@/app/layout/ShellBody";
 import { Logo } from "@/components/Logo";
-import { Loading } from "@/components/QueryState";
-import { SafetyNote } from "@/components/SafetyNote";
 
 /**
  * The frame of a page opened from a share link: the product's name and the safety caution, but no session,
@@ -18,16 +15,7 @@ export function SharedShell() {
           <span className="ml-2 text-xs font-medium tracking-wide text-ink-faint uppercase">Shared read-only view</span>
         </div>
       </header>
-      <main id="main" tabIndex={-1} className="w-full flex-1 px-4 py-4 sm:px-6">
-        <Suspense fallback={<Loading label="Loading the page…" />}>
-          <Outlet />
-        </Suspense>
-      </main>
-      <footer className="border-t border-rule bg-paper-sunk">
-        <div className="mx-auto max-w-6xl px-4 py-4 sm:px-6">
-          <SafetyNote />
-        </div>
-      </footer>
+      <ShellBody wide />
     </div>
   );
 }
