@@ -1,7 +1,8 @@
 /**
  * Tokens of the expression syntax with their 0-based positions. mathjs builds the tree (precedence,
  * associativity) but keeps no positions and reads more than our grammar, so the lexer refuses stray
- * characters and implicit multiplication up front and gives the tree walker a position for every token.
+ * characters up front, writes out the `*` of a product written by juxtaposition (`2s`, `(s+1)(s+3)`, `K(s+a)`)
+ * — or refuses it where it could be read two ways (`1/2s`) — and gives the tree walker a position for every token.
  */
 export type TokenKind = "num" | "name" | "op" | "lparen" | "rparen";
 
@@ -9,9 +10,11 @@ export interface Token {
   kind: TokenKind;
   text: string;
   position: number;
+  /** A `*` the writer left out (`2s`); its position is that of the factor after it. */
+  implicit?: true;
 }
 
-export type LexError = { code: "syntax" | "implicit-multiplication" | "function-call"; message: string; position: number };
+export type LexError = { code: "syntax" | "implicit-multiplication" | "ambiguous-product"; message: string; position: number };
 
 // Same shape mathjs reads for a decimal literal; hex/binary literals are refused as implicit multiplication.
 const NUMBER = /(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?/y;
@@ -50,8 +53,10 @@ export function lexExpression(text: string): { tokens: Token[] } | { error: LexE
     else return { error: syntax(unexpectedCharacter(ch, i), i) };
     i += 1;
   }
-  const problem = findMissingOperator(tokens) ?? findDeepNesting(tokens);
-  return problem ? { error: problem } : { tokens };
+  const products = writeOutProducts(tokens, text);
+  if ("error" in products) return products;
+  const deep = findDeepNesting(products.tokens);
+  return deep ? { error: deep } : products;
 }
 
 /** Deeper nesting than this is refused with a position instead of overflowing the recursive readers. */
@@ -94,28 +99,61 @@ function unexpectedCharacter(ch: string, at: number): string {
 const ENDS_OPERAND = new Set<TokenKind>(["num", "name", "rparen"]);
 const STARTS_OPERAND = new Set<TokenKind>(["num", "name", "lparen"]);
 
-/** Two operands side by side (`2s`, `K s`, `(s+1)(s+2)`) mean a missing `*` — or a function call for `name(`. */
-function findMissingOperator(tokens: Token[]): LexError | undefined {
-  for (let k = 1; k < tokens.length; k += 1) {
-    const [a, b] = [tokens[k - 1], tokens[k]];
-    if (!ENDS_OPERAND.has(a.kind) || !STARTS_OPERAND.has(b.kind)) continue;
-    if (a.kind === "name" && b.kind === "lparen") {
-      return {
-        code: "function-call",
-        message:
-          `\`${a.text}(\` at position ${a.position} reads as a function call, and expressions have no functions; ` +
-          `to multiply, write ${a.text}*(…)`,
-        position: a.position,
-      };
-    }
-    const show = (t: Token) => (t.kind === "num" || t.kind === "name" ? t.text : "(…)");
-    return {
-      code: "implicit-multiplication",
-      message:
-        `Missing \`*\` between \`${a.text}\` and \`${b.text}\` at position ${b.position}: ` +
-        `write ${show(a)}*${show(b)}`,
-      position: b.position,
-    };
+/** Index of the token opening the operand that ends at `end`: its `(` for a parenthesised one, else itself. */
+function operandStart(tokens: Token[], end: number): number {
+  if (tokens[end].kind !== "rparen") return end;
+  let depth = 0;
+  for (let i = end; i >= 0; i -= 1) {
+    depth += tokens[i].kind === "rparen" ? 1 : tokens[i].kind === "lparen" ? -1 : 0;
+    if (depth === 0) return i;
   }
-  return undefined;
+  return 0;
+}
+
+/** Start of the run of factors ending at `end` that binds tighter than `/`: juxtaposed factors and powers (`2s^2`). */
+function productStart(tokens: Token[], end: number): number {
+  let i = operandStart(tokens, end);
+  while (i >= 2 && (tokens[i - 1].implicit || tokens[i - 1].text === "^")) i = operandStart(tokens, i - 2);
+  return i;
+}
+
+/**
+ * Writes out the `*` of factors side by side. A number after another factor (`K 2`, `(s+1)2`) is refused (it reads
+ * like a lost operator or exponent), and so is a product right after `/` (`1/2s`, `K/s(s+1)`): it could divide by
+ * the first factor only or by the whole product. Example: "2(s+1)" → 2, *, (, s, +, 1, ).
+ */
+function writeOutProducts(tokens: Token[], text: string): { tokens: Token[] } | { error: LexError } {
+  const out: Token[] = [];
+  const show = (t: Token) => (t.kind === "lparen" ? "(…)" : t.text);
+  for (const b of tokens) {
+    const a = out.at(-1);
+    if (a && ENDS_OPERAND.has(a.kind) && STARTS_OPERAND.has(b.kind)) {
+      if (b.kind === "num") {
+        return {
+          error: {
+            code: "implicit-multiplication",
+            message: `A number right after \`${a.text}\` at position ${b.position}: write ${a.kind === "rparen" ? "(…)" : a.text}*${b.text} for a product, or ^${b.text} for a power`,
+            position: b.position,
+          },
+        };
+      }
+      const start = productStart(out, out.length - 1);
+      const before = out[start - 1];
+      if (before?.text === "/") {
+        const factor = text.slice(out[start].position, a.position + a.text.length);
+        return {
+          error: {
+            code: "ambiguous-product",
+            message:
+              `\`/${factor}${show(b)}\` at position ${before.position} can be read two ways: divided by ${factor} only, or by the ` +
+              `product ${factor}·${show(b)}. Write /(${factor}*${show(b)}) for the product, or /${factor}*${show(b)} for ${factor} only`,
+            position: b.position,
+          },
+        };
+      }
+      out.push({ kind: "op", text: "*", position: b.position, implicit: true });
+    }
+    out.push(b);
+  }
+  return { tokens: out };
 }

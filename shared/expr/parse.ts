@@ -21,6 +21,7 @@ export type ParseErrorCode =
   | "expr-too-long"
   | "syntax"
   | "implicit-multiplication"
+  | "ambiguous-product"
   | "function-call"
   | "unknown-name"
   | "s-in-gain"
@@ -66,10 +67,11 @@ export function parseExpression(text: string, options: ParseOptions): ParseResul
   const lexed = lexExpression(text);
   if ("error" in lexed) return { ok: false, ...lexed.error };
   let tree: MathNode;
+  const masked = maskForMathjs(text, lexed.tokens);
   try {
-    tree = parse(maskForMathjs(text, lexed.tokens));
+    tree = parse(masked.text);
   } catch (err) {
-    return mathjsSyntaxFailure(err, text, lexed.tokens);
+    return mathjsSyntaxFailure(err, text, lexed.tokens, masked.original);
   }
   try {
     const walker = new TreeWalker(lexed.tokens, new Set(options.parameters), options.allowS, limits.exponent);
@@ -81,14 +83,19 @@ export function parseExpression(text: string, options: ParseOptions): ParseResul
 }
 
 /**
- * What mathjs gets to read: whitespace as plain spaces (a newline would separate statements) and every name
+ * What mathjs gets to read: whitespace as plain spaces (a newline would separate statements), every name
  * as a neutral same-length symbol `x__`, so names mathjs treats as keywords, constants or operators
- * (`not`, `true`, `Infinity`, `mod`) stay plain parameter names. Same length keeps mathjs's error positions.
+ * (`not`, `true`, `Infinity`, `mod`) stay plain parameter names, and the `*` of each implicit product written in.
+ * `original` maps a position in that text back to the user's (for mathjs's error positions).
  */
-function maskForMathjs(text: string, tokens: Token[]): string {
+function maskForMathjs(text: string, tokens: Token[]): { text: string; original: (at: number) => number } {
   const chars = text.replace(/\s/g, " ").split("");
   for (const t of tokens) if (t.kind === "name") chars.splice(t.position, t.text.length, ..."x".padEnd(t.text.length, "_"));
-  return chars.join("");
+  const inserted = tokens.filter((t) => t.implicit).map((t) => t.position);
+  for (const at of [...inserted].reverse()) chars.splice(at, 0, "*");
+  // The k-th inserted `*` (from 0) sits at its token's position + k in the masked text.
+  const original = (at: number) => at - inserted.filter((p, k) => p + k < at).length;
+  return { text: chars.join(""), original };
 }
 
 function fail(code: ParseErrorCode, message: string, position: number): ParseFailure {
@@ -102,13 +109,13 @@ const FRIENDLY_SYNTAX: [RegExp, string][] = [
   [/^Unexpected operator \)/, "this `)` has no matching `(`"],
 ];
 
-function mathjsSyntaxFailure(err: unknown, text: string, tokens: Token[]): ParseFailure {
+function mathjsSyntaxFailure(err: unknown, text: string, tokens: Token[], original: (at: number) => number): ParseFailure {
   if (err instanceof RangeError) {
     return fail("syntax", "The expression is nested too deeply to read; simplify its parentheses", 0);
   }
   const raw = err instanceof Error ? err.message : String(err);
   const char = (err as { char?: unknown }).char;
-  const position = typeof char === "number" ? Math.min(Math.max(char - 1, 0), text.length) : 0;
+  const position = typeof char === "number" ? Math.min(Math.max(original(char - 1), 0), text.length) : 0;
   const plain = raw.replace(/\s*\(char \d+\)\s*$/, "");
   const friendly = FRIENDLY_SYNTAX.find(([re]) => re.test(plain))?.[1] ?? plain;
   const token = tokens.find((t) => t.position === position);
@@ -233,12 +240,20 @@ class TreeWalker {
       );
     }
     if (this.parameters.has(token.text)) return { kind: "param", name: token.text };
-    throw new Refusal(
-      "unknown-name",
-      `Unknown name \`${token.text}\` at position ${token.position}: declare it as a parameter or fix the spelling` +
-        " (constants such as pi or e are not built in)",
-      token.position,
-    );
+    const next = this.tokens[this.at + 1];
+    if (this.peek()?.implicit && next?.kind === "lparen") {
+      throw new Refusal(
+        "function-call",
+        `\`${token.text}(\` at position ${token.position} reads as a function call, and expressions have no functions; ` +
+          `to multiply, declare ${token.text} as a parameter`,
+        token.position,
+      );
+    }
+    const split = splitName(token.text, this.allowS ? [...this.parameters, "s"] : [...this.parameters]);
+    const why = split
+      ? `it could mean ${split.join("·")}: write ${split.join("*")} (or ${split.join(" ")}), or declare it as a parameter`
+      : "declare it as a parameter or fix the spelling (constants such as pi or e are not built in)";
+    throw new Refusal("unknown-name", `Unknown name \`${token.text}\` at position ${token.position}: ${why}`, token.position);
   }
 
   private peek(): Token | undefined {
@@ -266,6 +281,27 @@ class TreeWalker {
       token.position,
     );
   }
+}
+
+/**
+ * A name read as known names written together, fewest parts first: `Kps` with Kp and s → ["Kp", "s"]; null when
+ * none fits. One name is one token, so such a product needs its `*` or a space; this only says what it could mean.
+ */
+export function splitName(name: string, known: string[]): string[] | null {
+  const best: (string[] | null)[] = new Array(name.length + 1).fill(null);
+  best[0] = [];
+  for (let i = 0; i < name.length; i += 1) {
+    const head = best[i];
+    if (!head) continue;
+    for (const k of known) {
+      if (!name.startsWith(k, i)) continue;
+      const next = [...head, k];
+      const at = i + k.length;
+      if (!best[at] || best[at]!.length > next.length) best[at] = next;
+    }
+  }
+  const found = best[name.length];
+  return found && found.length > 1 ? found : null;
 }
 
 function isLiteralZero(node: ExprNode): boolean {

@@ -58,7 +58,7 @@ describe("validateDiagram reports each problem with its code and what it is abou
     ["s inside a gain", (d) => (block(d, "h").expr = "0.5*s"), { code: "s-in-gain", blockId: "h", field: "expr", position: 4 }],
     ["a negative exponent", (d) => (block(d, "p").expr = "1/(tau*s^-2 + s)"), { code: "bad-exponent", blockId: "p", position: 9 }],
     ["a fractional exponent", (d) => (block(d, "p").expr = "1/(tau*s^1.5 + s)"), { code: "bad-exponent", blockId: "p", position: 9 }],
-    ["a parameter written like a function", (d) => (block(d, "c").expr = "K(s+2)/s"), { code: "function-call", blockId: "c", position: 0 }],
+    ["an undeclared name written like a function", (d) => (block(d, "c").expr = "f(s+2)/s"), { code: "function-call", blockId: "c", position: 0 }],
     ["division by a literal zero", (d) => (block(d, "h").expr = "1/0"), { code: "division-by-zero", blockId: "h", position: 2 }],
     ["an expression over 2,000 characters", (d) => (block(d, "c").expr = `${"s+".repeat(1000)}1`), { code: "expr-too-long", blockId: "c", position: 2000 }],
     ["an exponent over 50", (d) => (block(d, "p").expr = "1/(s+1)^51"), { code: "exponent-limit", blockId: "p", position: 8 }],
@@ -76,13 +76,13 @@ describe("validateDiagram reports each problem with its code and what it is abou
 
   it("collects every problem, not only the first", () => {
     const raw = edited((d) => {
-      block(d, "c").expr = "2s";
+      block(d, "c").expr = "1/2s";
       block(d, "h").expr = "s";
       d.wires.push({ id: "wx", from: "c", to: "zz" });
       d.wires[1].port = 0;
     });
     const codes = check(raw).problems.map((p) => p.code).sort();
-    expect(codes).toEqual(["implicit-multiplication", "port-on-non-sum", "s-in-gain", "wire-to-missing-block"]);
+    expect(codes).toEqual(["ambiguous-product", "port-on-non-sum", "s-in-gain", "wire-to-missing-block"]);
   });
 
   it("leaves a block whose expression fails out of `expressions` and keeps the others", () => {

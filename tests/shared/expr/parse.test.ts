@@ -83,16 +83,17 @@ describe("parseExpression refuses what is outside the grammar, with a code and a
   const cases: [string, ParseErrorCode, number, string?][] = [
     ["", "empty", 0],
     ["   ", "empty", 0],
-    ["2s", "implicit-multiplication", 1, "write 2*s"],
-    ["2(s+1)", "implicit-multiplication", 1],
-    ["K s", "implicit-multiplication", 2, "write K*s"],
-    ["(s+1)(s+2)", "implicit-multiplication", 5],
-    ["(s)K", "implicit-multiplication", 3],
-    ["2 cm", "implicit-multiplication", 2],
-    ["0x1F", "implicit-multiplication", 1],
-    ["s mod 2", "implicit-multiplication", 2],
+    ["K 2", "implicit-multiplication", 2, "write K*2"],
+    ["(s+1)2", "implicit-multiplication", 5, "or ^2 for a power"],
+    ["2 3", "implicit-multiplication", 2],
+    ["s mod 2", "implicit-multiplication", 6],
+    ["1/2s", "ambiguous-product", 3, "Write /(2*s) for the product, or /2*s for 2 only"],
+    ["K/s(s+1)", "ambiguous-product", 3, "/(s*(…))"],
+    ["1/(s+1)(s+2)", "ambiguous-product", 7],
+    ["1/s^2(s+1)", "ambiguous-product", 5],
+    ["2 cm", "unknown-name", 2],
+    ["0x1F", "unknown-name", 1],
     ["sin(s)", "function-call", 0, "`sin(`"],
-    ["K(s+1)", "function-call", 0, "K*(…)"],
     ["1/", "syntax", 2],
     ["s+*2", "syntax", 2],
     ["((s)", "syntax", 4],
@@ -153,6 +154,32 @@ describe("parseExpression refuses what is outside the grammar, with a code and a
     for (const name of ["pi", "e", "i", "cm", "Infinity", "NaN"]) {
       expect(parseExpression(`2*${name}`, { allowS: true, parameters: [] })).toMatchObject({ code: "unknown-name", position: 2 });
     }
+  });
+});
+
+describe("products written without `*`", () => {
+  // common practice: engineers write 2/((s+1)(s+3)), 2s, 10(s+1), K(s+a), 0.5s^2 for the explicit products.
+  const same: [string, string][] = [
+    ["2/((s+1)(s+3))", "2/((s+1)*(s+3))"],
+    ["2s", "2*s"],
+    ["10(s+1)", "10*(s+1)"],
+    ["K(s+a)", "K*(s+a)"],
+    ["0.5s^2", "0.5*s^2"],
+    ["K s", "K*s"],
+    ["s^2(s+1)", "s^2*(s+1)"],
+    ["(s+1)(s+2)K", "(s+1)*(s+2)*K"],
+  ];
+  it.each(same)("%s reads as %s", (implicit, explicit) => {
+    const p = { allowS: true, parameters: ["K", "a"] };
+    expect(showExpr(parseExpression(implicit, p).ok ? (parseExpression(implicit, p) as { ast: never }).ast : null!)).toBe(showExpr(ast(explicit)));
+  });
+  it("says what a run-together name could mean when its parts are declared", () => {
+    const r = parseExpression("Kps", { allowS: true, parameters: ["Kp"] });
+    expect(r).toMatchObject({ ok: false, code: "unknown-name", position: 0 });
+    expect(!r.ok && r.message).toContain("it could mean Kp·s: write Kp*s (or Kp s)");
+  });
+  it("keeps positions of later errors in the user's text", () => {
+    expect(parseExpression("2s+*3", { allowS: true, parameters: [] })).toMatchObject({ code: "syntax", position: 3 });
   });
 });
 
