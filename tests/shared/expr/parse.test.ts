@@ -171,7 +171,9 @@ describe("products written without `*`", () => {
   ];
   it.each(same)("%s reads as %s", (implicit, explicit) => {
     const p = { allowS: true, parameters: ["K", "a"] };
-    expect(showExpr(parseExpression(implicit, p).ok ? (parseExpression(implicit, p) as { ast: never }).ast : null!)).toBe(showExpr(ast(explicit)));
+    const read = parseExpression(implicit, p);
+    if (!read.ok) throw new Error(`${implicit}: ${read.message}`);
+    expect(showExpr(read.ast)).toBe(showExpr(ast(explicit)));
   });
   it("says what a run-together name could mean when its parts are declared", () => {
     const r = parseExpression("Kps", { allowS: true, parameters: ["Kp"] });
