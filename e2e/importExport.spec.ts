@@ -20,7 +20,10 @@ test("imports a .json file through the picker and opens the new diagram's canvas
   await expect.poll(async () => ((await closedLoop.textContent()) ?? "").replace(/[\s*]/g, ""), { timeout: 30_000 }).toBe("K/(s^2+2s+K)");
 
   await page.getByRole("toolbar", { name: "Editor" }).getByRole("button", { name: "Export" }).click();
-  const download = page.getByRole("menu", { name: "Export version 1" }).getByRole("menuitem", { name: "Document (.json)" });
+  const menu = page.getByRole("menu", { name: "Export version 1" });
+  await expect(menu.getByRole("menuitem", { name: "Figure (SVG)" })).toBeFocused();
+  await page.keyboard.press("End");
+  const download = menu.getByRole("menuitem", { name: "Document (.json)" });
   await expect(download).toBeFocused();
   await expect(download).toHaveAttribute("href", /\/versions\/1\/document\.json$/);
   const [file] = await Promise.all([page.waitForEvent("download"), download.click()]);
