@@ -19,7 +19,12 @@ test("imports a .json file through the picker and opens the new diagram's canvas
   const closedLoop = page.getByLabel("Closed-loop transfer function as text");
   await expect.poll(async () => ((await closedLoop.textContent()) ?? "").replace(/[\s*]/g, ""), { timeout: 30_000 }).toBe("K/(s^2+2s+K)");
 
-  const download = page.getByRole("toolbar", { name: "Editor" }).getByRole("link", { name: "Download JSON" });
+  await page.getByRole("toolbar", { name: "Editor" }).getByRole("button", { name: "Export" }).click();
+  const menu = page.getByRole("menu", { name: "Export version 1" });
+  await expect(menu.getByRole("menuitem", { name: "Figure (SVG)" })).toBeFocused();
+  await page.keyboard.press("End");
+  const download = menu.getByRole("menuitem", { name: "Document (.json)" });
+  await expect(download).toBeFocused();
   await expect(download).toHaveAttribute("href", /\/versions\/1\/document\.json$/);
   const [file] = await Promise.all([page.waitForEvent("download"), download.click()]);
   expect(file.suggestedFilename()).toBe("Imported servo-v1.json");

@@ -16,6 +16,7 @@ import { sharePage } from "@server/features/shareLinks/page";
 import { diagramShareLinksRouter, sharedLinkRouter, teamShareLinksRouter } from "@server/features/shareLinks/router";
 import { teamsRouter } from "@server/features/teams/router";
 import { versionsRouter } from "@server/features/versions/router";
+import { versionImportRouter } from "@server/features/versions/importRouter";
 import { exportRouter, sharedExportRouter } from "@server/features/export/router";
 import { createSaveCheck, type SaveCheck } from "@server/features/versions/check";
 import { clientPages } from "@server/http/clientPages";
@@ -67,7 +68,7 @@ export function createApp(deps: AppDeps): Express {
   api.use("/auth", authRouter(deps.lucia, limiter));
   api.use("/teams", teamsRouter(), teamInvitationsRouter({ mailer: deps.mailer, publicUrl: config.publicUrl }, limiter), teamDiagramsRouter(saveCheck), teamShareLinksRouter());
   api.use("/invitations", invitationLinkRouter(limiter));
-  api.use("/diagrams", diagramsRouter(), versionsRouter(saveCheck), exportRouter(), diagramShareLinksRouter({ publicUrl: config.publicUrl }));
+  api.use("/diagrams", diagramsRouter(), versionsRouter(saveCheck), versionImportRouter(saveCheck), exportRouter(), diagramShareLinksRouter({ publicUrl: config.publicUrl }));
   api.use("/shared", capabilityHeaders, sharedExportRouter(), sharedLinkRouter());
   api.use("/diagrams", commentsRouter({ mailer: deps.mailer, publicUrl: config.publicUrl, log }));
   api.use(unknownApiRoute);

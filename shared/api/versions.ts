@@ -77,3 +77,9 @@ export function checkedSummary(checked: CheckedResult | null): Pick<VersionListI
 
 /** `POST /api/diagrams/:id/versions/:n/restore` → 201: the new version, saved with message "Restored from vN". */
 export const restoredMessage = (from: number) => `Restored from v${from}`;
+
+/**
+ * `POST /api/diagrams/:id/versions/import` → 201: the new version, saved with message "Imported from <file name>"
+ * (the name cut to fit the 500-character message).
+ */
+export const importedMessage = (fileName: string) => `Imported from ${fileName}`.slice(0, 500);

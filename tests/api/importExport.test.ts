@@ -138,3 +138,68 @@ describe("importing a file as a new diagram", () => {
     expect(await diagramIds()).toEqual(before);
   });
 });
+
+describe("importing a file as a new version of a diagram", () => {
+  let diagramId: string;
+  const importVersion = (client: ReturnType<typeof request.agent>, content: Buffer, filename = "retuned.json") =>
+    client.post(`/api/diagrams/${diagramId}/versions/import`).attach("file", content, { filename, contentType: "application/json" });
+  const versionNumbers = async () =>
+    ((await owner.client.get(`/api/diagrams/${diagramId}/versions`)).body.versions as { number: number }[]).map((v) => v.number);
+
+  beforeAll(async () => {
+    diagramId = (await owner.client.post(`/api/teams/${teamId}/diagrams`).send({ title: "Dancer arm" })).body.diagram.id;
+    await owner.client.post(`/api/diagrams/${diagramId}/versions`).send({ baseVersion: 0, document: servo }).expect(201);
+  });
+
+  it("stores the file as the next version with the server's check, answering as a save does", async () => {
+    const retuned = { ...servo, parameters: { K: 7 } };
+    const res = await importVersion(owner.client, file(retuned), "dancer retune.json");
+    expect(res.status).toBe(201);
+    expect(res.body.version).toMatchObject({ number: 2, message: "Imported from dancer retune.json", createdBy: "wren" });
+    expect(res.body.version.document).toEqual(retuned);
+    expect((res.body.version.result as CheckedResult).ok).toBe(true);
+    const stored = (await owner.client.get(`/api/diagrams/${diagramId}/versions/2`)).body.version;
+    expect(stored.document).toEqual(retuned);
+    expect((await owner.client.get(`/api/diagrams/${diagramId}`)).body.diagram.latestVersion).toBe(2);
+  });
+
+  it("answers JSON that does not parse with 422 naming line and column, and stores nothing", async () => {
+    const before = await versionNumbers();
+    const res = await importVersion(owner.client, file('{\n  "format": "loopwright-diagram",\n  "wires": [,]\n}'), "typo.json");
+    expect(res.status).toBe(422);
+    expect(res.body.error.code).toBe("invalid_json");
+    expect(res.body.error.message).toMatch(/typo\.json is not valid JSON at line 3, column 13/);
+    expect(await versionNumbers()).toEqual(before);
+  });
+
+  it("answers a document with a broken block with the problem naming the block and field, and stores nothing", async () => {
+    const before = await versionNumbers();
+    const broken = { ...servo, blocks: servo.blocks.map((b) => (b.id === "g" ? { ...b, expr: "K/(s*(s+2)" } : b)) };
+    const res = await importVersion(owner.client, file(broken));
+    expect(res.status).toBe(422);
+    expect(res.body.error.code).toBe("invalid_document");
+    expect(res.body.problems).toEqual(expect.arrayContaining([expect.objectContaining({ severity: "error", blockId: "g", field: "expr" })]));
+    expect(await versionNumbers()).toEqual(before);
+  });
+
+  it("refuses a file over 1 MB with 413 and a missing file with 422, and stores nothing", async () => {
+    const before = await versionNumbers();
+    const big = await importVersion(owner.client, file({ ...servo, notes: "x".repeat(1024 * 1024) }));
+    expect(big.status).toBe(413);
+    expect(big.body.error.code).toBe("too_large");
+    const none = await owner.client.post(`/api/diagrams/${diagramId}/versions/import`).field("note", "no file");
+    expect(none.status).toBe(422);
+    expect(none.body.error.code).toBe("file_missing");
+    expect(await versionNumbers()).toEqual(before);
+  });
+
+  it("refuses viewers with 403 and non-members with 404, and stores nothing", async () => {
+    const before = await versionNumbers();
+    const asViewer = await importVersion(viewer, file(servo));
+    expect(asViewer.status).toBe(403);
+    expect(asViewer.body.error.code).toBe("forbidden");
+    const stranger = await signedUp(t, "outsider");
+    expect((await importVersion(stranger.client, file(servo))).status).toBe(404);
+    expect(await versionNumbers()).toEqual(before);
+  });
+});

@@ -179,6 +179,11 @@ const routes: Route[] = [
     expect: A(401, 404, 403, 201, 201),
   },
   {
+    name: "POST /api/diagrams/:id/versions/import",
+    call: (c) => c.post(`/api/diagrams/${diagramId}/versions/import`).attach("file", Buffer.from(JSON.stringify(gainDocument)), "matrix.json"),
+    expect: A(401, 404, 403, 201, 201),
+  },
+  {
     name: "GET /api/invitations/:token",
     call: async (c) => c.get(`/api/invitations/${(await pendingInvitation()).token}`),
     expect: A(200, 200, 200, 200, 200),

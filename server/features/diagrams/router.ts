@@ -6,12 +6,8 @@ import { requireRole } from "@server/features/teams/access";
 import { diagramWithRole } from "@server/features/diagrams/access";
 import { createDiagram, diagramDetail, listDiagrams, setArchived, updateDiagram } from "@server/features/diagrams/service";
 import { importDiagram } from "@server/features/diagrams/importDiagram";
-import { uploadedDiagram } from "@server/features/diagrams/uploadedDiagram";
+import { diagramFileUpload, uploadedDiagram } from "@server/features/diagrams/uploadedDiagram";
 import type { SaveCheck } from "@server/features/versions/check";
-import { HttpError } from "@server/http/errors";
-import { singleFileUpload } from "@server/http/upload";
-
-const MAX_IMPORT_BYTES = 1024 * 1024;
 
 /** Team-side routes (mounted under /api/teams); importing saves through the versions' check. */
 export function teamDiagramsRouter(check: SaveCheck): Router {
@@ -29,9 +25,8 @@ export function teamDiagramsRouter(check: SaveCheck): Router {
     "/:teamId/diagrams/import",
     // Access first, so the file of a non-member or viewer is never read.
     async (req: Request<{ teamId: string }>, res, next) => (await requireRole(req.params.teamId, requireUser(res).id, "editor"), next()),
-    singleFileUpload("file", MAX_IMPORT_BYTES),
+    diagramFileUpload(),
     async (req: Request<{ teamId: string }>, res) => {
-      if (!req.file) throw new HttpError(422, "file_missing", 'Send the file in the form field "file".');
       const { document, title } = uploadedDiagram(req.file);
       const input = { document, title: parseWith(createDiagramSchema, { title }).title };
       res.status(201).json({ diagram: await importDiagram(req.params.teamId, requireUser(res).id, input, check) });

@@ -2,6 +2,12 @@ import { parseJsonText } from "@shared/json/jsonText";
 import type { DiagramDocument } from "@shared/diagram/schema";
 import { validDiagramOf } from "@server/features/versions/document";
 import { HttpError } from "@server/http/errors";
+import { singleFileUpload } from "@server/http/upload";
+
+const MAX_IMPORT_BYTES = 1024 * 1024;
+
+/** The multipart reader of every diagram-file import: one file in the field `file`, at most 1 MB (413 above). */
+export const diagramFileUpload = () => singleFileUpload("file", MAX_IMPORT_BYTES);
 
 export interface UploadedFile {
   originalname: string;
@@ -19,10 +25,12 @@ function textOf(file: UploadedFile): string {
 }
 
 /**
- * An uploaded .json file read as a new diagram: its document (422 `invalid_json` with line and column, or
- * `invalid_document` with the problems) and its title, the document's own or else the file's name.
+ * An uploaded .json file read as a diagram (a new one, or a new version of one): its document (422 `file_missing`,
+ * `invalid_json` with line and column, or `invalid_document` with the problems) and its title, the document's own
+ * or else the file's name.
  */
-export function uploadedDiagram(file: UploadedFile): { document: DiagramDocument; title: string } {
+export function uploadedDiagram(file: UploadedFile | undefined): { document: DiagramDocument; title: string } {
+  if (!file) throw new HttpError(422, "file_missing", 'Send the file in the form field "file".');
   const parsed = parseJsonText(textOf(file));
   if (!parsed.ok) {
     const { line, column, message } = parsed.error;

@@ -10,7 +10,7 @@ import { CanvasNotice, type Notice } from "@/features/editor/components/CanvasNo
 import { DiagramCanvas } from "@/features/editor/components/DiagramCanvas";
 import { BlockRail } from "@/features/editor/components/BlockRail";
 import { EditorToolbar } from "@/features/editor/components/EditorToolbar";
-import { versionDocumentHref } from "@/features/editor/api/versionDocument";
+import { versionExports } from "@/features/editor/api/versionExport";
 import { SessionBanners, type SavedVersion } from "@/features/editor/components/SessionBanners";
 import { SessionDialogs } from "@/features/editor/components/SessionDialogs";
 import { Dialog } from "@/features/editor/components/dialogs/Dialog";
@@ -224,7 +224,7 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
         onFit={commands.fit}
         onHelp={() => setHelp(true)}
         onSave={save.open}
-        download={base && !viewOnly ? { number: base, href: versionDocumentHref(diagram.id, base) } : null}
+        download={viewOnly ? undefined : base ? versionExports(diagram.id, base) : null}
         onShare={share && !viewOnly ? () => setSharing(true) : undefined}
         status={status}
       />

@@ -1,6 +1,8 @@
-import { Download, Keyboard, LayoutGrid, Maximize, Redo2, Save, Share2, Undo2 } from "lucide-react";
+import { Keyboard, LayoutGrid, Maximize, Redo2, Save, Share2, Undo2 } from "lucide-react";
 import type { ReactNode } from "react";
 import { Button } from "@/components/Button";
+import type { VersionExports } from "@/features/editor/api/versionExport";
+import { ExportMenu } from "@/features/editor/components/ExportMenu";
 
 interface Props {
   readOnly: boolean;
@@ -13,8 +15,8 @@ interface Props {
   onFit: () => void;
   onHelp: () => void;
   onSave: () => void;
-  /** The open version's number and its document's download link; null before the first save. */
-  download: { number: number; href: string } | null;
+  /** The open saved version's downloads for the Export menu; null before the first save (disabled), none: no menu. */
+  download?: VersionExports | null;
   /** Opens the share dialog; none: no Share action (viewers, view-only sessions). */
   onShare?: () => void;
   status: ReactNode;
@@ -46,11 +48,7 @@ export function EditorToolbar({ readOnly, undoLabel, redoLabel, onUndo, onRedo, 
       <button type="button" className={tool} onClick={onHelp} aria-keyshortcuts="Shift+?">
         <Keyboard className="size-4" aria-hidden /> Shortcuts
       </button>
-      {download && (
-        <a className={tool} href={download.href} download title={`Download version ${download.number} (as saved) as a .json file`}>
-          <Download className="size-4" aria-hidden /> Download JSON
-        </a>
-      )}
+      {download !== undefined && <ExportMenu exports={download} className={tool} />}
       {onShare && !readOnly && (
         <button type="button" className={tool} onClick={onShare} title="Make a read-only link that opens without an account">
           <Share2 className="size-4" aria-hidden /> Share

@@ -1,0 +1,23 @@
+import { versionDocumentHref } from "@/features/editor/api/versionDocument";
+
+/**
+ * GET /api/diagrams/:id/versions/:n/export.svg|.png?download=1 — version n's figure as a file download (the server
+ * names it `<title>-v<n>.svg|png`; the PNG is rendered at 2× from the same SVG), so these are links, not queries.
+ */
+export const versionFigureHref = (diagramId: string, number: number, format: "svg" | "png") =>
+  `/api/diagrams/${encodeURIComponent(diagramId)}/versions/${number}/export.${format}?download=1`;
+
+/** The files the editor's Export menu offers for one saved version. */
+export interface VersionExports {
+  number: number;
+  svg: string;
+  png: string;
+  json: string;
+}
+
+export const versionExports = (diagramId: string, number: number): VersionExports => ({
+  number,
+  svg: versionFigureHref(diagramId, number, "svg"),
+  png: versionFigureHref(diagramId, number, "png"),
+  json: versionDocumentHref(diagramId, number),
+});
