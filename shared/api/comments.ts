@@ -55,3 +55,12 @@ export interface ThreadList {
 
 /** The words for a pin: "block G", "wire w3". */
 export const pinLabel = (pin: CommentPin): string => ("blockId" in pin ? `block ${pin.blockId}` : `wire ${pin.wireId}`);
+
+/**
+ * The words for a pin with its block's label from the drawing, as the panel and the export show them.
+ * Example: pinTarget({ blockId: "b3" }, { blocks: [{ id: "b3", label: "Plant" }] }) === "block b3 (Plant)".
+ */
+export function pinTarget(pin: CommentPin, doc: { blocks: readonly { id: string; label?: string }[] }): string {
+  const label = "blockId" in pin ? doc.blocks.find((b) => b.id === pin.blockId)?.label : undefined;
+  return label ? `${pinLabel(pin)} (${label})` : pinLabel(pin);
+}

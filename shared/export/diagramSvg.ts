@@ -8,7 +8,8 @@ import { arrowHead, roundedPath, wireRoute, type Point } from "@shared/geometry/
 
 export interface Typeset { svg: string; width: number; height: number }
 export type Typesetter = (tex: string) => Typeset;
-export interface ExportPin { id: string; target: { blockId: string } | { wireId: string }; label: string }
+/** A review comment's marker: `number` is drawn in it (the thread's number in the comments panel), `label` listed under the figure. */
+export interface ExportPin { id: string; target: { blockId: string } | { wireId: string }; number: number; label: string }
 export interface DiagramSvgInput {
   document: DiagramDocument;
   result: CheckedResult | null;
@@ -102,12 +103,12 @@ export function diagramSvg({ document: doc, result, meta, pins = [], typeset }: 
   out.push(`<g transform="translate(${r1(-x0)} ${r1(head)})">`);
   for (const w of wires) out.push(`<path class="wire" data-wire-id="${xmlEscape(w.id)}" d="${w.d}" fill="none" stroke="${SIGNAL}" stroke-width="1.6"/><path class="arrowhead" d="${w.head}" fill="${SIGNAL}"/>`);
   for (const p of all) out.push(blockSvg(p));
-  pins.forEach((pin, i) => {
+  pins.forEach((pin) => {
     const at = "blockId" in pin.target ? placed.get(pin.target.blockId) : undefined;
     const wire = "wireId" in pin.target ? wires.find((w) => w.id === (pin.target as { wireId: string }).wireId) : undefined;
     const c = at ? { x: at.x + at.w, y: at.y } : wire ? wire.pts[Math.floor(wire.pts.length / 2)] : null;
     if (!c) return;
-    out.push(`<g class="pin" data-pin-id="${xmlEscape(pin.id)}"><title>${xmlEscape(pin.label)}</title><circle cx="${r1(c.x)}" cy="${r1(c.y)}" r="9" fill="#d4891c"/><text x="${r1(c.x)}" y="${r1(c.y + 4)}" text-anchor="middle" font-size="11" font-weight="600" fill="#ffffff">${i + 1}</text></g>`);
+    out.push(`<g class="pin" data-pin-id="${xmlEscape(pin.id)}"><title>${xmlEscape(pin.label)}</title><circle cx="${r1(c.x)}" cy="${r1(c.y)}" r="9" fill="#d4891c"/><text x="${r1(c.x)}" y="${r1(c.y + 4)}" text-anchor="middle" font-size="11" font-weight="600" fill="#ffffff">${pin.number}</text></g>`);
   });
   out.push(`</g>`);
   let y = y1 - y0 + 90;
@@ -120,7 +121,7 @@ export function diagramSvg({ document: doc, result, meta, pins = [], typeset }: 
     y += t.height + 12;
   }
   y = y1 - y0 + 90 + resultHeight;
-  pins.forEach((pin, i) => out.push(`<text x="24" y="${r1(y + i * 18)}" font-size="12" fill="${INK}">${i + 1}. ${xmlEscape(pin.label)}</text>`));
+  pins.forEach((pin, i) => out.push(`<text x="24" y="${r1(y + i * 18)}" font-size="12" fill="${INK}">${pin.number}. ${xmlEscape(pin.label)}</text>`));
   out.push(`</svg>`);
   return out.join("\n");
 }

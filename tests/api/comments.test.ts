@@ -198,3 +198,47 @@ describe("who may comment", () => {
     expect(threads.at(-1)?.body).toBe("Mail is down, the comment is not.");
   });
 });
+
+describe("pins in the exported figure", () => {
+  const text = (req: request.Test) => req.buffer(true).parse((r, cb) => {
+    let s = "";
+    r.on("data", (c) => (s += c));
+    r.on("end", () => cb(null, s));
+  });
+  const figure = async (client: Client, query = "") => {
+    const res = await text(client.get(`/api/diagrams/${diagramId}/versions/1/export.svg${query}`));
+    expect(res.status).toBe(200);
+    return res.body as string;
+  };
+  const markers = (svg: string) => svg.match(/<g class="pin"/g)?.length ?? 0;
+
+  it("draws the open pinned threads with their labels only when asked with ?comments=1", async () => {
+    const asked = await figure(viewer.client, "?comments=1");
+    expect(markers(asked)).toBe(2);
+    expect(asked).toContain("Comment 1 on block g");
+    expect(asked).toContain("Comment 2 on wire w4");
+    const plain = await figure(viewer.client);
+    expect(markers(plain)).toBe(0);
+    expect(plain).not.toContain("Comment 1 on");
+  });
+
+  it("leaves a resolved thread out and keeps the other's own number in its marker", async () => {
+    const first = (await owner.client.get(comments())).body.threads[0] as ThreadView;
+    await owner.client.post(`/api/diagrams/${diagramId}/comments/${first.id}/resolve`).expect(200);
+    const svg = await figure(owner.client, "?comments=1");
+    expect(markers(svg)).toBe(1);
+    expect(svg).not.toContain("Comment 1 on");
+    expect(svg).toMatch(/<g class="pin"[^>]*><title>Comment 2 on wire w4<\/title>.*>2<\/text><\/g>/);
+    await owner.client.post(`/api/diagrams/${diagramId}/comments/${first.id}/reopen`).expect(200);
+  });
+
+  it("never reveals comments through a share link's figure", async () => {
+    const link = await owner.client.post(`/api/diagrams/${diagramId}/share-links`).send({ version: null, expiresInDays: null });
+    expect(link.status).toBe(201);
+    const token = String(link.body.shareLink.url).split("/s/")[1];
+    const res = await text(request(t.app).get(`/api/shared/${token}/export.svg?comments=1`));
+    expect(res.status).toBe(200);
+    expect(markers(res.body as string)).toBe(0);
+    expect(res.body as string).not.toContain("Comment 1 on");
+  });
+});

@@ -28,9 +28,12 @@ describe("diagramSvg (common practice: SVG 1.1 as XML)", () => {
     expect(signs).toEqual(["+", "−"]);
   });
   it("escapes user strings and draws pins", () => {
-    const svg = build("A <&> B", [{ id: "c1", target: { blockId: "g" }, label: "Check <gain>" }]);
+    const svg = build("A <&> B", [{ id: "c1", target: { blockId: "g" }, number: 2, label: "Check <gain>" }]);
     expect(svg).toContain("A &lt;&amp;&gt; B");
     const pins = Array.from(parse(svg).getElementsByTagName("g")).filter((g) => g.getAttribute("class") === "pin");
     expect(pins.length).toBe(1);
+    // The marker carries the thread's own number (the panel's), not its place among the pins drawn.
+    expect(pins[0]!.textContent).toContain("2");
+    expect(svg).toContain("2. Check &lt;gain&gt;");
   });
 });
