@@ -43,3 +43,26 @@ test("the Export menu downloads the figure as well-formed SVG with a title per b
   expect([...png.subarray(0, 8)]).toEqual(PNG_SIGNATURE);
   expect(png.readUInt32BE(16)).toBe(Math.round(2 * svgWidth)); // IHDR width
 });
+
+test("a bad file for Import as new version shows its error naming line and column, and adds no version", async ({ page }) => {
+  await openImportedLoop(page);
+  const status = page.getByRole("toolbar", { name: "Editor" }).getByRole("status");
+  await expect(status).toHaveText("Saved as v1");
+
+  await page.getByLabel("Import as new version…").setInputFiles({ name: "typo.json", mimeType: "application/json", buffer: Buffer.from('{\n  "format": "loopwright-diagram",\n  "wires": [,]\n}') });
+
+  const alert = page.getByRole("alert").filter({ hasText: "The file was not imported as a new version" });
+  await expect(alert).toContainText("typo.json is not valid JSON at line 3, column 13");
+  const versions = await page.request.get(`${new URL(page.url()).pathname.replace("/diagrams/", "/api/diagrams/")}/versions`);
+  expect(((await versions.json()) as { versions: { number: number }[] }).versions.map((v) => v.number)).toEqual([1]);
+  await expect(status).toHaveText("Saved as v1");
+});
+
+test("a good file for Import as new version is stored as version 2 and opens on request", async ({ page }) => {
+  await openImportedLoop(page);
+  const retuned = { ...LOOP, parameters: { K: 9 } };
+  await page.getByLabel("Import as new version…").setInputFiles({ name: "retuned.json", mimeType: "application/json", buffer: Buffer.from(JSON.stringify(retuned)) });
+  await expect(page.getByText("Imported as version 2.")).toBeVisible();
+  await page.getByRole("button", { name: "Open version 2" }).click();
+  await expect(page.getByRole("toolbar", { name: "Editor" }).getByRole("status")).toHaveText("Saved as v2");
+});

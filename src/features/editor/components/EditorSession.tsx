@@ -10,6 +10,7 @@ import { CanvasNotice, type Notice } from "@/features/editor/components/CanvasNo
 import { DiagramCanvas } from "@/features/editor/components/DiagramCanvas";
 import { BlockRail } from "@/features/editor/components/BlockRail";
 import { EditorToolbar } from "@/features/editor/components/EditorToolbar";
+import { ImportVersion } from "@/features/editor/components/ImportVersion";
 import { versionExports } from "@/features/editor/api/versionExport";
 import { SessionBanners, type SavedVersion } from "@/features/editor/components/SessionBanners";
 import { SessionDialogs } from "@/features/editor/components/SessionDialogs";
@@ -211,6 +212,18 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
           }}
           onReload={() => void onReload()}
           onCompare={setComparing}
+        />
+      )}
+      {!readOnly && (
+        <ImportVersion
+          diagramId={diagram.id}
+          teamId={diagram.teamId}
+          dirty={dirty}
+          onOpenLatest={() => {
+            draft.clear();
+            guard.allowLeave();
+            void onReload();
+          }}
         />
       )}
       <EditorToolbar

@@ -1,0 +1,79 @@
+import { useState } from "react";
+import { FileUp } from "lucide-react";
+import { Button, buttonClass } from "@/components/Button";
+import { errorMessage, isApiError } from "@/lib/apiClient";
+import { useImportVersion } from "@/features/editor/api/importVersion";
+
+interface Props {
+  diagramId: string;
+  teamId: string;
+  /** Unsaved edits in the open session: opening the imported version would drop them, so the user is asked first. */
+  dirty: boolean;
+  /** Opens the diagram's latest version in a fresh session. */
+  onOpenLatest: () => void;
+}
+
+/**
+ * "Import as new version…": a .json file becomes the diagram's next version on the server. The open session is
+ * left as it is; the new version is offered, and the server's refusal (with the problems it found) shown.
+ */
+export function ImportVersion({ diagramId, teamId, dirty, onOpenLatest }: Props) {
+  const importing = useImportVersion(diagramId, teamId);
+  const [refusal, setRefusal] = useState<{ message: string; problems: string[] } | null>(null);
+  const [imported, setImported] = useState<number | null>(null);
+
+  const start = (file: File) => {
+    setRefusal(null);
+    setImported(null);
+    importing.mutate(file, {
+      onSuccess: (v) => setImported(v.number),
+      onError: (e) => setRefusal({ message: errorMessage(e), problems: isApiError(e) ? e.problems.map((p) => p.message) : [] }),
+    });
+  };
+
+  const open = () => {
+    if (dirty && !window.confirm("Open the imported version? Your unsaved changes in this editor will be lost.")) return;
+    onOpenLatest();
+  };
+
+  return (
+    <div className="mb-2 flex flex-col gap-2 text-sm">
+      <div className="flex flex-wrap items-center gap-3">
+        <label className={`${buttonClass("secondary", "sm")} cursor-pointer focus-within:outline-2 focus-within:outline-signal`}>
+          <FileUp className="size-4" aria-hidden /> Import as new version…
+          <input
+            type="file"
+            accept=".json,application/json"
+            className="sr-only"
+            disabled={importing.isPending}
+            onChange={(e) => {
+              const file = e.target.files?.[0];
+              e.target.value = ""; // the same file, fixed, can be picked again
+              if (file) start(file);
+            }}
+          />
+        </label>
+        <span role="status" className="text-ink-soft">
+          {importing.isPending ? "Importing…" : imported !== null ? `Imported as version ${imported}.` : ""}
+        </span>
+        {imported !== null && (
+          <Button size="sm" onClick={open}>
+            Open version {imported}
+          </Button>
+        )}
+      </div>
+      {refusal && (
+        <div role="alert" className="rounded border border-fault/40 bg-fault-tint px-4 py-3">
+          <p className="font-medium text-fault">The file was not imported as a new version: {refusal.message}</p>
+          {refusal.problems.length > 0 && (
+            <ul className="mt-2 list-disc pl-5">
+              {refusal.problems.map((p, i) => (
+                <li key={i}>{p}</li>
+              ))}
+            </ul>
+          )}
+        </div>
+      )}
+    </div>
+  );
+}
