@@ -33,7 +33,7 @@ export function teamDiagramsRouter(check: SaveCheck): Router {
     async (req: Request<{ teamId: string }>, res) => {
       if (!req.file) throw new HttpError(422, "file_missing", 'Send the file in the form field "file".');
       const { document, title } = uploadedDiagram(req.file);
-      const input = { document, title: parseWith(createDiagramSchema, { title }).title };
+      const input = { document, title: parseWith(createDiagramSchema, { title }).title, fileName: req.file.originalname };
       res.status(201).json({ diagram: await importDiagram(req.params.teamId, requireUser(res).id, input, check) });
     },
   );
