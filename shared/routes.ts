@@ -10,6 +10,7 @@ export const paths = {
   teams: "/teams",
   team: "/teams/:teamId",
   members: "/teams/:teamId/members",
+  activity: "/teams/:teamId/activity",
   diagram: "/diagrams/:id",
   share: "/s/:token",
 } as const;
@@ -53,6 +54,7 @@ export const href = {
   teams: () => paths.teams,
   team: (teamId: string) => fillPath(paths.team, { teamId }),
   members: (teamId: string) => fillPath(paths.members, { teamId }),
+  activity: (teamId: string) => fillPath(paths.activity, { teamId }),
   diagram: (id: string) => fillPath(paths.diagram, { id }),
   share: (token: string) => fillPath(paths.share, { token }),
   /** A review comment: the diagram page opens its version's comments with the comment's thread selected. */

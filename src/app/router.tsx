@@ -14,6 +14,7 @@ const InviteRoute = lazy(() => import("@/app/routes/InviteRoute").then((m) => ({
 const TeamsRoute = lazy(() => import("@/app/routes/TeamsRoute").then((m) => ({ default: m.TeamsRoute })));
 const TeamRoute = lazy(() => import("@/app/routes/TeamRoute").then((m) => ({ default: m.TeamRoute })));
 const MembersRoute = lazy(() => import("@/app/routes/MembersRoute").then((m) => ({ default: m.MembersRoute })));
+const ActivityRoute = lazy(() => import("@/app/routes/ActivityRoute").then((m) => ({ default: m.ActivityRoute })));
 const DiagramRoute = lazy(() => loadDiagramRoute().then((m) => ({ default: m.DiagramRoute })));
 const SharedRoute = lazy(() => import("@/app/routes/SharedRoute").then((m) => ({ default: m.SharedRoute })));
 const NotFoundRoute = lazy(() => import("@/app/routes/NotFoundRoute").then((m) => ({ default: m.NotFoundRoute })));
@@ -35,6 +36,7 @@ export const router = createBrowserRouter([
           { path: paths.teams, element: <TeamsRoute /> },
           { path: paths.team, element: <TeamRoute /> },
           { path: paths.members, element: <MembersRoute /> },
+          { path: paths.activity, element: <ActivityRoute /> },
           { path: paths.diagram, element: <DiagramRoute /> },
         ],
       },
