@@ -6,6 +6,7 @@ import type { Logger } from "pino";
 import type { Sequelize } from "sequelize";
 import type { AppLucia } from "@server/auth/lucia";
 import type { Config } from "@server/config";
+import { teamAuditRouter } from "@server/features/audit/router";
 import { authRouter } from "@server/features/auth/router";
 import { commentsRouter } from "@server/features/comments/router";
 import { diagramsRouter, teamDiagramsRouter } from "@server/features/diagrams/router";
@@ -67,6 +68,7 @@ export function createApp(deps: AppDeps): Express {
   api.use(systemRouter({ sequelize: deps.sequelize, mailbox: deps.mailbox, demo: config.demo }));
   api.use("/auth", authRouter(deps.lucia, limiter));
   api.use("/teams", teamsRouter(), teamInvitationsRouter({ mailer: deps.mailer, publicUrl: config.publicUrl }, limiter), teamDiagramsRouter(saveCheck), teamShareLinksRouter());
+  api.use("/teams", teamAuditRouter());
   api.use("/invitations", invitationLinkRouter(limiter));
   api.use("/diagrams", diagramsRouter(), versionsRouter(saveCheck), versionImportRouter(saveCheck), exportRouter(), diagramShareLinksRouter({ publicUrl: config.publicUrl }));
   api.use("/shared", capabilityHeaders, sharedExportRouter(), sharedLinkRouter());

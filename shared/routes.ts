@@ -10,6 +10,7 @@ export const paths = {
   teams: "/teams",
   team: "/teams/:teamId",
   members: "/teams/:teamId/members",
+  activity: "/teams/:teamId/activity",
   diagram: "/diagrams/:id",
   versions: "/diagrams/:id/versions",
   compare: "/diagrams/:id/compare",
@@ -55,6 +56,7 @@ export const href = {
   teams: () => paths.teams,
   team: (teamId: string) => fillPath(paths.team, { teamId }),
   members: (teamId: string) => fillPath(paths.members, { teamId }),
+  activity: (teamId: string) => fillPath(paths.activity, { teamId }),
   diagram: (id: string) => fillPath(paths.diagram, { id }),
   /** One saved version, opened read-only in the diagram page. */
   diagramVersion: (id: string, version: number) => `${fillPath(paths.diagram, { id })}?version=${version}`,

@@ -14,6 +14,7 @@ const InviteRoute = lazy(() => import("@/app/routes/InviteRoute").then((m) => ({
 const TeamsRoute = lazy(() => import("@/app/routes/TeamsRoute").then((m) => ({ default: m.TeamsRoute })));
 const TeamRoute = lazy(() => import("@/app/routes/TeamRoute").then((m) => ({ default: m.TeamRoute })));
 const MembersRoute = lazy(() => import("@/app/routes/MembersRoute").then((m) => ({ default: m.MembersRoute })));
+const ActivityRoute = lazy(() => import("@/app/routes/ActivityRoute").then((m) => ({ default: m.ActivityRoute })));
 const DiagramRoute = lazy(() => loadDiagramRoute().then((m) => ({ default: m.DiagramRoute })));
 const VersionsRoute = lazy(() => import("@/app/routes/VersionsRoute").then((m) => ({ default: m.VersionsRoute })));
 const CompareRoute = lazy(() => import("@/app/routes/CompareRoute").then((m) => ({ default: m.CompareRoute })));
@@ -37,6 +38,7 @@ export const router = createBrowserRouter([
           { path: paths.teams, element: <TeamsRoute /> },
           { path: paths.team, element: <TeamRoute /> },
           { path: paths.members, element: <MembersRoute /> },
+          { path: paths.activity, element: <ActivityRoute /> },
           { path: paths.diagram, element: <DiagramRoute /> },
           { path: paths.versions, element: <VersionsRoute /> },
           { path: paths.compare, element: <CompareRoute /> },

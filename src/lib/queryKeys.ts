@@ -17,5 +17,6 @@ export const queryKeys = {
   invitation: (token: string) => ["invitations", token] as const,
   shareLinks: (diagramId: string) => ["diagrams", diagramId, "share-links"] as const,
   teamShareLinks: (teamId: string) => ["teams", teamId, "share-links"] as const,
+  audit: (teamId: string, filters: object) => ["teams", teamId, "audit", filters] as const,
   shared: (token: string) => ["shared", token] as const,
 };

@@ -193,6 +193,7 @@ const routes: Route[] = [
     call: async (c) => c.post(`/api/invitations/${(await pendingInvitation()).token}/accept`),
     expect: A(401, 403, 403, 403, 403),
   },
+  { name: "GET /api/teams/:id/audit", call: (c) => c.get(`/api/teams/${teamId}/audit`), expect: A(401, 404, 403, 403, 200) },
   { name: "GET /api/config", call: (c) => c.get("/api/config"), expect: A(200, 200, 200, 200, 200) },
 ];
 

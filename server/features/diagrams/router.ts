@@ -27,8 +27,8 @@ export function teamDiagramsRouter(check: SaveCheck): Router {
     async (req: Request<{ teamId: string }>, res, next) => (await requireRole(req.params.teamId, requireUser(res).id, "editor"), next()),
     diagramFileUpload(),
     async (req: Request<{ teamId: string }>, res) => {
-      const { document, title } = uploadedDiagram(req.file);
-      const input = { document, title: parseWith(createDiagramSchema, { title }).title };
+      const { document, title, fileName } = uploadedDiagram(req.file);
+      const input = { document, title: parseWith(createDiagramSchema, { title }).title, fileName };
       res.status(201).json({ diagram: await importDiagram(req.params.teamId, requireUser(res).id, input, check) });
     },
   );

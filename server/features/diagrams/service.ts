@@ -5,6 +5,7 @@ import type { Role } from "@shared/api/teams";
 import { Diagram, DiagramVersion } from "@server/db/models/diagram";
 import { Team } from "@server/db/models/team";
 import { User } from "@server/db/models/user";
+import { recordAudit } from "@server/features/audit/record";
 import { notFound } from "@server/http/errors";
 import { isUuid } from "@server/http/ids";
 
@@ -53,9 +54,27 @@ export async function listDiagrams(teamId: string, archived: boolean): Promise<D
   return rows.map((d) => summary(d, latest.get(d.id))).sort((a, b) => b.updatedAt.localeCompare(a.updatedAt));
 }
 
-export async function createDiagram(teamId: string, userId: string, input: CreateDiagramInput): Promise<DiagramSummary> {
+/**
+ * Creates an empty diagram and records it in the trail in the same transaction: as `diagram.created`, or with
+ * `from` (the uploaded file's name) as `diagram.imported`.
+ */
+export async function createDiagram(
+  teamId: string,
+  userId: string,
+  input: CreateDiagramInput,
+  from?: { fileName: string },
+): Promise<DiagramSummary> {
   const { title, description } = createDiagramSchema.parse(input);
-  const d = await Diagram.create({ teamId, title, description, createdBy: userId });
+  const d = await Diagram.sequelize!.transaction(async (transaction) => {
+    const created = await Diagram.create({ teamId, title, description, createdBy: userId }, { transaction });
+    await recordAudit(
+      from
+        ? { teamId, actorId: userId, kind: "diagram.imported", diagramId: created.id, detail: { title, fileName: from.fileName } }
+        : { teamId, actorId: userId, kind: "diagram.created", diagramId: created.id, detail: { title } },
+      transaction,
+    );
+    return created;
+  });
   return summary(Object.assign(d, { creator: (await User.findByPk(userId)) ?? undefined }));
 }
 

@@ -29,7 +29,7 @@ function textOf(file: UploadedFile): string {
  * `invalid_json` with line and column, or `invalid_document` with the problems) and its title, the document's own
  * or else the file's name.
  */
-export function uploadedDiagram(file: UploadedFile | undefined): { document: DiagramDocument; title: string } {
+export function uploadedDiagram(file: UploadedFile | undefined): { document: DiagramDocument; title: string; fileName: string } {
   if (!file) throw new HttpError(422, "file_missing", 'Send the file in the form field "file".');
   const parsed = parseJsonText(textOf(file));
   if (!parsed.ok) {
@@ -37,5 +37,5 @@ export function uploadedDiagram(file: UploadedFile | undefined): { document: Dia
     throw new HttpError(422, "invalid_json", `${file.originalname} is not valid JSON at line ${line}, column ${column}: ${message}.`);
   }
   const document = validDiagramOf(parsed.value);
-  return { document, title: document.title?.trim() || file.originalname.replace(/\.json$/i, "") };
+  return { document, title: document.title?.trim() || file.originalname.replace(/\.json$/i, ""), fileName: file.originalname };
 }

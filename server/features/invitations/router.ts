@@ -17,8 +17,9 @@ export function teamInvitationsRouter(deps: { mailer: Mailer; publicUrl: string 
     res.status(201).json({ invitation });
   });
   router.delete("/:teamId/invitations/:invitationId", async (req, res) => {
-    await requireRole(req.params.teamId, requireUser(res).id, "owner");
-    await revokeInvitation(req.params.teamId, req.params.invitationId);
+    const me = requireUser(res).id;
+    await requireRole(req.params.teamId, me, "owner");
+    await revokeInvitation(req.params.teamId, req.params.invitationId, me);
     res.status(204).end();
   });
   return router;

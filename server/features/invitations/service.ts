@@ -3,7 +3,9 @@ import type { InvitationPreview, InvitationView, InviteInput } from "@shared/api
 import { href } from "@shared/routes";
 import { Invitation, Membership, Team } from "@server/db/models/team";
 import { User } from "@server/db/models/user";
+import { recordAudit } from "@server/features/audit/record";
 import { HttpError, conflict, forbidden, notFound } from "@server/http/errors";
+import { isUuid } from "@server/http/ids";
 import { invitationMail } from "@server/mail/invitationMail";
 import type { Mailer } from "@server/mail/mailer";
 
@@ -29,7 +31,10 @@ export async function listInvitations(teamId: string): Promise<InvitationView[]>
   return rows.filter((i) => i.expiresAt.getTime() > Date.now()).map(view);
 }
 
-/** Creates a one-time invitation (replacing an older pending one for the same e-mail) and mails its link. */
+/**
+ * Creates a one-time invitation (replacing an older pending one for the same e-mail), records it in the trail and
+ * mails its link, all in one transaction: if the mail cannot be sent, nothing changes, the older invitation stays.
+ */
 export async function invite(
   deps: { mailer: Mailer; publicUrl: string },
   teamId: string,
@@ -43,29 +48,37 @@ export async function invite(
     throw conflict(`${input.email} is already a member of this team.`);
   const token = randomBytes(32).toString("base64url");
   const expiresAt = new Date(Date.now() + VALID_FOR_MS);
-  await Invitation.destroy({ where: { teamId, email: input.email, acceptedAt: null } });
-  const invitation = await Invitation.create({
-    teamId,
-    email: input.email,
-    role: input.role,
-    tokenHash: tokenHash(token),
-    invitedBy: inviter.id,
-    expiresAt,
-    acceptedAt: null,
+  const invitation = await Invitation.sequelize!.transaction(async (transaction) => {
+    await Invitation.destroy({ where: { teamId, email: input.email, acceptedAt: null }, transaction });
+    const created = await Invitation.create(
+      { teamId, email: input.email, role: input.role, tokenHash: tokenHash(token), invitedBy: inviter.id, expiresAt, acceptedAt: null },
+      { transaction },
+    );
+    await recordAudit(
+      { teamId, actorId: inviter.id, kind: "invitation.sent", subject: created.id, detail: { email: input.email, role: input.role } },
+      transaction,
+    );
+    const link = `${deps.publicUrl}${href.invite(token)}`;
+    try {
+      await deps.mailer.send(invitationMail({ to: input.email, inviter: inviter.name, team: team.name, role: input.role, link, expiresAt }));
+    } catch {
+      throw new HttpError(502, "mail_failed", "The invitation e-mail could not be sent. Check the mail settings and try again.");
+    }
+    return created;
   });
-  const link = `${deps.publicUrl}${href.invite(token)}`;
-  try {
-    await deps.mailer.send(invitationMail({ to: input.email, inviter: inviter.name, team: team.name, role: input.role, link, expiresAt }));
-  } catch {
-    await invitation.destroy();
-    throw new HttpError(502, "mail_failed", "The invitation e-mail could not be sent. Check the mail settings and try again.");
-  }
   return { ...view(invitation), invitedBy: inviter.name };
 }
 
-export async function revokeInvitation(teamId: string, invitationId: string): Promise<void> {
-  const n = await Invitation.destroy({ where: { id: invitationId, teamId, acceptedAt: null } });
-  if (!n) throw notFound("No pending invitation with that id.");
+/** Withdraws a pending invitation; the trail keeps whom it was for. */
+export async function revokeInvitation(teamId: string, invitationId: string, actorId: string): Promise<void> {
+  await Invitation.sequelize!.transaction(async (transaction) => {
+    const i = isUuid(invitationId)
+      ? await Invitation.findOne({ where: { id: invitationId, teamId, acceptedAt: null }, lock: transaction.LOCK.UPDATE, transaction })
+      : null;
+    if (!i) throw notFound("No pending invitation with that id.");
+    await i.destroy({ transaction });
+    await recordAudit({ teamId, actorId, kind: "invitation.revoked", subject: i.id, detail: { email: i.email, role: i.role } }, transaction);
+  });
 }
 
 async function findUsable(token: string, lock?: import("sequelize").Transaction): Promise<Invitation> {
@@ -103,6 +116,10 @@ export async function acceptInvitation(token: string, user: { id: string; email:
     if (!member) await Membership.create({ teamId: i.teamId, userId: user.id, role: i.role }, { transaction });
     i.acceptedAt = new Date();
     await i.save({ transaction });
+    await recordAudit(
+      { teamId: i.teamId, actorId: user.id, kind: "invitation.accepted", subject: i.id, detail: { email: i.email, role: i.role, invitedBy: i.invitedBy } },
+      transaction,
+    );
     return i.teamId;
   });
 }

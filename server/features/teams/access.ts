@@ -8,7 +8,7 @@ const rank: Record<Role, number> = { viewer: 0, editor: 1, owner: 2 };
 const WHAT: Record<Role, string> = {
   viewer: "view this team",
   editor: "Only editors and owners can change diagrams in this team.",
-  owner: "Only team owners can manage members and invitations.",
+  owner: "Only team owners can manage members and invitations or read the team's activity.",
 };
 
 /**

@@ -30,15 +30,16 @@ export function teamsRouter(): Router {
   });
 
   router.patch("/:teamId/members/:userId", async (req, res) => {
-    await requireRole(req.params.teamId, requireUser(res).id, "owner");
-    res.json({ member: await changeRole(req.params.teamId, req.params.userId, parseWith(changeRoleSchema, req.body)) });
+    const me = requireUser(res).id;
+    await requireRole(req.params.teamId, me, "owner");
+    res.json({ member: await changeRole(req.params.teamId, me, req.params.userId, parseWith(changeRoleSchema, req.body)) });
   });
 
   router.delete("/:teamId/members/:userId", async (req, res) => {
     const me = requireUser(res).id;
     // Anyone may leave; removing somebody else takes an owner.
     await requireRole(req.params.teamId, me, me === req.params.userId ? "viewer" : "owner");
-    await removeMember(req.params.teamId, req.params.userId);
+    await removeMember(req.params.teamId, me, req.params.userId);
     res.status(204).end();
   });
 

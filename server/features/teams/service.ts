@@ -2,6 +2,7 @@ import { fn, col } from "sequelize";
 import type { ChangeRoleInput, CreateTeamInput, MemberView, Role, TeamView } from "@shared/api/teams";
 import { Membership, Team } from "@server/db/models/team";
 import { User } from "@server/db/models/user";
+import { recordAudit } from "@server/features/audit/record";
 import { conflict, notFound } from "@server/http/errors";
 
 async function memberCounts(teamIds: string[]): Promise<Map<string, number>> {
@@ -65,22 +66,30 @@ async function assertNotLastOwner(teamId: string, userId: string, transaction: i
     throw conflict("A team needs at least one owner: make someone else an owner first.");
 }
 
-export async function changeRole(teamId: string, userId: string, input: ChangeRoleInput): Promise<MemberView> {
+/** Changes a member's role; the trail keeps who changed it from what to what (an unchanged role records nothing). */
+export async function changeRole(teamId: string, actorId: string, userId: string, input: ChangeRoleInput): Promise<MemberView> {
   return Membership.sequelize!.transaction(async (transaction) => {
     const m = await Membership.findOne({ where: { teamId, userId }, include: [{ model: User, as: "user" }], transaction });
     if (!m) throw notFound("That person is not a member of this team.");
     if (m.role === "owner" && input.role !== "owner") await assertNotLastOwner(teamId, userId, transaction);
+    const from = m.role;
+    if (from === input.role) return memberView(m);
     m.role = input.role;
     await m.save({ transaction });
+    const { name, email } = memberView(m);
+    await recordAudit({ teamId, actorId, kind: "member.role_changed", subject: userId, detail: { name, email, from, to: input.role } }, transaction);
     return memberView(m);
   });
 }
 
-export async function removeMember(teamId: string, userId: string): Promise<void> {
+/** Removes a member (or, when actor and member are the same person, lets them leave); the trail keeps who it was. */
+export async function removeMember(teamId: string, actorId: string, userId: string): Promise<void> {
   await Membership.sequelize!.transaction(async (transaction) => {
-    const m = await Membership.findOne({ where: { teamId, userId }, transaction });
+    const m = await Membership.findOne({ where: { teamId, userId }, include: [{ model: User, as: "user" }], transaction });
     if (!m) throw notFound("That person is not a member of this team.");
     if (m.role === "owner") await assertNotLastOwner(teamId, userId, transaction);
+    const { name, email, role } = memberView(m);
     await m.destroy({ transaction });
+    await recordAudit({ teamId, actorId, kind: "member.removed", subject: userId, detail: { name, email, role, left: actorId === userId } }, transaction);
   });
 }

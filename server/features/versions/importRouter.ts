@@ -19,8 +19,7 @@ export function versionImportRouter(check: SaveCheck): Router {
     async (req: Request<{ id: string }>, res) => {
       const user = requireUser(res);
       const { diagram } = await diagramWithRole(user.id, req.params.id, "editor");
-      const { document } = uploadedDiagram(req.file);
-      const fileName = req.file?.originalname ?? "";
+      const { document, fileName } = uploadedDiagram(req.file);
       res.status(201).json({ version: await importVersion(diagram, user.id, { fileName, document }, check) });
     },
   );

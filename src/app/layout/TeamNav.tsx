@@ -1,6 +1,7 @@
 import { NavLink, useParams } from "react-router-dom";
 import { useEditorDiagram } from "@/features/editor/api/getEditorDiagram";
 import { useTeam } from "@/features/teams/api/getTeam";
+import { canManageMembers } from "@shared/api/teams";
 import { href } from "@shared/routes";
 
 const link = "rounded px-2 py-1 text-ink-soft hover:bg-paper-sunk hover:text-ink aria-[current=page]:bg-signal-tint aria-[current=page]:font-medium aria-[current=page]:text-signal-strong";
@@ -27,6 +28,11 @@ function CurrentTeam({ teamId }: { teamId: string }) {
       <NavLink to={href.members(teamId)} className={link}>
         Members
       </NavLink>
+      {canManageMembers(team.data.role) && (
+        <NavLink to={href.activity(teamId)} className={link}>
+          Activity
+        </NavLink>
+      )}
     </div>
   );
 }

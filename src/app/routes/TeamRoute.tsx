@@ -1,5 +1,5 @@
 import { Link, useParams } from "react-router-dom";
-import { canEdit } from "@shared/api/teams";
+import { canEdit, canManageMembers } from "@shared/api/teams";
 import { useTeam } from "@/features/teams/api/getTeam";
 import { CreateDiagramForm } from "@/features/diagrams/components/CreateDiagramForm";
 import { DiagramTable } from "@/features/diagrams/components/DiagramTable";
@@ -25,6 +25,11 @@ export function TeamRoute() {
         <Link to={href.members(teamId)} className={buttonClass("secondary")}>
           Members ({team.data.memberCount})
         </Link>
+        {canManageMembers(team.data.role) && (
+          <Link to={href.activity(teamId)} className={buttonClass("secondary")}>
+            Activity
+          </Link>
+        )}
       </PageTitle>
       <div className="flex flex-col gap-6">
         {editable ? (
