@@ -233,10 +233,16 @@ test("a viewer sees the same diagram and its result but cannot change it", async
   // A straight line r1 → G1 → y1 with the plant 1/(s+1), wired from the keyboard-friendly panel.
   for (const key of ["1", "4", "7"]) await page.keyboard.press(key);
   await page.keyboard.press("f");
-  await block(page, "Input r1").click();
+  // The fit view animates; a click that lands mid-flight can miss its block, so select until the panel shows it.
+  const select = (name: string) =>
+    expect(async () => {
+      await block(page, name).click();
+      await expect(page.getByLabel("Connect output to")).toBeVisible({ timeout: 2_000 });
+    }).toPass({ timeout: 30_000 });
+  await select("Input r1");
   await page.getByLabel("Connect output to").selectOption({ label: "G1" });
   await page.getByRole("button", { name: "Connect", exact: true }).click();
-  await block(page, "Transfer function G1").click();
+  await select("Transfer function G1");
   await page.getByLabel("Connect output to").selectOption({ label: "y1" });
   await page.getByRole("button", { name: "Connect", exact: true }).click();
   await expect.poll(() => compact(page)).toBe("1/(s+1)");
