@@ -6,6 +6,7 @@ import { href } from "@shared/routes";
 import { buttonClass } from "@/components/Button";
 import { errorMessage, isApiError } from "@/lib/apiClient";
 import { useImportDiagram } from "@/features/diagrams/api/importDiagram";
+import { ProblemAlert } from "@/components/ProblemAlert";
 
 const hasFiles = (e: DragEvent) => e.dataTransfer.types.includes("Files");
 
@@ -72,18 +73,7 @@ export function ImportDiagramArea({ teamId, children }: { teamId: string; childr
           {importing.isPending ? "Importing…" : "or drop a .json diagram file on the list"}
         </span>
       </div>
-      {refusal && (
-        <div role="alert" className="rounded border border-fault/40 bg-fault-tint px-4 py-3 text-sm">
-          <p className="font-medium text-fault">The file was not imported: {refusal.message}</p>
-          {refusal.problems.length > 0 && (
-            <ul className="mt-2 list-disc pl-5">
-              {refusal.problems.map((p, i) => (
-                <li key={i}>{p}</li>
-              ))}
-            </ul>
-          )}
-        </div>
-      )}
+      {refusal && <ProblemAlert title={`The file was not imported: ${refusal.message}`} problems={refusal.problems} />}
       {children}
     </div>
   );

@@ -18,6 +18,7 @@ import type { EditorDoc } from "@/features/editor/commands/types";
 import { EditorSession, type ShareSlot } from "@/features/editor/components/EditorSession";
 import { warmLiveWorker } from "@/features/editor/hooks/useLiveDiagram";
 import { href } from "@shared/routes";
+import { ProblemAlert } from "@/components/ProblemAlert";
 
 type Opened = { ok: true; doc: EditorDoc; baseVersion: number } | { ok: false; problems: Problem[]; baseVersion: number };
 
@@ -59,18 +60,9 @@ function DiagramTitle({ diagram: d }: { diagram: DiagramDetail["diagram"] }) {
   );
 }
 
-function Unopenable({ opened }: { opened: Opened & { ok: false } }) {
-  return (
-    <div role="alert" className="rounded border border-fault/40 bg-fault-tint px-4 py-3 text-sm">
-      <p className="font-medium text-fault">Version {opened.baseVersion} is not a diagram this editor can open.</p>
-      <ul className="mt-2 list-disc pl-5">
-        {opened.problems.map((p, i) => (
-          <li key={i}>{p.message}</li>
-        ))}
-      </ul>
-    </div>
-  );
-}
+const Unopenable = ({ opened }: { opened: Opened & { ok: false } }) => (
+  <ProblemAlert title={`Version ${opened.baseVersion} is not a diagram this editor can open.`} problems={opened.problems.map((p) => p.message)} />
+);
 
 /** One saved version, read-only whatever the role; a banner leads back to the latest and to the comparison. */
 function VersionViewer({ id, number }: { id: string; number: number }) {

@@ -3,6 +3,7 @@ import { FileUp } from "lucide-react";
 import { Button, buttonClass } from "@/components/Button";
 import { errorMessage, isApiError } from "@/lib/apiClient";
 import { useImportVersion } from "@/features/editor/api/importVersion";
+import { ProblemAlert } from "@/components/ProblemAlert";
 
 interface Props {
   diagramId: string;
@@ -62,18 +63,7 @@ export function ImportVersion({ diagramId, teamId, dirty, onOpenLatest }: Props)
           </Button>
         )}
       </div>
-      {refusal && (
-        <div role="alert" className="rounded border border-fault/40 bg-fault-tint px-4 py-3">
-          <p className="font-medium text-fault">The file was not imported as a new version: {refusal.message}</p>
-          {refusal.problems.length > 0 && (
-            <ul className="mt-2 list-disc pl-5">
-              {refusal.problems.map((p, i) => (
-                <li key={i}>{p}</li>
-              ))}
-            </ul>
-          )}
-        </div>
-      )}
+      {refusal && <ProblemAlert title={`The file was not imported as a new version: ${refusal.message}`} problems={refusal.problems} />}
     </div>
   );
 }

@@ -5,6 +5,7 @@ import { loadDiagram } from "@shared/diagram/validate";
 import { withWireIds } from "@/features/editor/commands/document";
 import { EditorSession } from "@/features/editor/components/EditorSession";
 import { warmLiveWorker } from "@/features/editor/hooks/useLiveDiagram";
+import { ProblemAlert } from "@/components/ProblemAlert";
 
 interface Props {
   title: string;
@@ -26,16 +27,7 @@ export function SharedDiagramView({ title, version }: Props) {
     [title, version.number],
   );
   if (!loaded.doc)
-    return (
-      <div role="alert" className="rounded border border-fault/40 bg-fault-tint px-4 py-3 text-sm">
-        <p className="font-medium text-fault">Version {version.number} is not a diagram this page can show.</p>
-        <ul className="mt-2 list-disc pl-5">
-          {loaded.problems.map((p, i) => (
-            <li key={i}>{p.message}</li>
-          ))}
-        </ul>
-      </div>
-    );
+    return <ProblemAlert title={`Version ${version.number} is not a diagram this page can show.`} problems={loaded.problems.map((p) => p.message)} />;
   return (
     <ReactFlowProvider>
       <EditorSession viewOnly diagram={diagram} initialDoc={withWireIds(loaded.doc)} baseVersion={version.number} latestNow={null} onReload={noReload} />
