@@ -64,3 +64,11 @@ export function pinTarget(pin: CommentPin, doc: { blocks: readonly { id: string;
   const label = "blockId" in pin ? doc.blocks.find((b) => b.id === pin.blockId)?.label : undefined;
   return label ? `${pinLabel(pin)} (${label})` : pinLabel(pin);
 }
+
+/** What the canvas needs to draw a thread's numbered pin. Example: { id: "c1", number: 1, pin: { blockId: "G" }, resolved: false }. */
+export interface PinnedThread {
+  id: string;
+  number: number;
+  pin: CommentPin;
+  resolved: boolean;
+}

@@ -14,6 +14,7 @@ export const queryKeys = {
   versions: (id: string) => ["diagrams", id, "versions"] as const,
   newestVersion: (id: string) => ["diagrams", id, "versions", "newest"] as const,
   version: (id: string, n: number) => ["diagrams", id, "versions", n] as const,
+  comments: (id: string, n: number) => ["diagrams", id, "versions", n, "comments"] as const,
   invitation: (token: string) => ["invitations", token] as const,
   shareLinks: (diagramId: string) => ["diagrams", diagramId, "share-links"] as const,
   teamShareLinks: (teamId: string) => ["teams", teamId, "share-links"] as const,

@@ -15,7 +15,7 @@ import { VersionViewBanner } from "@/features/editor/components/VersionViewBanne
 import type { SavedVersion } from "@/features/editor/components/SessionBanners";
 import { emptyDocument, withWireIds } from "@/features/editor/commands/document";
 import type { EditorDoc } from "@/features/editor/commands/types";
-import { EditorSession, type ShareSlot } from "@/features/editor/components/EditorSession";
+import { EditorSession, type CommentsSlot, type ShareSlot } from "@/features/editor/components/EditorSession";
 import { warmLiveWorker } from "@/features/editor/hooks/useLiveDiagram";
 import { href } from "@shared/routes";
 import { ProblemAlert } from "@/components/ProblemAlert";
@@ -41,10 +41,21 @@ function versionParam(value: string | null): number | null {
 const newerOf = (a: SavedVersion | null, b: SavedVersion | null): SavedVersion | null => (!a ? b : !b ? a : b.number > a.number ? b : a);
 
 /** /diagrams/:id — loads the diagram and opens an editing session on its latest version (or `?version=N` read-only). */
-export function EditorPage({ id, share }: { id: string; share?: ShareSlot }) {
+export function EditorPage({ id, share, comments }: { id: string; share?: ShareSlot; comments?: CommentsSlot }) {
   const [params] = useSearchParams();
   const asked = versionParam(params.get("version"));
-  return asked === null ? <LatestEditor id={id} share={share} /> : <VersionViewer id={id} number={asked} />;
+  // `?comment=<id>` (a mail's link) opens that comment; read once, as the session starts.
+  const linkedComment = params.get("comment");
+  return asked === null ? (
+    <LatestEditor id={id} share={share} comments={comments} linkedComment={linkedComment} />
+  ) : (
+    <VersionViewer id={id} number={asked} comments={comments} linkedComment={linkedComment} />
+  );
+}
+
+interface Review {
+  comments?: CommentsSlot;
+  linkedComment: string | null;
 }
 
 function DiagramTitle({ diagram: d }: { diagram: DiagramDetail["diagram"] }) {
@@ -65,7 +76,7 @@ const Unopenable = ({ opened }: { opened: Opened & { ok: false } }) => (
 );
 
 /** One saved version, read-only whatever the role; a banner leads back to the latest and to the comparison. */
-function VersionViewer({ id, number }: { id: string; number: number }) {
+function VersionViewer({ id, number, comments, linkedComment }: { id: string; number: number } & Review) {
   const detail = useEditorDiagram(id);
   const version = useEditorVersion(id, number);
   useEffect(warmLiveWorker, []);
@@ -88,6 +99,8 @@ function VersionViewer({ id, number }: { id: string; number: number }) {
             onReload={async () => {}}
             viewOnly
             savedProblems={ok === false ? { number, count: problemCount } : null}
+            comments={comments}
+            linkedComment={linkedComment}
           />
         </ReactFlowProvider>
       ) : (
@@ -97,7 +110,7 @@ function VersionViewer({ id, number }: { id: string; number: number }) {
   );
 }
 
-function LatestEditor({ id, share }: { id: string; share?: ShareSlot }) {
+function LatestEditor({ id, share, comments, linkedComment }: { id: string; share?: ShareSlot } & Review) {
   const detail = useEditorDiagram(id);
   // A teammate's save shows within a few seconds: the newest version is polled apart from the (large) detail.
   const newest = useNewestVersion(id);
@@ -140,6 +153,8 @@ function LatestEditor({ id, share }: { id: string; share?: ShareSlot }) {
           latestNow={newerOf(detail.data.latestVersion, newest.data ?? null)}
           onReload={reload}
           share={share}
+          comments={comments}
+          linkedComment={linkedComment}
           savedProblems={checked && checked.ok === false ? { number: checked.number, count: checked.problemCount } : null}
         />
       </ReactFlowProvider>

@@ -1,4 +1,5 @@
 import { lazy, Suspense, useCallback, useMemo, useRef, useState, type ReactNode } from "react";
+import type { CommentPin, PinnedThread } from "@shared/api/comments";
 import type { DiagramDetail } from "@shared/api/diagrams";
 import type { Problem } from "@shared/diagram/problems";
 import { Panel } from "@/components/Panel";
@@ -7,6 +8,7 @@ import { done } from "@/features/editor/commands/types";
 import { moveBlocks } from "@/features/editor/commands/blocks";
 import { EditorContext, type Act } from "@/features/editor/components/EditorContext";
 import { CanvasNotice, type Notice } from "@/features/editor/components/CanvasNotice";
+import { CommentPins } from "@/features/editor/components/CommentPins";
 import { DiagramCanvas } from "@/features/editor/components/DiagramCanvas";
 import { BlockRail } from "@/features/editor/components/BlockRail";
 import { EditorToolbar } from "@/features/editor/components/EditorToolbar";
@@ -16,6 +18,7 @@ import { SessionBanners, type SavedVersion } from "@/features/editor/components/
 import { SessionDialogs } from "@/features/editor/components/SessionDialogs";
 import { Dialog } from "@/features/editor/components/dialogs/Dialog";
 import { CompareWithLocal } from "@/features/editor/components/compare/CompareWithLocal";
+import { SidePanel } from "@/features/editor/components/SidePanel";
 import { StepBadge } from "@/features/editor/components/StepBadge";
 import { ParameterTable } from "@/features/editor/components/panels/ParameterTable";
 import { ProblemList } from "@/features/editor/components/panels/ProblemList";
@@ -30,6 +33,7 @@ import { useEditorHistory } from "@/features/editor/hooks/useEditorHistory";
 import { useFitBox } from "@/features/editor/hooks/useFitBox";
 import { useFlowState } from "@/features/editor/hooks/useFlowState";
 import { useLiveDiagram, type AnalysisSettings } from "@/features/editor/hooks/useLiveDiagram";
+import { selectedPin, useReviewComments } from "@/features/editor/hooks/useReviewComments";
 import { useSaveFlow } from "@/features/editor/hooks/useSaveFlow";
 import { useUnsavedGuard } from "@/features/editor/hooks/useUnsavedGuard";
 import { problemMarks, stepFootprint } from "@/features/editor/lib/marks";
@@ -40,6 +44,21 @@ const AnalysisPanel = lazy(() => import("@/features/editor/components/analysis/A
 
 /** The share dialog's body for a diagram and the version open; the app passes it in from the share-links feature. */
 export type ShareSlot = (target: { diagramId: string; openVersion: number }) => ReactNode;
+
+/** What the review comments of the open saved version get from the editor, and tell it back (pins, open count). */
+export interface CommentsTarget {
+  diagramId: string;
+  /** The saved version open; 0 before the first save. */
+  version: number;
+  /** That version's document as saved (local edits are not what reviewers comment on). */
+  doc: EditorDoc;
+  selected: CommentPin | null;
+  focus: { commentId: string; at: number } | null;
+  onThreads: (summary: { pins: PinnedThread[]; open: number }) => void;
+  onShowPin: (pin: CommentPin) => void;
+}
+/** The comments panel; the app passes it in from the comments feature. */
+export type CommentsSlot = (target: CommentsTarget) => ReactNode;
 
 interface Props {
   diagram: DiagramDetail["diagram"];
@@ -54,10 +73,15 @@ interface Props {
   share?: ShareSlot;
   /** A saved version whose server check found errors; the status says so while that version is open unchanged. */
   savedProblems?: { number: number; count: number } | null;
+  /** Offers the review comments of the open version in the side panel, with their pins on the canvas. */
+  comments?: CommentsSlot;
+  /** A comment to open at once (a mail's link): the side panel starts on the comments with its thread in view. */
+  linkedComment?: string | null;
 }
 
 /** One editing session on one version: document + history, canvas, panels, live result, saving. */
-export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onReload, viewOnly = false, share, savedProblems = null }: Props) {
+export function EditorSession(props: Props) {
+  const { diagram, initialDoc, baseVersion, latestNow, onReload, viewOnly = false, share, savedProblems = null, comments, linkedComment = null } = props;
   const readOnly = viewOnly || diagram.role === "viewer";
   const history = useEditorHistory(initialDoc);
   const { doc, run } = history;
@@ -153,14 +177,20 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
     steps: { count: view.steps.length, at: stepAt, go: setStepAt },
   });
 
-  const pickProblem = (p: Problem) => {
-    const wire = p.wireId ? doc.wires.find((w) => w.id === p.wireId) : undefined;
-    const sel: Selection = p.blockId ? { blocks: [p.blockId], wires: [] } : wire ? { blocks: [], wires: [wire.id] } : { blocks: [], wires: [] };
+  /** Selects a block or a wire and brings it into view. */
+  const showOnCanvas = (blockId: string | undefined, wireId: string | undefined) => {
+    const wire = wireId ? doc.wires.find((w) => w.id === wireId) : undefined;
+    const block = blockId && doc.blocks.some((b) => b.id === blockId) ? blockId : undefined;
+    const sel: Selection = block ? { blocks: [block], wires: [] } : wire ? { blocks: [], wires: [wire.id] } : { blocks: [], wires: [] };
     setSelection(sel);
-    const around = p.blockId ? [p.blockId] : wire ? [wire.from, wire.to] : [];
+    const around = block ? [block] : wire ? [wire.from, wire.to] : [];
     if (around.length) fitBox(boundsOf(canvasState.nodes.filter((n) => around.includes(n.id)).map(nodeBox)), { duration: 250, maxZoom: 1.3, padding: 0.6 });
+  };
+  const pickProblem = (p: Problem) => {
+    showOnCanvas(p.blockId, p.wireId);
     if (p.field === "expr") window.setTimeout(() => firstField.current?.focus(), 50);
   };
+  const review = useReviewComments(linkedComment);
 
   const restoreDraft = () => {
     const offered = draft.offer;
@@ -255,6 +285,7 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
             onDropBlock={commands.dropBlock}
           >
             {step && footprint && <StepBadge step={step} blocks={footprint.blocks} nodes={canvasState.nodes} />}
+            {comments && <CommentPins pins={review.threads.pins} nodes={canvasState.nodes} doc={doc} onOpen={review.openThread} />}
           </DiagramCanvas>
           {doc.blocks.length === 0 && (
             <p className="pointer-events-none absolute inset-x-0 top-1/3 mx-auto max-w-sm text-center text-sm text-ink-soft">
@@ -265,14 +296,32 @@ export function EditorSession({ diagram, initialDoc, baseVersion, latestNow, onR
           )}
           <CanvasNotice notice={notice} onDone={clearNotice} />
         </div>
-        <aside aria-label="Properties" className="overflow-y-auto border-l border-rule bg-paper-raised p-4">
-          <PropertiesPanel
-            doc={doc}
-            selection={selection}
-            firstFieldRef={firstField}
-            analysisBreak={{ used: usedBreak, chosen: analysisSettings.break, onBreak: (id) => changeAnalysis({ break: id }) }}
-          />
-        </aside>
+        <SidePanel
+          tab={review.tab}
+          onTab={review.setTab}
+          properties={
+            <PropertiesPanel
+              doc={doc}
+              selection={selection}
+              firstFieldRef={firstField}
+              analysisBreak={{ used: usedBreak, chosen: analysisSettings.break, onBreak: (id) => changeAnalysis({ break: id }) }}
+            />
+          }
+          comments={
+            comments && {
+              label: `Comments${review.threads.open ? ` (${review.threads.open} open)` : ""}`,
+              body: comments({
+                diagramId: diagram.id,
+                version: base,
+                doc: savedDoc,
+                selected: selectedPin(selection),
+                focus: review.focus,
+                onThreads: review.onThreads,
+                onShowPin: (pin) => showOnCanvas("blockId" in pin ? pin.blockId : undefined, "wireId" in pin ? pin.wireId : undefined),
+              }),
+            }
+          }
+        />
       </div>
       <div className="mt-4 grid gap-4 lg:grid-cols-3">
         <Panel title="Closed-loop result">
