@@ -9,7 +9,8 @@ import { LIMITS, type DiagramDocument } from "@shared/diagram/schema";
  * Parses every block expression against the declared parameters and checks the cheap
  * degree bound of the whole diagram (sum over blocks of max(deg num, deg den) as written, fixed transfers included),
  * so a diagram whose result could exceed the degree limit is refused before any algebra runs.
- * Example: a gain "2*s" → problem "s-in-gain" on that block, field "expr", position 2.
+ * Every error of an expression is its own problem. Example: a gain "2*s" → problem "s-in-gain" on that block,
+ * field "expr", position 2; "K*(s+" with K undeclared → "unknown-name" at 0 and "syntax" at 5.
  */
 export function expressionProblems(doc: DiagramDocument): { problems: Problem[]; expressions: Map<string, ExprNode> } {
   const problems: Problem[] = [];
@@ -22,8 +23,9 @@ export function expressionProblems(doc: DiagramDocument): { problems: Problem[];
     if (!hasExpression(block)) continue;
     const parsed = parseExpression(block.expr, { allowS: BLOCK_KINDS[block.type].expression.mayContainS, parameters });
     if (!parsed.ok) {
-      const { code, message, position } = parsed;
-      problems.push({ severity: "error", code, message: `Block "${block.id}", expr: ${message}`, blockId: block.id, field: "expr", position });
+      for (const { code, message, position } of parsed.errors) {
+        problems.push({ severity: "error", code, message: `Block "${block.id}", expr: ${message}`, blockId: block.id, field: "expr", position });
+      }
       continue;
     }
     if (!expressions.has(block.id)) expressions.set(block.id, parsed.ast);

@@ -39,7 +39,16 @@ export interface ParseOptions {
   limits?: { exprLength: number; exponent: number };
 }
 
-export type ParseFailure = { ok: false; code: ParseErrorCode; message: string; position: number };
+export interface ParseError {
+  code: ParseErrorCode;
+  message: string;
+  position: number;
+}
+/**
+ * The first error found (as a parser reads left to right) and, in `errors`, every error found, in order of position:
+ * the syntax error with every unknown name, `s` in a gain and out-of-range number elsewhere in the text.
+ */
+export type ParseFailure = { ok: false; errors: ParseError[] } & ParseError;
 export type ParseResult = { ok: true; ast: ExprNode } | ParseFailure;
 
 class Refusal extends Error {
@@ -65,21 +74,71 @@ export function parseExpression(text: string, options: ParseOptions): ParseResul
     return fail("empty", "The expression is empty: enter a number, a parameter or an expression in s", 0);
   }
   const lexed = lexExpression(text);
-  if ("error" in lexed) return { ok: false, ...lexed.error };
+  if ("error" in lexed) return fail(lexed.error.code, lexed.error.message, lexed.error.position);
+  const parameters = new Set(options.parameters);
+  const alsoWrong = () => tokenRefusals(lexed.tokens, parameters, options.allowS);
   let tree: MathNode;
   const masked = maskForMathjs(text, lexed.tokens);
   try {
     tree = parse(masked.text);
   } catch (err) {
-    return mathjsSyntaxFailure(err, text, lexed.tokens, masked.original);
+    return withOthers(mathjsSyntaxFailure(err, text, lexed.tokens, masked.original), alsoWrong());
   }
   try {
-    const walker = new TreeWalker(lexed.tokens, new Set(options.parameters), options.allowS, limits.exponent);
+    const walker = new TreeWalker(lexed.tokens, parameters, options.allowS, limits.exponent);
     return { ok: true, ast: walker.walkAll(tree) };
   } catch (err) {
-    if (err instanceof Refusal) return fail(err.code, err.message, err.position);
+    if (err instanceof Refusal) return withOthers(fail(err.code, err.message, err.position), alsoWrong());
     throw err;
   }
+}
+
+/** The first failure with every other error the tokens show on their own, each once, in order of position. */
+function withOthers(first: ParseFailure, others: Refusal[]): ParseFailure {
+  const all = [first.errors[0], ...others.map(({ code, message, position }) => ({ code, message, position }))];
+  const errors = all.filter((e, i) => all.findIndex((o) => o.position === e.position) === i).sort((a, b) => a.position - b.position);
+  return { ...first, errors };
+}
+
+/** What is wrong with single tokens whatever the syntax around them: names (unknown, `s` in a gain, calls) and numbers. */
+function tokenRefusals(tokens: Token[], parameters: Set<string>, allowS: boolean): Refusal[] {
+  return tokens.flatMap((token, i) => {
+    const refusal = token.kind === "name" ? nameRefusal(tokens, i, parameters, allowS) : token.kind === "num" ? numberRefusal(token) : null;
+    return refusal ? [refusal] : [];
+  });
+}
+
+/** The error of the name token `tokens[i]`, or null when it reads as `s` or a declared parameter. */
+function nameRefusal(tokens: Token[], i: number, parameters: Set<string>, allowS: boolean): Refusal | null {
+  const token = tokens[i];
+  if (token.text === "s") {
+    return allowS
+      ? null
+      : new Refusal("s-in-gain", `\`s\` at position ${token.position} is not allowed in a gain; use a transfer block for expressions in s`, token.position);
+  }
+  if (parameters.has(token.text)) return null;
+  if (tokens[i + 1]?.implicit && tokens[i + 2]?.kind === "lparen") {
+    return new Refusal(
+      "function-call",
+      `\`${token.text}(\` at position ${token.position} reads as a function call, and expressions have no functions; ` +
+        `to multiply, declare ${token.text} as a parameter`,
+      token.position,
+    );
+  }
+  const split = splitName(token.text, allowS ? [...parameters, "s"] : [...parameters]);
+  const why = split
+    ? `it could mean ${split.join("·")}: write ${split.join("*")} (or ${split.join(" ")}), or declare it as a parameter`
+    : "declare it as a parameter or fix the spelling (constants such as pi or e are not built in)";
+  return new Refusal("unknown-name", `Unknown name \`${token.text}\` at position ${token.position}: ${why}`, token.position);
+}
+
+function numberRefusal(token: Token): Refusal | null {
+  if (decimalToRational(token.text)) return null;
+  return new Refusal(
+    "number-range",
+    `The number \`${token.text}\` at position ${token.position} has a power of ten beyond ±${MAX_DECIMAL_EXPONENT}`,
+    token.position,
+  );
 }
 
 /**
@@ -99,7 +158,7 @@ function maskForMathjs(text: string, tokens: Token[]): { text: string; original:
 }
 
 function fail(code: ParseErrorCode, message: string, position: number): ParseFailure {
-  return { ok: false, code, message, position };
+  return { ok: false, code, message, position, errors: [{ code, message, position }] };
 }
 
 const FRIENDLY_SYNTAX: [RegExp, string][] = [
@@ -219,41 +278,16 @@ class TreeWalker {
 
   private number(token: Token): ExprNode {
     const value = decimalToRational(token.text);
-    if (!value) {
-      throw new Refusal(
-        "number-range",
-        `The number \`${token.text}\` at position ${token.position} has a power of ten beyond ±${MAX_DECIMAL_EXPONENT}`,
-        token.position,
-      );
-    }
+    if (!value) throw numberRefusal(token)!;
     return { kind: "num", num: value.num, den: value.den };
   }
 
   private name(token: Token): ExprNode {
     if (token.kind !== "name") return this.refuseAt(token);
-    if (token.text === "s") {
-      if (this.allowS) return { kind: "s" };
-      throw new Refusal(
-        "s-in-gain",
-        `\`s\` at position ${token.position} is not allowed in a gain; use a transfer block for expressions in s`,
-        token.position,
-      );
-    }
-    if (this.parameters.has(token.text)) return { kind: "param", name: token.text };
-    const next = this.tokens[this.at + 1];
-    if (this.peek()?.implicit && next?.kind === "lparen") {
-      throw new Refusal(
-        "function-call",
-        `\`${token.text}(\` at position ${token.position} reads as a function call, and expressions have no functions; ` +
-          `to multiply, declare ${token.text} as a parameter`,
-        token.position,
-      );
-    }
-    const split = splitName(token.text, this.allowS ? [...this.parameters, "s"] : [...this.parameters]);
-    const why = split
-      ? `it could mean ${split.join("·")}: write ${split.join("*")} (or ${split.join(" ")}), or declare it as a parameter`
-      : "declare it as a parameter or fix the spelling (constants such as pi or e are not built in)";
-    throw new Refusal("unknown-name", `Unknown name \`${token.text}\` at position ${token.position}: ${why}`, token.position);
+    // `take` has moved past the name: it is the token before `at`.
+    const refusal = nameRefusal(this.tokens, this.at - 1, this.parameters, this.allowS);
+    if (refusal) throw refusal;
+    return token.text === "s" ? { kind: "s" } : { kind: "param", name: token.text };
   }
 
   private peek(): Token | undefined {

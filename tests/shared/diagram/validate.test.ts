@@ -85,6 +85,15 @@ describe("validateDiagram reports each problem with its code and what it is abou
     expect(codes).toEqual(["ambiguous-product", "port-on-non-sum", "s-in-gain", "wire-to-missing-block"]);
   });
 
+  it("lists each error of one expression as its own problem on that block, each with its position", () => {
+    const { problems } = check(edited((d) => (block(d, "c").expr = "Kq*(s+")));
+    const onC = problems.filter((p) => p.blockId === "c").map((p) => [p.code, p.field, p.position]);
+    expect(onC).toEqual([
+      ["unknown-name", "expr", 0],
+      ["syntax", "expr", 6],
+    ]);
+  });
+
   it("leaves a block whose expression fails out of `expressions` and keeps the others", () => {
     const { expressions } = check(edited((d) => (block(d, "c").expr = "K*(s+2")));
     expect([...expressions.keys()].sort()).toEqual(["h", "p"]);

@@ -185,6 +185,33 @@ describe("products written without `*`", () => {
   });
 });
 
+describe("every error of an expression at once", () => {
+  // source: common practice — a compiler lists every independent error of a line, each at its own column.
+  it.each([
+    ["Kx*(s+", [["unknown-name", 0], ["syntax", 6]]],
+    ["2*s + q + 1/(s+", [["unknown-name", 6], ["syntax", 15]]],
+    ["1e999 + zeta", [["number-range", 0], ["unknown-name", 8]]],
+    ["s^2 + foo(s) + bar", [["function-call", 6], ["unknown-name", 15]]],
+  ] as [string, [ParseErrorCode, number][]][])("%s → %j", (text, expected) => {
+    const r = transfer(text);
+    expect(r.ok).toBe(false);
+    if (r.ok) return;
+    expect(r.errors.map((e) => [e.code, e.position])).toEqual(expected);
+    // The first error stays the one a left-to-right reader meets first, with its own message.
+    expect(r.errors).toContainEqual({ code: r.code, message: r.message, position: r.position });
+  });
+
+  it("lists s in a gain beside an unknown name", () => {
+    const r = parseExpression("2*s + g", { allowS: false, parameters: [] });
+    expect(r.ok ? [] : r.errors.map((e) => e.code)).toEqual(["s-in-gain", "unknown-name"]);
+  });
+
+  it("reports one error once even when two checks find it", () => {
+    const r = transfer("s^q");
+    expect(r.ok ? [] : r.errors.map((e) => [e.code, e.position])).toEqual([["bad-exponent", 2]]);
+  });
+});
+
 describe("names are only parameters", () => {
   // source: the format spec — names are parameters only; mathjs keywords, constants and units get no meaning.
   it("reads declared names that mathjs treats as keywords or constants as plain parameters", () => {

@@ -49,6 +49,12 @@ describe("parameter commands", () => {
   it("lists undeclared names in first-use order, agreeing with the validator's unknown-name problems", () => {
     const bare = { ...doc, parameters: {} };
     expect(undeclaredNames(bare)).toEqual(["Kp", "K"]);
-    expect(unknownNames(bare).map((p) => p.blockId)).toEqual(["c"]);
+    // Every use is its own problem, at its own position (Kp*(s + K)/(K*s): 0, 8, 12), all on block c.
+    expect(unknownNames(bare).map((p) => [p.blockId, p.position])).toEqual([
+      ["c", 0],
+      ["c", 8],
+      ["c", 12],
+    ]);
+    expect([...new Set(unknownNames(bare).map((p) => /`(\w+)`/.exec(p.message)?.[1]))]).toEqual(undeclaredNames(bare));
   });
 });

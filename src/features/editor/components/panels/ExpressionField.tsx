@@ -14,14 +14,19 @@ interface Props {
   inputRef?: Ref<HTMLInputElement>;
 }
 
-/** Shows the expression with the offending character marked, so the message and the place agree. */
-function Pointer({ text, position }: { text: string; position: number }) {
-  const at = Math.min(position, text.length);
+/** Shows the expression with every offending character marked, so the messages and the places agree. */
+function Pointer({ text, positions }: { text: string; positions: number[] }) {
+  const marks = [...new Set(positions.map((p) => Math.min(p, text.length)))].sort((x, y) => x - y);
+  const pieces = marks.flatMap((at, i) => [
+    text.slice(i === 0 ? 0 : marks[i - 1] + 1, at),
+    <mark key={at} className="rounded-sm bg-fault px-px text-white">
+      {text.slice(at, at + 1) || " "}
+    </mark>,
+  ]);
   return (
     <code aria-hidden className="block overflow-x-auto rounded bg-paper-sunk px-2 py-1 text-xs whitespace-pre">
-      {text.slice(0, at)}
-      <mark className="rounded-sm bg-fault px-px text-white">{text.slice(at, at + 1) || " "}</mark>
-      {text.slice(at + 1)}
+      {pieces}
+      {text.slice((marks.at(-1) ?? -1) + 1)}
     </code>
   );
 }
@@ -72,12 +77,18 @@ export function ExpressionField({ blockId, expr, allowS, parameters, inputRef }:
           </p>
         ) : (
           <div className="flex flex-col gap-1">
-            <p className="text-xs font-medium text-fault">
-              {parsed.message}
-              {/position \d+/.test(parsed.message) ? "" : ` (at position ${parsed.position})`}
-            </p>
-            <Pointer text={expr} position={parsed.position} />
-            {parsed.code === "unknown-name" && !readOnly && <DeclareButton expr={expr} position={parsed.position} />}
+            {/* Every error at once: fixing one does not uncover the next. */}
+            <ul className="flex flex-col gap-0.5 text-xs font-medium text-fault">
+              {parsed.errors.map((e) => (
+                <li key={e.position}>
+                  {e.message}
+                  {/position \d+/.test(e.message) ? "" : ` (at position ${e.position})`}
+                </li>
+              ))}
+            </ul>
+            <Pointer text={expr} positions={parsed.errors.map((e) => e.position)} />
+            {!readOnly &&
+              parsed.errors.filter((e) => e.code === "unknown-name").map((e) => <DeclareButton key={e.position} expr={expr} position={e.position} />)}
           </div>
         )}
       </div>
