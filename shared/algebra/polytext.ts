@@ -2,6 +2,7 @@
 import type { Poly } from "@shared/algebra/poly";
 import { qMul, type Q } from "@shared/algebra/rational";
 import { zCoeffsS, type ZPoly } from "@shared/algebra/zpoly";
+import { nameLatex, readsAsWord } from "@shared/expr/names";
 
 type Mono = [name: string, exp: number][];
 /** A monomial with its coefficient's digits converted once for both styles (BigInt printing is costly). */
@@ -71,7 +72,10 @@ interface Style {
   num(n: string, d: string): string; // positive rational from its digits, d "" for an integer
   power(base: string, e: number): string;
   name(n: string): string;
-  times: string;
+  /** The product sign between two factors, given by their names ("s" for the power of s). */
+  times(left: string, right: string): string;
+  /** The product sign after a number or a parenthesised group. */
+  scale: string;
   group(inner: string): string;
 }
 
@@ -79,43 +83,33 @@ const textStyle: Style = {
   num: (n, d) => (d ? `${n}/${d}` : n),
   power: (b, e) => (e === 1 ? b : `${b}^${e}`),
   name: (n) => n,
-  times: "*",
+  times: () => "*",
+  scale: "*",
   group: (inner) => `(${inner})`,
 };
 
 const latexStyle: Style = {
   num: (n, d) => (d ? `\\frac{${n}}{${d}}` : n),
   power: (b, e) => (e === 1 ? b : `${b}^{${e}}`),
-  name: latexName,
-  times: " ",
+  name: nameLatex,
+  // Juxtaposed names run together when typeset (2 Kp s reads "2Kps"): a centred dot next to a word-like name, a
+  // thin space between single letters.
+  times: (l, r) => (readsAsWord(l) || readsAsWord(r) ? " \\cdot " : "\\,"),
+  scale: "\\,",
   group: (inner) => `\\left(${inner}\\right)`,
 };
-
-const GREEK = new Set(
-  ("alpha beta gamma delta epsilon zeta eta theta iota kappa lambda mu nu xi pi rho sigma tau upsilon phi chi psi " +
-    "omega Gamma Delta Theta Lambda Xi Pi Sigma Upsilon Phi Psi Omega").split(" "),
-);
-
-/** LaTeX for a parameter name: tau → \tau, k_p → k_{p}, Kp → \mathit{Kp}. */
-function latexName(n: string): string {
-  const cut = n.indexOf("_");
-  const base = cut < 0 ? n : n.slice(0, cut);
-  const sub = cut < 0 ? "" : `_{${n.slice(cut + 1).replace(/_/g, "\\_")}}`;
-  const b = GREEK.has(base) ? `\\${base}` : base.length === 1 ? base : `\\mathit{${base}}`;
-  return b + sub;
-}
 
 /** The parameter factors of a term, then the power of s (may be ""), joined by the style's product sign. */
 function factorText(mono: Mono, sPart: string, st: Style): string {
   let f = "";
-  for (const [n, e] of mono) f += (f ? st.times : "") + st.power(st.name(n), e);
-  return sPart ? (f ? f + st.times + sPart : sPart) : f;
+  for (let i = 0; i < mono.length; i++) f += (i ? st.times(mono[i - 1][0], mono[i][0]) : "") + st.power(st.name(mono[i][0]), mono[i][1]);
+  return sPart ? (f ? f + st.times(mono[mono.length - 1][0], "s") + sPart : sPart) : f;
 }
 
 /** One monomial without its sign: |c| (omitted when 1 and there are factors) times its factors. */
 function monoBody(t: Term, factors: string, st: Style): string {
   if (!factors) return st.num(t.num, t.den);
-  return t.unit ? factors : `${st.num(t.num, t.den)}${st.times}${factors}`;
+  return t.unit ? factors : `${st.num(t.num, t.den)}${st.scale}${factors}`;
 }
 
 /** The sign joining a part: a bare leading "-" first, " - " / " + " after. */
@@ -133,7 +127,7 @@ function render(rows: readonly Row[], st: Style): string {
     const flip = terms[0].neg; // pull a leading minus out of the group: -(K - 3/2)*s
     let inner = "";
     for (const t of terms) inner += joiner(t.neg !== flip, !inner) + monoBody(t, factorText(t.mono, "", st), st);
-    out += joiner(flip, !out) + st.group(inner) + st.times + sPart;
+    out += joiner(flip, !out) + st.group(inner) + st.scale + sPart;
   }
   return out;
 }
@@ -146,7 +140,10 @@ function render(rows: readonly Row[], st: Style): string {
  */
 export const polyToText = (p: Poly): string => render(rowsOf(p), textStyle);
 
-/** LaTeX with the same layout: \frac{p}{q} numbers, s^{2}, \tau, k_{p}. Example: "\frac{3}{2} K s^{2} + 1". */
+/**
+ * LaTeX with the same layout: \frac{p}{q} numbers, s^{2}, \tau, k_{p}; a thin space after a number and between
+ * single letters, a centred dot beside a word-like name. Example: "\frac{3}{2}\,K\,s^{2} + 2\,\mathit{Kp} \cdot s + 1".
+ */
 export const polyToLatex = (p: Poly): string => render(rowsOf(p), latexStyle);
 
 /** Both printings from one term list (half the work of calling the two). Example: polyToTextAndLatex(s^2).latex === "s^{2}". */

@@ -1,23 +1,7 @@
 import { lexExpression } from "@shared/expr/lexer";
 import { parseExpression } from "@shared/expr/parse";
 import type { ExprNode } from "@shared/expr/ast";
-
-/** Greek letter names engineers type, with the letter each stands for. */
-const GREEK: Record<string, string> = {
-  alpha: "α", beta: "β", gamma: "γ", delta: "δ", epsilon: "ε", zeta: "ζ", eta: "η", theta: "θ", iota: "ι", kappa: "κ",
-  lambda: "λ", mu: "μ", nu: "ν", xi: "ξ", pi: "π", rho: "ρ", sigma: "σ", tau: "τ", upsilon: "υ", phi: "φ", chi: "χ",
-  psi: "ψ", omega: "ω", Gamma: "Γ", Delta: "Δ", Theta: "Θ", Lambda: "Λ", Xi: "Ξ", Pi: "Π", Sigma: "Σ", Phi: "Φ",
-  Psi: "Ψ", Omega: "Ω",
-};
-const isGreek = (name: string) => Object.hasOwn(GREEK, name);
-
-/** A parameter name as engineers write it: `tau` → τ, `K_p` → K with subscript p, `Kp` upright-italic as one symbol. */
-export function nameLatex(name: string): string {
-  const cut = name.indexOf("_");
-  const [base, sub] = cut > 0 ? [name.slice(0, cut), name.slice(cut + 1)] : [name, ""];
-  const head = isGreek(base) ? `\\${base}` : base.length > 1 ? `\\mathit{${base}}` : base;
-  return sub ? `${head}_{${sub.replaceAll("_", "\\_")}}` : head;
-}
+import { GREEK, isGreek, nameLatex, readsAsWord } from "@shared/expr/names";
 
 const isSum = (n: ExprNode) => n.kind === "add" || n.kind === "sub";
 const paren = (latex: string) => `\\left(${latex}\\right)`;
@@ -61,10 +45,27 @@ function factorLatex(node: ExprNode): string {
   return isSum(node) || node.kind === "neg" ? paren(latex) : latex;
 }
 
-/** Juxtaposition reads as a product except before a digit or a fraction, where a dot keeps 2·3 from reading 23. */
+/** The name a product's factor starts (`first`) or ends with, if it is a name or a power of one. */
+function edgeName(node: ExprNode, first: boolean): string | null {
+  if (node.kind === "param") return node.name;
+  if (node.kind === "pow") return edgeName(node.base, first);
+  if (node.kind === "mul") return edgeName(first ? node.left : node.right, first);
+  return null;
+}
+
+/**
+ * A thin space between factors reads as a product, except before a digit or a fraction (2·3 must not read 23)
+ * and beside a word-like name (Kp·s must not read Kps), where a centred dot stands.
+ */
 function productLatex(left: ExprNode, right: ExprNode): string {
   const [l, r] = [factorLatex(left), factorLatex(right)];
-  const needsDot = /^[\d-]/.test(r) || r.startsWith("\\frac") || (left.kind === "num" && r.startsWith("\\left"));
+  const [ln, rn] = [edgeName(left, false), edgeName(right, true)];
+  const needsDot =
+    /^[\d-]/.test(r) ||
+    r.startsWith("\\frac") ||
+    (left.kind === "num" && r.startsWith("\\left")) ||
+    (ln !== null && readsAsWord(ln)) ||
+    (rn !== null && readsAsWord(rn));
   return needsDot ? `${l} \\cdot ${r}` : `${l}\\,${r}`;
 }
 

@@ -50,7 +50,7 @@ describe("ratFromExpr: canonical lowest terms (common practice: monic numeric de
   it("prints whole transfer functions as text and LaTeX (common practice)", () => {
     const r = ratFromExpr(div(mul(K, add(s, num(2))), add(mul(tau, pow(s, 2)), mul(num(3, 2), s))));
     expect(ratToText(r)).toBe("(K*s + 2*K)/(tau*s^2 + 3/2*s)");
-    expect(ratToLatex(r)).toBe("\\frac{K s + 2 K}{\\tau s^{2} + \\frac{3}{2} s}");
+    expect(ratToLatex(r)).toBe("\\frac{K\\,s + 2\\,K}{\\tau\\,s^{2} + \\frac{3}{2}\\,s}");
     expect(ratToText(ratFromExpr(div(K, s)))).toBe("K/s");
     expect(ratToText(ratFromExpr(num(-3, 4)))).toBe("-3/4");
     expect(ratToLatex(ratFromExpr(num(-3, 4)))).toBe("-\\frac{3}{4}");

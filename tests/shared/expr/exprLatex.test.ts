@@ -2,9 +2,10 @@ import katex from "katex";
 import { describe, expect, it } from "vitest";
 import { parseExpression } from "@shared/expr/parse";
 import { runPythonSync } from "../../support/python";
-import { boundedMemo, expressionFraction, expressionLatex, exprLatex, exprText, nameLatex } from "@shared/expr/exprLatex";
+import { boundedMemo, expressionFraction, expressionLatex, exprLatex, exprText } from "@shared/expr/exprLatex";
+import { nameLatex } from "@shared/expr/names";
 
-const latexOf = (text: string, parameters: string[] = ["K", "tau", "K_p", "Kp", "a"]) => {
+const latexOf = (text: string, parameters: string[] = ["K", "tau", "K_p", "T_i", "Kp", "Kpos", "Kv", "a"]) => {
   const parsed = parseExpression(text, { allowS: true, parameters });
   if (!parsed.ok) throw new Error(parsed.message);
   return exprLatex(parsed.ast);
@@ -22,7 +23,9 @@ describe("block expressions as LaTeX", () => {
     ["-(s-a)", "-\\left(s - a\\right)"],
     ["s-(s-a)", "s - \\left(s - a\\right)"],
     ["K_p*s", "K_{p}\\,s"],
-    ["Kp*s", "\\mathit{Kp}\\,s"],
+    ["Kp*s", "\\mathit{Kp} \\cdot s"],
+    ["K_p*T_i*s", "K_{p}\\,T_{i}\\,s"],
+    ["2*Kpos*Kv", "2 \\cdot \\mathit{Kpos} \\cdot \\mathit{Kv}"],
   ])("%s → %s", (text, latex) => {
     expect(latexOf(text)).toBe(latex);
   });
@@ -34,7 +37,7 @@ describe("block expressions as LaTeX", () => {
   });
 
   it("draws undeclared names instead of hiding them, and gives null for text that does not parse", () => {
-    expect(expressionLatex("Kd*s/(T*s+1)")).toBe("\\frac{\\mathit{Kd}\\,s}{T\\,s + 1}");
+    expect(expressionLatex("Kd*s/(T*s+1)")).toBe("\\frac{\\mathit{Kd} \\cdot s}{T\\,s + 1}");
     expect(expressionLatex("K/(s+")).toBeNull();
     expect(nameLatex("omega_n")).toBe("\\omega_{n}");
   });

@@ -79,6 +79,10 @@ interface Props {
   linkedComment?: string | null;
 }
 
+/** Whether any slider stands away from its parameter's nominal value. */
+const slidersMoved = (r: { analysis: { values: Record<string, number> }; parameters: { name: string; nominal: number }[] }) =>
+  r.parameters.some((p) => r.analysis.values[p.name] !== p.nominal);
+
 /** One editing session on one version: document + history, canvas, panels, live result, saving. */
 export function EditorSession(props: Props) {
   const { diagram, initialDoc, baseVersion, latestNow, onReload, viewOnly = false, share, savedProblems = null, comments, linkedComment = null } = props;
@@ -325,7 +329,13 @@ export function EditorSession(props: Props) {
       </div>
       <div className="mt-4 grid gap-4 lg:grid-cols-3">
         <Panel title="Closed-loop result">
-          <ResultsPanel live={live} view={view} stale={live.doc !== doc} onPair={choosePair} />
+          <ResultsPanel
+            live={live}
+            view={view}
+            stale={live.doc !== doc}
+            onPair={choosePair}
+            atValues={analysis.result && { analysis: analysis.result.analysis, moved: slidersMoved(analysis.result) }}
+          />
         </Panel>
         <Panel title="Reduction steps">
           <StepThrough steps={view.steps} current={step ? stepAt : null} onChange={setStepAt} />

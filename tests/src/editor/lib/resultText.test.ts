@@ -25,6 +25,6 @@ describe("result as text", () => {
     const t = r.result.transfers[0];
     // from memory: Ogata, Modern Control Engineering — G/(1+G) with G = K/(s(s+2)).
     expect(resultPlainText(t, r.result.characteristic)).toBe("T_y_r(s) = K/(s^2 + 2*s + K)\nCharacteristic polynomial: s^2 + 2*s + K");
-    expect(resultLatex(t, r.result.characteristicLatex)).toContain("&= \\frac{K}{s^{2} + 2 s + K}");
+    expect(resultLatex(t, r.result.characteristicLatex)).toContain("&= \\frac{K}{s^{2} + 2\\,s + K}");
   });
 });

@@ -1,7 +1,9 @@
 import { useId } from "react";
 import { toast } from "sonner";
 import { Button } from "@/components/Button";
+import type { Analysis } from "@shared/analysis/analyze";
 import { LargeTex } from "@/features/editor/components/LargeTex";
+import { ClosedLoopAtValues } from "@/features/editor/components/panels/ClosedLoopAtValues";
 import { pairKey, pairName, type ResultView } from "@/features/editor/lib/resultView";
 import { resultLatex, resultPlainText, transferText } from "@/features/editor/lib/resultText";
 import type { LiveResult } from "@/features/editor/hooks/useLiveDiagram";
@@ -12,6 +14,8 @@ interface Props {
   /** The outcome belongs to an older document than the one on the canvas. */
   stale: boolean;
   onPair: (key: string) => void;
+  /** The analysis of a pair at the slider values (nominal unless moved), for the numeric closed loop. */
+  atValues?: { analysis: Analysis; moved: boolean } | null;
 }
 
 const copy = (text: string, what: string) =>
@@ -21,7 +25,7 @@ const copy = (text: string, what: string) =>
   );
 
 /** The closed-loop transfer function of the chosen pair, its characteristic polynomial and cancelled modes. */
-export function ResultsPanel({ live, view, stale, onPair }: Props) {
+export function ResultsPanel({ live, view, stale, onPair, atValues = null }: Props) {
   const pairId = useId();
   const { result, transfer, transfers } = view;
   const status = live.crash
@@ -63,6 +67,9 @@ export function ResultsPanel({ live, view, stale, onPair }: Props) {
               {transferText(transfer)}
             </output>
           </section>
+          {atValues && atValues.analysis.input === transfer.input && atValues.analysis.output === transfer.output && !stale && (
+            <ClosedLoopAtValues analysis={atValues.analysis} moved={atValues.moved} />
+          )}
           <section aria-label="Characteristic polynomial" className="text-sm">
             <p className="text-xs text-ink-soft">Characteristic polynomial (all modes of the loop, nothing cancelled)</p>
             <div className="overflow-x-auto">

@@ -1,0 +1,35 @@
+import { expect, test, type Page } from "@playwright/test";
+import { createTeam, seedDiagram, signUp, uniqueEmail } from "./helpers";
+import { unityLoop } from "./loops";
+
+const text = async (page: Page, label: string) => ((await page.getByLabel(label).textContent()) ?? "").replace(/[\s*]/g, "");
+
+test("the closed loop shows at its nominal values beside the symbolic one, and a broken expression lists every error", async ({ page }) => {
+  test.setTimeout(180_000);
+  await signUp(page, "Ines Input", uniqueEmail("input"));
+  const teamId = await createTeam(page, `Spindle ${Date.now()}`);
+  const id = await seedDiagram(page, teamId, unityLoop("Spindle speed loop", "K/(s*(s + 2))", { K: 4 }), "Nominal gain");
+  await page.goto(`/diagrams/${id}`);
+  await expect(page.getByRole("application", { name: "Diagram canvas" })).toBeVisible({ timeout: 60_000 });
+
+  // common practice: unity feedback around K/(s(s+2)) closes to K/(s² + 2s + K); at K = 4, 4/(s² + 2s + 4).
+  await expect.poll(() => text(page, "Closed-loop transfer function as text"), { timeout: 60_000 }).toBe("K/(s^2+2s+K)");
+  await expect.poll(() => text(page, "Closed loop at the parameter values as text"), { timeout: 60_000 }).toBe("4/(s^2+2s+4)");
+  await expect(page.getByRole("region", { name: "Closed loop at the parameter values" })).toContainText("At the nominal values (K = 4)");
+
+  // Two errors in one expression: both listed, each with its position, both marked.
+  const plant = page.getByRole("group", { name: "Transfer function G", exact: true });
+  await expect(async () => {
+    await plant.click();
+    await expect(page.getByLabel("Transfer function of s")).toBeVisible({ timeout: 2_000 });
+  }).toPass({ timeout: 30_000 });
+  await page.getByLabel("Transfer function of s").fill("Kx*(s+");
+  const status = page.getByRole("complementary", { name: "Properties" }).getByRole("listitem");
+  await expect(status.filter({ hasText: "Unknown name `Kx` at position 0" })).toBeVisible();
+  await expect(status.filter({ hasText: /^Syntax error .*position 6/ })).toBeVisible();
+  await expect(page.getByRole("button", { name: "Declare parameter Kx = 1" })).toBeVisible();
+  // The problems panel lists both as well.
+  const problems = page.getByRole("region", { name: /^Problems/ });
+  await expect(problems).toContainText("Unknown name `Kx`");
+  await expect(problems).toContainText("Syntax error");
+});
