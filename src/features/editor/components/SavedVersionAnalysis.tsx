@@ -3,6 +3,7 @@ import { ProblemAlert } from "@/components/ProblemAlert";
 import type { EditorDoc } from "@/features/editor/commands/types";
 import { ClosedLoop } from "@/features/editor/components/ClosedLoop";
 import { useLiveDiagram } from "@/features/editor/hooks/useLiveDiagram";
+import { formatNumber } from "@/features/editor/lib/analysisFormat";
 import { versionMetrics } from "@/features/editor/lib/compareMetrics";
 import { SAVED_VERSION_ANALYSIS } from "@/features/editor/lib/savedAnalysis";
 
@@ -35,7 +36,14 @@ export function SavedVersionAnalysis({ label, doc }: { label: string; doc: Edito
       <div className="grid grid-cols-[minmax(0,5fr)_minmax(0,7fr)] gap-4">
         {a ? (
           <table className="w-full self-start text-left text-xs">
-            <caption className="mb-1 text-left text-sm font-medium">Key metrics (nominal parameter values)</caption>
+            <caption className="mb-1 text-left text-sm font-medium">
+              Key metrics
+              {analysis.parameters.length > 0 && (
+                <span className="block text-xs font-normal text-ink-soft">
+                  at {analysis.parameters.map((p) => `${p.name} = ${formatNumber(p.nominal)}${p.unit ? ` ${p.unit}` : ""}`).join(", ")}
+                </span>
+              )}
+            </caption>
             <tbody>
               {metrics.map((m) => (
                 <tr key={m.name} className="border-b border-rule last:border-b-0">

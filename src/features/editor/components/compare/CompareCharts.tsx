@@ -18,6 +18,9 @@ const STYLES = [
 
 const SAMPLES = 300;
 
+/** One curve alone is drawn solid in the action colour, as the newer of two would be. */
+const styleOf = (i: number, count: number) => STYLES[count === 1 ? 1 : i];
+
 /** "v1 and v2", or "v3" for one curve. */
 const labels = (curves: readonly Curve[]) => curves.map((c) => c.label).join(" and ");
 
@@ -43,10 +46,10 @@ export function StepOverlay({ curves, height = 240 }: { curves: readonly Curve[]
           label={{ value: "t (s)", position: "insideBottomRight", offset: -4, fontSize: 11 }} />
         <YAxis type="number" domain={["auto", "auto"]} width={56} fontSize={11} tickFormatter={(v: number) => formatNumber(v, 3)} />
         <Tooltip labelFormatter={(t) => `t = ${formatNumber(Number(t), 4)} s`} formatter={(v) => formatNumber(Number(v), 5)} />
-        <Legend wrapperStyle={{ fontSize: 12 }} />
+        {curves.length > 1 && <Legend wrapperStyle={{ fontSize: 12 }} />}
         {curves.map((c, i) =>
           series[i].length ? (
-            <Line key={c.label} data={series[i]} dataKey="y" name={c.label} dot={false} isAnimationActive={false} strokeWidth={2} {...STYLES[i]} />
+            <Line key={c.label} data={series[i]} dataKey="y" name={c.label} dot={false} isAnimationActive={false} strokeWidth={2} {...styleOf(i, curves.length)} />
           ) : null,
         )}
       </LineChart>
@@ -71,10 +74,10 @@ export function BodeOverlay({ curves, height = 190 }: { curves: readonly Curve[]
       <YAxis type="number" domain={["auto", "auto"]} width={56} fontSize={11} tickFormatter={(v: number) => formatNumber(v, 3)}
         label={{ value: unit, angle: -90, position: "insideLeft", fontSize: 11 }} />
       <Tooltip labelFormatter={(w) => `ω = ${formatNumber(Number(w), 5)} rad/s`} formatter={(v) => `${formatNumber(Number(v), 5)} ${unit}`} />
-      {key === "mag" && <Legend wrapperStyle={{ fontSize: 12 }} />}
+      {key === "mag" && curves.length > 1 && <Legend wrapperStyle={{ fontSize: 12 }} />}
       {curves.map((c, i) =>
         series[i].length ? (
-          <Line key={c.label} data={series[i]} dataKey={key} name={c.label} dot={false} isAnimationActive={false} strokeWidth={2} {...STYLES[i]} />
+          <Line key={c.label} data={series[i]} dataKey={key} name={c.label} dot={false} isAnimationActive={false} strokeWidth={2} {...styleOf(i, curves.length)} />
         ) : null,
       )}
     </LineChart>
