@@ -1,5 +1,5 @@
 import { expect, test, type Browser, type Page } from "@playwright/test";
-import { PASSWORD, createTeam, signUp, uniqueEmail } from "./helpers";
+import { PASSWORD, createTeam, seedDiagram, signUp, uniqueEmail } from "./helpers";
 import { unityLoop } from "./loops";
 
 /** Unity negative feedback around K/(s(s+2)) with K = 4: T = 4/(s² + 2s + 4), ζ = 0.5 (common practice). */
@@ -100,4 +100,18 @@ test("a viewer of the team opens the sheet from the versions table; a stranger i
   await stranger.goto(sheetPath);
   await expect(stranger.getByRole("alert")).toContainText("Could not load this diagram.", COLD_LOAD);
   await expect(stranger.getByRole("article", { name: /^Review sheet/ })).toHaveCount(0);
+});
+
+test("a version saved with problems shows them on its sheet instead of an analysis", async ({ page }) => {
+  await signUp(page, "Pia Problems", uniqueEmail("sheet-problems"));
+  const teamId = await createTeam(page, `Coater line ${Date.now()}`);
+  const id = await seedDiagram(page, teamId, unityLoop("Coater web loop", "K/(s*(s + 2)", { K: 4 }), "Half-typed plant");
+  await page.goto(`/diagrams/${id}/versions/1/sheet`);
+  const sheetOf = page.getByRole("article", { name: "Review sheet of Coater web loop, version 1" });
+  const alert = sheetOf.getByRole("alert");
+  await expect(alert).toContainText("Version 1 was saved with problems, so it has no analysis.", COLD_LOAD);
+  await expect(alert.getByRole("listitem")).toHaveText(['Block "G", expr: Syntax error at position 12: a closing parenthesis `)` is missing']);
+  await expect(sheetOf.getByRole("table", { name: /^Key metrics/ })).toHaveCount(0);
+  await expect(sheetOf).toContainText("Message: Half-typed plant");
+  await expect(sheetOf).toContainText("Loopwright results describe linear models only.");
 });
