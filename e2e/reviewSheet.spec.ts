@@ -10,6 +10,11 @@ const sheet = (page: Page) => page.getByRole("article", { name: "Review sheet of
 
 /** Pages of a PDF: its page objects, `/Type /Page` not followed by `s` (that is the page tree). */
 const pdfPages = (pdf: Buffer) => (pdf.toString("latin1").match(/\/Type\s*\/Page(?!s)/g) ?? []).length;
+/** The first page's size in points, as its MediaBox gives it (common practice: A4 ≈ 595 × 842 pt, Letter 612 × 792 pt). */
+const pdfPageSize = (pdf: Buffer) => {
+  const box = /\/MediaBox\s*\[\s*0\s+0\s+([\d.]+)\s+([\d.]+)\s*\]/.exec(pdf.toString("latin1"));
+  return box ? [Math.round(Number(box[1])), Math.round(Number(box[2]))] : null;
+};
 
 async function openImportedLoop(page: Page) {
   await signUp(page, "Ola Reviewer", uniqueEmail("sheet-owner"));
@@ -75,6 +80,8 @@ test("the Export menu opens a one-page review sheet of the version that prints o
   await expect(page.getByRole("button", { name: "Print" })).toBeHidden();
   await expect(sheet(page)).toBeVisible();
   expect(pdfPages(await page.pdf({ format: "A4" }))).toBe(1);
+  // Printed with the page's own paper size, the sheet asks for A4 through its @page rule.
+  expect(pdfPageSize(await page.pdf({ preferCSSPageSize: true }))).toEqual([595, 842]);
 
   await page.emulateMedia({ media: "screen" });
   await page.getByLabel("Paper").selectOption("Letter");
@@ -82,6 +89,15 @@ test("the Export menu opens a one-page review sheet of the version that prints o
   await sheetReady(page);
   await page.emulateMedia({ media: "print" });
   expect(pdfPages(await page.pdf({ format: "Letter" }))).toBe(1);
+  expect(pdfPageSize(await page.pdf({ preferCSSPageSize: true }))).toEqual([612, 792]);
+
+  // Print opens the browser's print dialog (replaced here, as a headless browser has none).
+  await page.emulateMedia({ media: "screen" });
+  await page.evaluate(() => {
+    window.print = () => document.body.setAttribute("data-printed", "yes");
+  });
+  await page.getByRole("button", { name: "Print" }).click();
+  await expect(page.locator("body")).toHaveAttribute("data-printed", "yes");
 });
 
 test("a viewer of the team opens the sheet from the versions table; a stranger is refused", async ({ page, browser }) => {
