@@ -131,3 +131,25 @@ test("a version saved with problems shows them on its sheet instead of an analys
   await expect(sheetOf).toContainText("Message: Half-typed plant");
   await expect(sheetOf).toContainText("Loopwright results describe linear models only.");
 });
+
+test("a sixth-order loop with a long title and message still prints on one Letter page with every metric showing", async ({ page }) => {
+  test.setTimeout(120_000);
+  await signUp(page, "Lee Longform", uniqueEmail("sheet-long"));
+  const teamId = await createTeam(page, `Extruder line ${Date.now()}`);
+  const title = "Extruder melt pressure loop with lead compensation and a lightly damped die mode";
+  const plant = "K*(s+1)*(s+4)/(s*(s+2)*(s+3)*(s+5)*(s^2+s+7))";
+  const message = "Raised the gain after the screw change; reviewers, please look at the margins and the die-mode ringing before sign-off";
+  const id = await seedDiagram(page, teamId, unityLoop(title, plant, { K: 30 }), message);
+  await page.goto(`/diagrams/${id}/versions/1/sheet?paper=letter`);
+  const sheetOf = page.getByRole("article", { name: `Review sheet of ${title}, version 1` });
+  await expect(sheetOf.getByRole("figure", { name: /^Closed-loop Bode plots of v1/ })).toBeVisible(COLD_LOAD);
+  await expect(sheetOf.getByRole("row", { name: /^Closed-loop order/ })).toContainText("6");
+
+  await page.emulateMedia({ media: "print" });
+  // The sheet cuts what does not fit rather than spill: the last metric must lie inside its box, not under the cut.
+  const box = (await sheetOf.boundingBox())!;
+  const last = (await sheetOf.getByRole("row", { name: /^Bandwidth/ }).boundingBox())!;
+  expect(last.y + last.height).toBeLessThanOrEqual(box.y + box.height);
+  await expect(sheetOf).toContainText("Loopwright results describe linear models only.");
+  expect(pdfPages(await page.pdf({ format: "Letter" }))).toBe(1);
+});

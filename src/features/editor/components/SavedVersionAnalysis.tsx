@@ -33,7 +33,7 @@ export function SavedVersionAnalysis({ label, doc }: { label: string; doc: Edito
   return (
     <div className="flex flex-col gap-3">
       <ClosedLoop label={label} title="Closed-loop transfer function (default input and output)" live={result} analysis={analysis} />
-      <div className="grid grid-cols-[minmax(0,5fr)_minmax(0,7fr)] gap-4">
+      <div className="grid grid-cols-2 gap-4">
         {a ? (
           <table className="w-full self-start text-left text-xs">
             <caption className="mb-1 text-left text-sm font-medium">
@@ -47,11 +47,11 @@ export function SavedVersionAnalysis({ label, doc }: { label: string; doc: Edito
             <tbody>
               {metrics.map((m) => (
                 <tr key={m.name} className="border-b border-rule last:border-b-0">
-                  <th scope="row" className="py-1 pr-3 font-normal">
+                  <th scope="row" className="py-0.5 pr-3 font-normal whitespace-nowrap">
                     {m.name}
                     {m.unit && <span className="text-ink-faint"> ({m.unit})</span>}
                   </th>
-                  <td className="py-1 font-mono tabular-nums">{m.value}</td>
+                  <td className="py-0.5 font-mono tabular-nums">{m.value}</td>
                 </tr>
               ))}
             </tbody>
