@@ -23,6 +23,8 @@ test("imports a .json file through the picker and opens the new diagram's canvas
   const menu = page.getByRole("menu", { name: "Export version 1" });
   await expect(menu.getByRole("menuitem", { name: "Figure (SVG)" })).toBeFocused();
   await page.keyboard.press("End");
+  await expect(menu.getByRole("menuitem", { name: "Review sheet" })).toBeFocused();
+  await page.keyboard.press("ArrowUp");
   const download = menu.getByRole("menuitem", { name: "Document (.json)" });
   await expect(download).toBeFocused();
   await expect(download).toHaveAttribute("href", /\/versions\/1\/document\.json$/);

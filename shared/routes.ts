@@ -14,6 +14,7 @@ export const paths = {
   diagram: "/diagrams/:id",
   versions: "/diagrams/:id/versions",
   compare: "/diagrams/:id/compare",
+  sheet: "/diagrams/:id/versions/:n/sheet",
   share: "/s/:token",
 } as const;
 
@@ -64,6 +65,8 @@ export const href = {
   /** Two saved versions side by side: what changed from `from` to `to` and what it did to the response. */
   compare: (id: string, from: number, to: number) => `${fillPath(paths.compare, { id })}?from=${from}&to=${to}`,
   share: (token: string) => fillPath(paths.share, { token }),
+  /** One saved version's printable review sheet. */
+  sheet: (id: string, version: number) => fillPath(paths.sheet, { id, n: String(version) }),
   /** A review comment: the diagram page opens its version's comments with the comment's thread selected. */
   diagramComment: (id: string, version: number, commentId: string) =>
     `${fillPath(paths.diagram, { id })}?version=${version}&comment=${encodeURIComponent(commentId)}`,

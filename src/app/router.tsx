@@ -18,6 +18,7 @@ const ActivityRoute = lazy(() => import("@/app/routes/ActivityRoute").then((m) =
 const DiagramRoute = lazy(() => loadDiagramRoute().then((m) => ({ default: m.DiagramRoute })));
 const VersionsRoute = lazy(() => import("@/app/routes/VersionsRoute").then((m) => ({ default: m.VersionsRoute })));
 const CompareRoute = lazy(() => import("@/app/routes/CompareRoute").then((m) => ({ default: m.CompareRoute })));
+const ReviewSheetRoute = lazy(() => import("@/app/routes/ReviewSheetRoute").then((m) => ({ default: m.ReviewSheetRoute })));
 const SharedRoute = lazy(() => import("@/app/routes/SharedRoute").then((m) => ({ default: m.SharedRoute })));
 const NotFoundRoute = lazy(() => import("@/app/routes/NotFoundRoute").then((m) => ({ default: m.NotFoundRoute })));
 
@@ -42,6 +43,7 @@ export const router = createBrowserRouter([
           { path: paths.diagram, element: <DiagramRoute /> },
           { path: paths.versions, element: <VersionsRoute /> },
           { path: paths.compare, element: <CompareRoute /> },
+          { path: paths.sheet, element: <ReviewSheetRoute /> },
         ],
       },
       { path: "*", element: <NotFoundRoute /> },

@@ -9,6 +9,8 @@ describe("the route table", () => {
     expect(matchRoute(paths.diagram, "/diagrams/42")).toEqual({ id: "42" });
     expect(matchRoute(paths.diagram, "/diagrams/42/")).toEqual({ id: "42" });
     expect(matchRoute(paths.members, href.members("t 1"))).toEqual({ teamId: "t 1" });
+    expect(href.sheet("42", 3)).toBe("/diagrams/42/versions/3/sheet");
+    expect(matchRoute(paths.sheet, href.sheet("a b", 3))).toEqual({ id: "a b", n: "3" });
   });
 
   it("matches nothing else: other depths, other prefixes, malformed escapes", () => {

@@ -9,7 +9,7 @@ export function AppShell() {
   const compare = useMatch(paths.compare) !== null;
   const wide = editor || compare;
   return (
-    <div className="flex min-h-screen flex-col">
+    <div className="flex min-h-screen flex-col print:block print:min-h-0">
       <a
         href="#main"
         className="sr-only focus:not-sr-only focus:absolute focus:top-2 focus:left-2 focus:z-50 focus:rounded focus:bg-paper-raised focus:px-3 focus:py-2"

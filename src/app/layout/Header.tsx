@@ -22,7 +22,7 @@ export function Header() {
     );
 
   return (
-    <header className="border-b border-rule bg-paper-raised">
+    <header className="border-b border-rule bg-paper-raised print:hidden">
       <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-3 px-4 py-3 sm:px-6">
         <Link to={user ? paths.teams : paths.signIn} className="flex items-center gap-2 text-lg font-semibold tracking-tight">
           <Logo className="size-7" />

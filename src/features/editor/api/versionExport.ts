@@ -1,11 +1,16 @@
+import { href } from "@shared/routes";
 import { versionDocumentHref } from "@/features/editor/api/versionDocument";
+
+/** GET /api/diagrams/:id/versions/:n/export.svg|.png — version n's figure shown in a page (an image's src). */
+export const versionFigureSrc = (diagramId: string, number: number, format: "svg" | "png") =>
+  `/api/diagrams/${encodeURIComponent(diagramId)}/versions/${number}/export.${format}`;
 
 /**
  * GET /api/diagrams/:id/versions/:n/export.svg|.png?download=1 — version n's figure as a file download (the server
  * names it `<title>-v<n>.svg|png`; the PNG is rendered at 2× from the same SVG), so these are links, not queries.
  */
 export const versionFigureHref = (diagramId: string, number: number, format: "svg" | "png") =>
-  `/api/diagrams/${encodeURIComponent(diagramId)}/versions/${number}/export.${format}?download=1`;
+  `${versionFigureSrc(diagramId, number, format)}?download=1`;
 
 /** The files the editor's Export menu offers for one saved version. */
 export interface VersionExports {
@@ -13,6 +18,8 @@ export interface VersionExports {
   svg: string;
   png: string;
   json: string;
+  /** The printable review sheet of the version (a page of the app, not a download). */
+  sheet: string;
 }
 
 export const versionExports = (diagramId: string, number: number): VersionExports => ({
@@ -20,4 +27,5 @@ export const versionExports = (diagramId: string, number: number): VersionExport
   svg: versionFigureHref(diagramId, number, "svg"),
   png: versionFigureHref(diagramId, number, "png"),
   json: versionDocumentHref(diagramId, number),
+  sheet: href.sheet(diagramId, number),
 });

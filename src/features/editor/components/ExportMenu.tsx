@@ -4,9 +4,9 @@ import type { VersionExports } from "@/features/editor/api/versionExport";
 
 /**
  * The toolbar's Export menu button: the open saved version's figure (SVG, PNG at 2×) and document (.json) as
- * downloads. A menu button in the usual keyboard pattern: Enter, Space or ArrowDown open it on the first item,
- * arrows, Home and End move, Escape closes it and gives focus back to the button. Before the first save it is
- * disabled and says why.
+ * downloads, and its printable review sheet (a page). A menu button in the usual keyboard pattern: Enter, Space or
+ * ArrowDown open it on the first item, arrows, Home and End move, Escape closes it and gives focus back to the
+ * button. Before the first save it is disabled and says why.
  */
 export function ExportMenu({ exports, className }: { exports: VersionExports | null; className: string }) {
   const [open, setOpen] = useState(false);
@@ -15,9 +15,10 @@ export function ExportMenu({ exports, className }: { exports: VersionExports | n
   const items = useRef<(HTMLAnchorElement | null)[]>([]);
   const entries = exports
     ? [
-        { label: "Figure (SVG)", href: exports.svg },
-        { label: "Figure (PNG, 2×)", href: exports.png },
-        { label: "Document (.json)", href: exports.json },
+        { label: "Figure (SVG)", href: exports.svg, download: true },
+        { label: "Figure (PNG, 2×)", href: exports.png, download: true },
+        { label: "Document (.json)", href: exports.json, download: true },
+        { label: "Review sheet", href: exports.sheet, download: false },
       ]
     : [];
 
@@ -87,7 +88,7 @@ export function ExportMenu({ exports, className }: { exports: VersionExports | n
               role="menuitem"
               tabIndex={-1}
               href={entry.href}
-              download
+              download={entry.download || undefined}
               onClick={() => close(true)}
               className="px-3 py-1.5 text-sm text-ink hover:bg-paper-sunk focus:bg-paper-sunk focus:outline-none"
             >

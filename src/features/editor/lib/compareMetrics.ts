@@ -1,7 +1,7 @@
 import type { Analysis } from "@shared/analysis/analyze";
 import type { Quantity } from "@shared/analysis/steadyState";
 import { analysisOrder } from "@shared/analysis/versionSummary";
-import { formatNumber } from "@/features/editor/lib/analysisFormat";
+import { formatNumber, rootRows } from "@/features/editor/lib/analysisFormat";
 
 /** One row of a comparison's metrics: each version's value as shown, and the change from the first to the second. */
 export interface MetricRow {
@@ -58,4 +58,23 @@ export function compareMetrics(before: Analysis | null, after: Analysis | null):
     const a = after ? of(after) : null;
     return { name, unit, before: shown(b), after: shown(a), change: change(b, a) };
   });
+}
+
+/** One figure of a single version as shown, e.g. { name: "Overshoot", unit: "%", value: "16.3" }. */
+export interface VersionMetric {
+  name: string;
+  unit: string;
+  value: string;
+}
+
+/**
+ * One version's key figures, as a printed review lists them: the poles of T(s) (a conjugate pair on one entry,
+ * a repeated pole with its multiplicity), then the same metrics a comparison shows.
+ * Example: versionMetrics(servoK4)[0] → { name: "Poles", unit: "", value: "−1 ± 1.732j" }.
+ */
+export function versionMetrics(a: Analysis): VersionMetric[] {
+  const poles = rootRows(a.poles)
+    .map((r) => (r.root.multiplicity > 1 ? `${r.value} (×${r.root.multiplicity})` : r.value))
+    .join(", ");
+  return [{ name: "Poles", unit: "", value: poles || "none" }, ...METRICS.map(({ name, unit, of }) => ({ name, unit, value: shown(of(a)) }))];
 }

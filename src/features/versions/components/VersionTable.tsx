@@ -72,6 +72,9 @@ export function VersionTable({ diagramId, versions, editable }: Props) {
                       v{v.number}
                     </Link>
                     {v.number === latest && <span className="ml-2 text-xs text-ink-faint">latest</span>}
+                    <Link to={href.sheet(diagramId, v.number)} className="ml-3 text-xs text-signal underline underline-offset-2" aria-label={`Review sheet of v${v.number}`}>
+                      Sheet
+                    </Link>
                   </td>
                   <td className={cell}>{v.message || <span className="text-ink-faint">No message</span>}</td>
                   <td className={cell}>{v.createdBy}</td>

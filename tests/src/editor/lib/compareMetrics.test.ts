@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { analyzeAt } from "@shared/analysis/analyze";
-import { compareMetrics } from "@/features/editor/lib/compareMetrics";
+import { compareMetrics, versionMetrics } from "@/features/editor/lib/compareMetrics";
 import { prepared } from "../../../support/reduced";
 import { unityFeedback } from "../../../support/docBuilder";
 
@@ -28,5 +28,25 @@ describe("compareMetrics", () => {
     const rows = compareMetrics(null, servo(4));
     expect(row(rows, "Phase margin")).toMatchObject({ before: "—", after: "51.83", change: "changed" });
     expect(compareMetrics(null, null).every((r) => r.change === "")).toBe(true);
+  });
+});
+
+describe("versionMetrics", () => {
+  const value = (name: string, K = 4) => versionMetrics(servo(K)).find((m) => m.name === name)?.value;
+
+  // common practice: s² + 2s + 4 has the poles −1 ± j√3 (ζ = 0.5, ωn = 2), overshoot 16.30 %, PM 51.83° as above.
+  it("lists one version's poles first, then the compared figures as a comparison shows them", () => {
+    const metrics = versionMetrics(servo(4));
+    expect(metrics[0]).toEqual({ name: "Poles", unit: "", value: "\u22121 ± 1.732j" });
+    expect(value("Overshoot")).toBe("16.3");
+    expect(value("Phase margin")).toBe("51.83");
+    expect(value("Stability")).toBe("stable");
+    expect(metrics.slice(1).map((m) => m.name)).toEqual(compareMetrics(null, null).map((r) => r.name));
+  });
+
+  // common practice: K = 1 gives s² + 2s + 1 = (s + 1)², one pole of multiplicity two, and no overshoot.
+  it("names a repeated pole once with its multiplicity", () => {
+    expect(value("Poles", 1)).toBe("\u22121 (×2)");
+    expect(value("Overshoot", 1)).toBe("0");
   });
 });

@@ -5,12 +5,11 @@ import type { EditorDoc } from "@/features/editor/commands/types";
 import { CompareCanvas } from "@/features/editor/components/compare/CompareCanvas";
 import { CompareMetricsTable } from "@/features/editor/components/compare/CompareMetricsTable";
 import { DiffList } from "@/features/editor/components/compare/DiffList";
-import { LargeTex } from "@/features/editor/components/LargeTex";
-import { useLiveDiagram, type AnalysisOptions, type LiveAnalysis, type LiveResult } from "@/features/editor/hooks/useLiveDiagram";
+import { ClosedLoop } from "@/features/editor/components/ClosedLoop";
+import { useLiveDiagram } from "@/features/editor/hooks/useLiveDiagram";
 import { compareMarks } from "@/features/editor/lib/compareMarks";
 import { compareMetrics } from "@/features/editor/lib/compareMetrics";
-import { transferText } from "@/features/editor/lib/resultText";
-import { resultView } from "@/features/editor/lib/resultView";
+import { SAVED_VERSION_ANALYSIS } from "@/features/editor/lib/savedAnalysis";
 
 // The charting library loads apart from the canvas, as in the editor.
 const StepOverlay = lazy(() => import("@/features/editor/components/compare/CompareCharts").then((m) => ({ default: m.StepOverlay })));
@@ -22,36 +21,6 @@ export interface CompareSide {
   doc: EditorDoc;
 }
 
-// Both sides are analysed the same way: the default pair, the default break, nominal values, a 2 % band.
-const DEFAULTS: AnalysisOptions = { input: null, output: null, break: null, values: {}, band: 0.02, sweepParameter: null, sweepShown: false };
-
-function ClosedLoop({ label, live, analysis }: { label: string; live: LiveResult; analysis: LiveAnalysis }) {
-  const { transfer, problems } = resultView(live.outcome, null);
-  return (
-    <section aria-label={`Closed loop of ${label}`} className="min-w-0 rounded border border-rule bg-paper px-3 py-2">
-      <h3 className="text-sm font-medium">{label}</h3>
-      {!live.outcome ? (
-        <p className="text-sm text-ink-soft">Working out the result…</p>
-      ) : transfer ? (
-        <>
-          <p className="text-xs text-ink-soft">
-            From <span className="font-mono">{transfer.input}</span> to <span className="font-mono">{transfer.output}</span>
-          </p>
-          <div className="overflow-x-auto py-1">
-            <LargeTex display latex={`T(s) = ${transfer.latex}`} what={`T(s) of ${label}`} plain={<span className="text-xs text-ink-soft">A large result: its text is below.</span>} />
-          </div>
-          <output aria-label={`Closed-loop transfer function of ${label} as text`} className="block font-mono text-xs break-all text-ink-soft">
-            {transferText(transfer)}
-          </output>
-        </>
-      ) : (
-        <p className="text-sm font-medium text-fault">No result: {problems.filter((p) => p.severity === "error").length} problem(s), e.g. {problems[0]?.message ?? "no input–output pair"}</p>
-      )}
-      {analysis.problems.length > 0 && !analysis.result && <p className="mt-1 text-xs text-ink-soft">No analysis: {analysis.problems[0].message}</p>}
-    </section>
-  );
-}
-
 /**
  * Two diagrams side by side, as a reviewer reads a change: what differs in the model (listed, and highlighted on
  * each canvas), both closed loops, overlaid step and Bode plots, and the key metrics with their change.
@@ -60,8 +29,9 @@ export function CompareView({ before, after }: { before: CompareSide; after: Com
   const diff = useMemo(() => diffDiagrams(before.doc, after.doc), [before.doc, after.doc]);
   const marksBefore = useMemo(() => compareMarks(diff, "before"), [diff]);
   const marksAfter = useMemo(() => compareMarks(diff, "after"), [diff]);
-  const a = useLiveDiagram(before.doc, DEFAULTS);
-  const b = useLiveDiagram(after.doc, DEFAULTS);
+  // Both sides are analysed the same way, as any saved version is.
+  const a = useLiveDiagram(before.doc, SAVED_VERSION_ANALYSIS);
+  const b = useLiveDiagram(after.doc, SAVED_VERSION_ANALYSIS);
   const analysisA = a.analysis.result?.analysis ?? null;
   const analysisB = b.analysis.result?.analysis ?? null;
   const curves = useMemo(
