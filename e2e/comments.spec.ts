@@ -1,3 +1,4 @@
+import { readFile } from "node:fs/promises";
 import { expect, test, type Page } from "@playwright/test";
 import { createTeam, PASSWORD, seedDiagram, signUp, uniqueEmail } from "./helpers";
 import { unityLoop } from "./loops";
@@ -68,6 +69,11 @@ test("a viewer pins a comment on a block; the author is mailed a link that opens
   await reviewer.getByRole("tab", { name: "Properties" }).click();
   await pin.click();
   await expect(thread).toBeVisible();
+  // The figure with open comments carries the pin and its words.
+  await reviewer.getByRole("toolbar", { name: "Editor" }).getByRole("button", { name: "Export" }).click();
+  const [download] = await Promise.all([reviewer.waitForEvent("download"), reviewer.getByRole("menuitem", { name: "Figure with open comments (SVG)" }).click()]);
+  const svg = await readFile((await download.path())!, "utf8");
+  expect(svg).toContain("Comment 1 on block G");
 
   // The author (the diagram's creator and version 1's author) got the mail; its link opens the thread on version 1.
   const link = await mailLink(page, ownerEmail, /Ravi Reviewer/);

@@ -17,6 +17,8 @@ export interface VersionExports {
   number: number;
   svg: string;
   png: string;
+  /** The SVG with the version's open pinned review comments drawn and listed. */
+  svgWithComments: string;
   json: string;
   /** The printable review sheet of the version (a page of the app, not a download). */
   sheet: string;
@@ -26,6 +28,7 @@ export const versionExports = (diagramId: string, number: number): VersionExport
   number,
   svg: versionFigureHref(diagramId, number, "svg"),
   png: versionFigureHref(diagramId, number, "png"),
+  svgWithComments: `${versionFigureHref(diagramId, number, "svg")}&comments=1`,
   json: versionDocumentHref(diagramId, number),
   sheet: href.sheet(diagramId, number),
 });

@@ -17,6 +17,7 @@ export function ExportMenu({ exports, className }: { exports: VersionExports | n
     ? [
         { label: "Figure (SVG)", href: exports.svg, download: true },
         { label: "Figure (PNG, 2×)", href: exports.png, download: true },
+        { label: "Figure with open comments (SVG)", href: exports.svgWithComments, download: true },
         { label: "Document (.json)", href: exports.json, download: true },
         { label: "Review sheet", href: exports.sheet, download: false },
       ]
