@@ -47,6 +47,11 @@ test("analyses the loop: verdict, Routh array, overshoot, a live K slider and a 
 
   // K = 4: ωn = 2, ζ = 0.5 → 16.3 % overshoot.
   await expect.poll(() => percentIn(page, "Overshoot")).toBeCloseTo(overshootFor(4), 1);
+  // The time axis ends on a round value (common practice: an axis ends on a tick), at most two significant digits.
+  const stepPlot = panel.getByRole("figure", { name: /y\(t\) for t from 0 to/ }).first();
+  const end = Number(/to ([\d.]+) s/.exec((await stepPlot.getAttribute("aria-label")) ?? "")?.[1]);
+  expect(end).toBeGreaterThan(0);
+  expect(Number(end.toPrecision(2))).toBe(end);
 
   // The K slider's top end is 40 (the table's max): ζ = 1/√40 → 60.5 %; the diagram itself stays saved.
   const slider = panel.getByRole("slider", { name: "K" });
@@ -74,6 +79,13 @@ test("analyses the loop: verdict, Routh array, overshoot, a live K slider and a 
   const wc = Math.sqrt(2 * (Math.sqrt(5) - 1));
   const pm = 90 - (Math.atan(wc / 2) * 180) / Math.PI;
   await expect.poll(() => percentIn(page, "Phase margin")).toBeCloseTo(pm, 1);
+  // The Bode plot of L marks the phase margin as a labelled bar at the gain crossover, with axis titles in units.
+  await panel.getByLabel("Loop gain L(jω)").check();
+  const bode = panel.getByRole("figure", { name: /^Bode plot of Loop gain/ });
+  await expect(bode).toContainText(`Amber bar: the phase margin, ${pm.toFixed(2)}° at ω = ${wc.toFixed(3)} rad/s.`);
+  await expect(bode).toContainText(`PM ${pm.toFixed(1)}°`);
+  await expect(bode).toContainText("frequency ω (rad/s)");
+  await expect(bode).toContainText("phase (degrees)");
   await panel.getByRole("button", { name: "Use the default break" }).click();
   await expect(summary).toContainText("Loop broken at wire w4 (default)");
 });

@@ -9,6 +9,7 @@ import { bode, frequencyRange, type BodeData } from "@shared/analysis/frequency"
 import { analyzeLoop, fractionText, zpkOf, type LoopAnalysis } from "@shared/analysis/loopAnalysis";
 import { bandwidth } from "@shared/analysis/margins";
 import { exactValues, polySubstitute, transferAt } from "@shared/analysis/nominal";
+import { roundAxisEnd } from "@shared/analysis/axisSteps";
 import { dominantPoles, rootsOf, type RootInfo } from "@shared/analysis/poles";
 import type { PreparedAnalysis } from "@shared/analysis/prepare";
 import { routhArray, type RouthArray } from "@shared/analysis/routh";
@@ -161,10 +162,11 @@ function metricsOrWhy(num: UPoly, den: UPoly, st: Stability, t0: number | null, 
   return m;
 }
 
+/** How far in t the responses are plotted: until they settle (or ten time constants when unstable), to a round end. */
 function plotHorizon(r: TimeResponse, st: Stability, poles: RootInfo[], t0: number): number {
-  if (st.verdict === "stable") return horizon(r, 1e-3 * Math.max(Math.abs(t0), 1e-12)) || 1;
+  if (st.verdict === "stable") return roundAxisEnd(horizon(r, 1e-3 * Math.max(Math.abs(t0), 1e-12)) || 1);
   const scale = Math.max(...poles.map((x) => Math.hypot(x.re, x.im)).filter((x) => x > 0), 1e-3);
-  return 10 / scale;
+  return roundAxisEnd(10 / scale);
 }
 
 function conditionsOf(r: RouthArray): string[] {

@@ -34,14 +34,6 @@ function trimZeros(text: string): string {
   return text.includes(".") ? text.replace(/0+$/, "").replace(/\.$/, "") : text;
 }
 
-/** Axis tick step of 1, 2 or 5 × 10^k giving about `count` ticks over `span`. Example: niceStep(7, 5) === 2. */
-export function niceStep(span: number, count: number): number {
-  const raw = span / count;
-  const mag = 10 ** Math.floor(Math.log10(raw));
-  const f = raw / mag;
-  return (f <= 1 ? 1 : f <= 2 ? 2 : f <= 5 ? 5 : 10) * mag;
-}
-
 export interface ComplexFormat {
   digits?: number;
   /** Print a conjugate pair as "a ± bj" instead of the one number "a + bj". */

@@ -7,7 +7,7 @@ import { rootsOf } from "@shared/analysis/poles";
 import { routhArray } from "@shared/analysis/routh";
 import { upFromPoly } from "@shared/analysis/upoly";
 import {
-  firstColumnSign, formatComplex, formatExact, formatNumber, formatQuantity, niceStep, rootRows, verdictWord, withMinus,
+  firstColumnSign, formatComplex, formatExact, formatNumber, formatQuantity, rootRows, verdictWord, withMinus,
 } from "@/features/editor/lib/analysisFormat";
 
 /** Back to a JavaScript number: U+2212 to "-", "∞" to Infinity. */
@@ -60,15 +60,6 @@ describe("formatNumber", () => {
         expect(Math.abs(back - x)).toBeLessThanOrEqual(Math.abs(x) * 5e-4 + Number.MIN_VALUE);
       }),
     );
-  });
-});
-
-describe("niceStep", () => {
-  it("picks 1, 2 or 5 × 10^k steps (common practice: axis tick steps)", () => {
-    expect(niceStep(7, 5)).toBe(2);
-    expect(niceStep(100, 4)).toBe(50);
-    expect(niceStep(0.03, 6)).toBeCloseTo(0.005, 15);
-    expect(niceStep(9, 10)).toBe(1);
   });
 });
 

@@ -46,6 +46,29 @@ const decades = (lo: number, hi: number): number[] => {
   return out;
 };
 
+/** The curve's value at ω, interpolated linearly in log ω between the samples around it. */
+function valueAt(omega: readonly number[], ys: readonly number[], w: number): number {
+  const i = omega.findIndex((x) => x >= w);
+  if (i <= 0) return ys[Math.max(i, 0)];
+  const f = (Math.log(w) - Math.log(omega[i - 1])) / (Math.log(omega[i]) - Math.log(omega[i - 1]));
+  return ys[i - 1] + f * (ys[i] - ys[i - 1]);
+}
+
+/**
+ * The margins as spans on the Bode plot: the gain margin from |L| at the phase crossover up to 0 dB, the phase
+ * margin from the −180° line (the copy nearest the curve) up to the phase at the gain crossover.
+ */
+function marginSpans(data: BodeData, loop: LoopAnalysis | null) {
+  const m = loop?.margins;
+  const gm = m && m.gainMarginDb !== null && m.phaseCrossover !== null ? { omega: m.phaseCrossover, from: -m.gainMarginDb, to: 0, value: m.gainMarginDb } : null;
+  let pm = null;
+  if (m && m.phaseMarginDeg !== null && m.gainCrossover !== null) {
+    const phase = valueAt(data.omega, data.phaseDeg, m.gainCrossover);
+    pm = { omega: m.gainCrossover, from: phase - m.phaseMarginDeg, to: phase, value: m.phaseMarginDeg };
+  }
+  return { gm, pm };
+}
+
 const omegaText = (w: number) => (w === Infinity ? "ω → ∞" : `ω = ${formatNumber(w)} rad/s`);
 
 function BodePlots({ data, title, loop, bandwidth }: { data: BodeData; title: string; loop: LoopAnalysis | null; bandwidth: number | null }) {
@@ -59,17 +82,19 @@ function BodePlots({ data, title, loop, bandwidth }: { data: BodeData; title: st
   const minus180 = loop ? Array.from({ length: Math.max(0, kHi - kLo + 1) }, (_, i) => -180 + 360 * (kLo + i)) : [];
   const gains = loop?.margins.gainCrossovers ?? [];
   const phases = loop?.margins.phaseCrossovers ?? [];
-  const xAxis = (
-    <XAxis type="number" dataKey="w" scale="log" domain={domain} ticks={ticks} allowDataOverflow tickFormatter={(w: number) => formatNumber(w, 3)} fontSize={11} />
+  const spans = marginSpans(data, loop);
+  const xAxis = (withTitle: boolean) => (
+    <XAxis type="number" dataKey="w" scale="log" domain={domain} ticks={ticks} allowDataOverflow tickFormatter={(w: number) => formatNumber(w, 3)} fontSize={11}
+      label={withTitle ? { value: "frequency ω (rad/s)", position: "insideBottomRight", offset: -10, fontSize: 11 } : undefined} />
   );
   const tooltipLabel = (w: unknown) => `ω = ${formatNumber(Number(w), 5)} rad/s`;
   return (
     <figure aria-label={`Bode plot of ${title}: magnitude in dB and phase in degrees against ω in rad/s from ${formatNumber(domain[0])} to ${formatNumber(domain[1])}`} className="flex flex-col gap-1">
       <LineChart responsive style={{ width: "100%", height: 190 }} data={rows} syncId="bode" margin={{ top: 8, right: 16, bottom: 0, left: 4 }}>
         <CartesianGrid className="text-rule" stroke="currentColor" strokeDasharray="2 4" />
-        {xAxis}
+        {xAxis(false)}
         <YAxis type="number" domain={["auto", "auto"]} width={56} fontSize={11} tickFormatter={(v: number) => formatNumber(v, 3)}
-          label={{ value: "dB", angle: -90, position: "insideLeft", fontSize: 11 }} />
+          label={{ value: "magnitude (dB)", angle: -90, position: "insideLeft", fontSize: 11, style: { textAnchor: "middle" } }} />
         <Tooltip formatter={(v) => [`${formatNumber(Number(v), 5)} dB`, "magnitude"]} labelFormatter={tooltipLabel} />
         {loop && <ReferenceLine y={0} className="text-ink-faint" stroke="currentColor" strokeDasharray="4 3" />}
         {gains.map((c) => (
@@ -84,13 +109,18 @@ function BodePlots({ data, title, loop, bandwidth }: { data: BodeData; title: st
           <ReferenceLine x={bandwidth} className="text-steady" stroke="currentColor" strokeDasharray="5 3"
             label={{ value: "bandwidth", position: "insideTopRight", fontSize: 10, fill: "currentColor" }} />
         )}
+        {spans.gm && (
+          <ReferenceLine segment={[{ x: spans.gm.omega, y: spans.gm.from }, { x: spans.gm.omega, y: spans.gm.to }]} ifOverflow="extendDomain"
+            className="text-fault" stroke="currentColor" strokeWidth={4} strokeOpacity={0.55}
+            label={{ value: `GM ${formatNumber(spans.gm.value, 3)} dB`, position: "right", fontSize: 10, fill: "currentColor" }} />
+        )}
         <Line dataKey="mag" name="magnitude" dot={false} isAnimationActive={false} className="text-signal" stroke="currentColor" strokeWidth={2} />
       </LineChart>
-      <LineChart responsive style={{ width: "100%", height: 190 }} data={rows} syncId="bode" margin={{ top: 8, right: 16, bottom: 12, left: 4 }}>
+      <LineChart responsive style={{ width: "100%", height: 200 }} data={rows} syncId="bode" margin={{ top: 8, right: 16, bottom: 22, left: 4 }}>
         <CartesianGrid className="text-rule" stroke="currentColor" strokeDasharray="2 4" />
-        {xAxis}
+        {xAxis(true)}
         <YAxis type="number" domain={["auto", "auto"]} width={56} fontSize={11} tickFormatter={(v: number) => formatNumber(v, 3)}
-          label={{ value: "deg", angle: -90, position: "insideLeft", fontSize: 11 }} />
+          label={{ value: "phase (degrees)", angle: -90, position: "insideLeft", fontSize: 11, style: { textAnchor: "middle" } }} />
         <Tooltip formatter={(v) => [`${formatNumber(Number(v), 5)}°`, "phase"]} labelFormatter={tooltipLabel} />
         {minus180.map((p) => (
           <ReferenceLine key={p} y={p} className="text-ink-faint" stroke="currentColor" strokeDasharray="4 3" />
@@ -102,11 +132,18 @@ function BodePlots({ data, title, loop, bandwidth }: { data: BodeData; title: st
           <ReferenceLine key={`p${c.omega}`} x={c.omega} className="text-fault" stroke="currentColor" strokeDasharray="5 3"
             label={c.omega === loop?.margins.phaseCrossover ? { value: "ω pc", position: "insideBottomRight", fontSize: 10, fill: "currentColor" } : undefined} />
         ))}
+        {spans.pm && (
+          <ReferenceLine segment={[{ x: spans.pm.omega, y: spans.pm.from }, { x: spans.pm.omega, y: spans.pm.to }]} ifOverflow="extendDomain"
+            className="text-trace" stroke="currentColor" strokeWidth={4} strokeOpacity={0.6}
+            label={{ value: `PM ${formatNumber(spans.pm.value, 3)}°`, position: "right", fontSize: 10, fill: "currentColor" }} />
+        )}
         <Line dataKey="phase" name="phase" dot={false} isAnimationActive={false} className="text-signal" stroke="currentColor" strokeWidth={2} />
       </LineChart>
       <figcaption className="text-xs text-ink-soft">
         Phase unwrapped along ω &gt; 0. {loop
-          ? "Amber lines: gain crossovers (|L| = 1); red dashed lines and dots: phase crossovers (L real and negative); grey dashed: 0 dB and −180°."
+          ? `Amber lines: gain crossovers (|L| = 1); red dashed lines and dots: phase crossovers (L real and negative); grey dashed: 0 dB and −180°.${
+              spans.gm ? ` Red bar: the gain margin, ${formatNumber(spans.gm.value, 4)} dB at ${omegaText(spans.gm.omega)}.` : ""
+            }${spans.pm ? ` Amber bar: the phase margin, ${formatNumber(spans.pm.value, 4)}° at ${omegaText(spans.pm.omega)}.` : ""}`
           : bandwidth !== null
             ? `Green dashed line: the closed-loop bandwidth, ${omegaText(bandwidth)}.`
             : "No closed-loop bandwidth to mark."}

@@ -1,7 +1,8 @@
 // Plain SVG, not recharts: an s-plane needs one scale for both axes (angles and damping lines read true)
 // and × / ○ markers, both awkward to force through a chart library's independent axes.
 import { useId } from "react";
-import { formatComplex, formatNumber, niceStep } from "@/features/editor/lib/analysisFormat";
+import { niceStep } from "@shared/analysis/axisSteps";
+import { formatComplex, formatNumber } from "@/features/editor/lib/analysisFormat";
 
 export type MarkerKind = "pole" | "zero" | "start" | "end";
 

@@ -4,7 +4,8 @@ import type { Analysis } from "@shared/analysis/analyze";
 import { sampleResponse } from "@shared/analysis/stepMetrics";
 import type { RootLocus } from "@shared/analysis/sweep";
 import { SPlanePlot, type SPlaneMarker } from "@/features/editor/components/analysis/SPlanePlot";
-import { formatComplex, formatNumber, niceStep, rootRows } from "@/features/editor/lib/analysisFormat";
+import { niceStep } from "@shared/analysis/axisSteps";
+import { formatComplex, formatNumber, rootRows } from "@/features/editor/lib/analysisFormat";
 import type { SweepData } from "@shared/analysis/answer";
 
 /** Series colours; the legend below the chart uses the same classes (recharts' legend cannot read currentColor). */

@@ -4,6 +4,7 @@ import type { Analysis } from "@shared/analysis/analyze";
 import { sampleResponse } from "@shared/analysis/stepMetrics";
 import { responseAt, type InputKind, type TimeResponse } from "@shared/analysis/timeResponse";
 import { Button } from "@/components/Button";
+import { niceStep } from "@shared/analysis/axisSteps";
 import { Tex } from "@/features/editor/components/Tex";
 import { formatNumber, formatQuantity } from "@/features/editor/lib/analysisFormat";
 import { responseCsv, responseCsvName } from "@/features/editor/lib/responseCsv";
@@ -51,9 +52,10 @@ export function TimeResponseView({ analysis, band, onBand }: { analysis: Analysi
 function Formula({ response }: { response: TimeResponse }) {
   return (
     <section aria-label="Closed-form response" className="rounded border border-rule bg-paper px-3 py-2 text-sm">
-      <div className="overflow-x-auto py-1">
-        <Tex display latex={`y(t) = ${response.latex}, \\quad t \\ge 0`} />
-      </div>
+      {/* Typeset inline, not as a display: KaTeX then breaks a long sum after its + and − signs to fit the width. */}
+      <p className="py-1 text-base leading-loose">
+        <Tex latex={`y(t) = ${response.latex}, \\quad t \\ge 0`} />
+      </p>
       <p className="text-xs text-ink-soft">
         {response.exact
           ? "Exact: every pole is rational or a quadratic surd, so each coefficient and rate is written exactly."
@@ -83,6 +85,12 @@ function firstReach(samples: Samples, final: number, level: number): number {
   return t0 + ((level - g0) / (g1 - g0)) * (t1 - t0);
 }
 
+/** Ticks from 0 to a round axis end (the analysis rounds its horizon to one), one nice step apart. */
+const axisTicks = (end: number): number[] => {
+  const step = niceStep(end, 5);
+  return Array.from({ length: Math.round(end / step) + 1 }, (_, i) => Number((i * step).toPrecision(12)));
+};
+
 function ResponsePlot({ analysis, response, samples, label }: { analysis: Analysis; response: TimeResponse; samples: Samples; label: string }) {
   const data = useMemo(() => samples.map(([t, y]) => ({ t, y })), [samples]);
   const m = analysis.step;
@@ -94,9 +102,10 @@ function ResponsePlot({ analysis, response, samples, label }: { analysis: Analys
     <figure aria-label={`${label}: y(t) for t from 0 to ${formatNumber(tEnd)} s`} className="flex flex-col gap-1">
       <LineChart responsive style={{ width: "100%", height: 240 }} data={data} margin={{ top: 12, right: 16, bottom: 12, left: 4 }}>
         <CartesianGrid className="text-rule" stroke="currentColor" strokeDasharray="2 4" />
-        <XAxis type="number" dataKey="t" domain={[0, tEnd]} tickFormatter={(t: number) => formatNumber(t, 3)} fontSize={11}
-          label={{ value: "t (s)", position: "insideBottomRight", offset: -8, fontSize: 11 }} />
-        <YAxis type="number" domain={["auto", "auto"]} tickFormatter={(y: number) => formatNumber(y, 3)} width={56} fontSize={11} />
+        <XAxis type="number" dataKey="t" domain={[0, tEnd]} ticks={axisTicks(tEnd)} tickFormatter={(t: number) => formatNumber(t, 3)} fontSize={11}
+          label={{ value: "time t (s)", position: "insideBottomRight", offset: -8, fontSize: 11 }} />
+        <YAxis type="number" domain={["auto", "auto"]} tickFormatter={(y: number) => formatNumber(y, 3)} width={56} fontSize={11}
+          label={{ value: "output y", angle: -90, position: "insideLeft", fontSize: 11 }} />
         <Tooltip formatter={(y) => [formatNumber(Number(y), 6), "y"]} labelFormatter={(t) => `t = ${formatNumber(Number(t), 6)} s`} />
         {isStep && final !== null && (
           <ReferenceLine y={final} ifOverflow="extendDomain" className="text-steady" stroke="currentColor" strokeDasharray="6 3"
