@@ -11,6 +11,7 @@ import { compareMarks } from "@/features/editor/lib/compareMarks";
 import { compareMetrics } from "@/features/editor/lib/compareMetrics";
 import { transferText } from "@/features/editor/lib/resultText";
 import { resultView } from "@/features/editor/lib/resultView";
+import { counted } from "@shared/text/words";
 
 // The charting library loads apart from the canvas, as in the editor.
 const StepOverlay = lazy(() => import("@/features/editor/components/compare/CompareCharts").then((m) => ({ default: m.StepOverlay })));
@@ -45,7 +46,7 @@ function ClosedLoop({ label, live, analysis }: { label: string; live: LiveResult
           </output>
         </>
       ) : (
-        <p className="text-sm font-medium text-fault">No result: {problems.filter((p) => p.severity === "error").length} problem(s), e.g. {problems[0]?.message ?? "no input–output pair"}</p>
+        <p className="text-sm font-medium text-fault">No result: {counted(problems.filter((p) => p.severity === "error").length, "problem")}, e.g. {problems[0]?.message ?? "no input–output pair"}</p>
       )}
       {analysis.problems.length > 0 && !analysis.result && <p className="mt-1 text-xs text-ink-soft">No analysis: {analysis.problems[0].message}</p>}
     </section>
