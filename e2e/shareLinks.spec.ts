@@ -45,6 +45,9 @@ test("an editor shares a read-only link; a browser with no session opens it, and
   // Read only, no sign-in, no way into the team, and only the link's own API was asked.
   await expect(shared.getByRole("button", { name: "Save version" })).toHaveCount(0);
   await expect(shared.getByRole("button", { name: "Share" })).toHaveCount(0);
+  // The side panel describes, it does not invite changes the reader cannot make.
+  const side = shared.getByRole("complementary", { name: "Properties" });
+  await expect(side).toHaveText("Select a block or a wire to see its details.");
   // The figure downloads are the only links on the site, and they stay under the link's own API; the canvas
   // library's attribution leads off the site (no Referer is sent with it).
   const links = await shared.getByRole("link").evaluateAll((as) => as.map((a) => (a as HTMLAnchorElement).href));
