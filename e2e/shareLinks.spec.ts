@@ -1,15 +1,19 @@
-import { expect, test } from "@playwright/test";
+import { readFile } from "node:fs/promises";
+import { expect, test, type Page } from "@playwright/test";
 import { createTeam, seedDiagram, signUp, uniqueEmail } from "./helpers";
 import { unityLoop } from "./loops";
 
-const closedLoop = (page: import("@playwright/test").Page) => page.getByLabel("Closed-loop transfer function as text");
-const compact = async (page: import("@playwright/test").Page) => ((await closedLoop(page).textContent()) ?? "").replace(/[\s*]/g, "");
+const PNG_SIGNATURE = [0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]; // common practice: the PNG file signature
+
+const closedLoop = (page: Page) => page.getByLabel("Closed-loop transfer function as text");
+const compact = async (page: Page) => ((await closedLoop(page).textContent()) ?? "").replace(/[\s*]/g, "");
 
 test("an editor shares a read-only link; a browser with no session opens it, and sees the 410 page once it is revoked", async ({ page, browser }) => {
   test.setTimeout(180_000);
   await signUp(page, "Sana Share", uniqueEmail("share"));
   const teamId = await createTeam(page, `Kiln review ${Date.now()}`);
-  const id = await seedDiagram(page, teamId, unityLoop("Kiln draught loop", "1/(s + 1)"), "For review");
+  const loop = unityLoop("Kiln draught loop", "1/(s + 1)");
+  const id = await seedDiagram(page, teamId, loop, "For review");
   await page.goto(`/diagrams/${id}`);
   await expect(page.getByRole("application", { name: "Diagram canvas" })).toBeVisible({ timeout: 60_000 });
 
@@ -41,9 +45,46 @@ test("an editor shares a read-only link; a browser with no session opens it, and
   // Read only, no sign-in, no way into the team, and only the link's own API was asked.
   await expect(shared.getByRole("button", { name: "Save version" })).toHaveCount(0);
   await expect(shared.getByRole("button", { name: "Share" })).toHaveCount(0);
-  // The canvas library's attribution is the only link, and it leads off the site (no Referer is sent with it).
+  // The side panel describes, it does not invite changes the reader cannot make.
+  const side = shared.getByRole("complementary", { name: "Properties" });
+  await expect(side).toHaveText("Select a block or a wire to see its details.");
+  // The figure downloads are the only links on the site, and they stay under the link's own API; the canvas
+  // library's attribution leads off the site (no Referer is sent with it).
   const links = await shared.getByRole("link").evaluateAll((as) => as.map((a) => (a as HTMLAnchorElement).href));
-  expect(links.filter((h) => new URL(h).origin === new URL(url).origin)).toEqual([]);
+  const token = url.split("/s/")[1]!;
+  expect(links.filter((h) => new URL(h).origin === new URL(url).origin).map((h) => new URL(h).pathname + new URL(h).search)).toEqual([
+    `/api/shared/${token}/export.svg?download=1`,
+    `/api/shared/${token}/export.png?download=1`,
+  ]);
+
+  // The reader downloads the figure: well-formed SVG, no foreignObject, a <title> for every block; and a PNG.
+  const download = async (name: string) => {
+    const [file] = await Promise.all([shared.waitForEvent("download"), shared.getByRole("navigation", { name: "Downloads" }).getByRole("link", { name }).click()]);
+    return { name: file.suggestedFilename(), bytes: await readFile(await file.path()) };
+  };
+  const svgFile = await download("Download figure (SVG)");
+  expect(svgFile.name).toBe("Kiln draught loop-v1.svg");
+  const parsed = await shared.evaluate((text) => {
+    const doc = new DOMParser().parseFromString(text, "image/svg+xml");
+    const blocks = Array.from(doc.querySelectorAll("g[data-block-id]"));
+    return {
+      parseErrors: doc.getElementsByTagName("parsererror").length,
+      root: doc.documentElement.localName,
+      foreignObjects: doc.getElementsByTagName("foreignObject").length,
+      titled: blocks.map((g) => ({ id: g.getAttribute("data-block-id"), titles: Array.from(g.children).filter((c) => c.localName === "title").map((t) => t.textContent ?? "") })),
+    };
+  }, svgFile.bytes.toString("utf8"));
+  expect(parsed.parseErrors).toBe(0);
+  expect(parsed.root).toBe("svg");
+  expect(parsed.foreignObjects).toBe(0);
+  expect(parsed.titled.map((b) => b.id).sort()).toEqual(loop.blocks.map((b) => b.id).sort());
+  for (const block of parsed.titled) {
+    expect(block.titles, `block ${block.id}`).toHaveLength(1);
+    expect(block.titles[0]).toContain(block.id);
+  }
+  const pngFile = await download("Download figure (PNG, 2×)");
+  expect(pngFile.name).toBe("Kiln draught loop-v1.png");
+  expect([...pngFile.bytes.subarray(0, 8)]).toEqual(PNG_SIGNATURE);
   expect(apiCalls.length).toBeGreaterThan(0);
   expect(apiCalls.every((p) => p.startsWith("/api/shared/"))).toBe(true);
 

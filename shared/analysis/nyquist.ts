@@ -4,6 +4,7 @@ import { polyRoots } from "@shared/algebra/roots";
 import { ratEvalComplex, type Complex } from "@shared/analysis/frequency";
 import { rootCounts } from "@shared/analysis/stability";
 import { upAdd, upFloatsDesc, type UPoly } from "@shared/analysis/upoly";
+import { counted } from "@shared/text/words";
 
 export interface Nyquist {
   /** Clockwise encirclements of −1 by L along the contour; null when the curve passes through −1. */
@@ -88,12 +89,10 @@ export function nyquist(num: UPoly, den: UPoly): Nyquist {
   const turn = contour(axis, R, delta).reduce((acc, path) => acc + argChange(f, path), 0);
   const N = -Math.round(turn / (2 * Math.PI)) || 0; // no −0
   const Z = N + P;
-  const circles = N === 0 ? "does not encircle −1" : `encircles −1 ${plural(Math.abs(N), "time")} ${N < 0 ? "counter-clockwise" : "clockwise"}`;
+  const circles = N === 0 ? "does not encircle −1" : `encircles −1 ${counted(Math.abs(N), "time")} ${N < 0 ? "counter-clockwise" : "clockwise"}`;
   const reason =
-    `${plural(P, "open-loop pole")} in the right half-plane (P = ${P}); L ${circles} (N = ${N}); ` +
-    `Z = N + P = ${plural(Z, "closed-loop pole")} in the right half-plane.`;
+    `${counted(P, "open-loop pole")} in the right half-plane (P = ${P}); L ${circles} (N = ${N}); ` +
+    `Z = N + P = ${counted(Z, "closed-loop pole")} in the right half-plane.`;
   const check = Z === cl.rhp ? "" : ` (The exact count of closed-loop right-half-plane poles is ${cl.rhp}; the numeric encirclement count disagrees.)`;
   return { encirclements: N, openLoopRhpPoles: P, closedLoopRhpPoles: Z, verdict: Z === 0 ? "stable" : "unstable", reason: reason + check };
 }
-
-const plural = (k: number, w: string) => `${k} ${w}${k === 1 ? "" : "s"}`;

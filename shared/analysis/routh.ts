@@ -7,6 +7,7 @@ import {
 import { q, qDiv, qMul, qSign, qSub, qZero, type Q } from "@shared/algebra/rational";
 import { polyToText } from "@shared/algebra/polytext";
 import type { ZPoly } from "@shared/algebra/zpoly";
+import { counted } from "@shared/text/words";
 
 /** The small positive number that replaces a zero first element; signs are read as ε → 0+. */
 const EPSILON = "ε";
@@ -157,7 +158,7 @@ export function routhArray(p: Poly): RouthArray {
   }
   const numeric = signs as number[];
   out.signChanges = countChanges(numeric);
-  const rhp = `${out.signChanges} sign change${out.signChanges === 1 ? "" : "s"} in the first column: ${out.signChanges} root${out.signChanges === 1 ? "" : "s"} in the right half-plane`;
+  const rhp = `${counted(out.signChanges, "sign change")} in the first column: ${counted(out.signChanges, "root")} in the right half-plane`;
   if (!aux) {
     out.conclusion = `${rhp}${out.signChanges === 0 ? " and none on the imaginary axis: all roots in the left half-plane" : ""}.`;
     return out;
@@ -165,7 +166,7 @@ export function routhArray(p: Poly): RouthArray {
   const below = countChanges(numeric.slice(n - aux.power));
   out.axisRoots = aux.degree - 2 * below;
   out.conclusion =
-    `${rhp}. The auxiliary polynomial (degree ${aux.degree}) has ${below} root${below === 1 ? "" : "s"} in the right half-plane, as many mirrored in the left, ` +
+    `${rhp}. The auxiliary polynomial (degree ${aux.degree}) has ${counted(below, "root")} in the right half-plane, as many mirrored in the left, ` +
     `and ${out.axisRoots} on the imaginary axis (the array cannot tell repeated axis roots; the exact factorisation does).`;
   return out;
 }

@@ -4,6 +4,7 @@ import { exactFactors } from "@shared/analysis/factors";
 import { memoByPoly } from "@shared/analysis/memo";
 import { routhRows, signAsEpsilonVanishes } from "@shared/analysis/routh";
 import { countRealRoots, realRoots } from "@shared/analysis/sturm";
+import { counted, plural } from "@shared/text/words";
 import {
   upDeg, upDivMod, upGcd, upMonic, upNegVar, upOnAxis, upToPoly, upZeroOrder, type UPoly,
 } from "@shared/analysis/upoly";
@@ -63,7 +64,6 @@ function countRoots(u: UPoly): RootCounts {
   return counts;
 }
 
-const plural = (k: number, word: string) => `${k} ${word}${k === 1 ? "" : "s"}`;
 const axisText = (ws: number[]) => ws.map((w) => (w === 0 ? "s = 0" : `s = ±${Number(w.toPrecision(6))}j`)).join(", ");
 
 /**
@@ -74,14 +74,14 @@ const axisText = (ws: number[]) => ws.map((w) => (w === 0 ? "s = 0" : `s = ±${N
 export function stabilityOf(u: UPoly, noun = "pole"): Stability {
   const counts = rootCounts(u);
   if (counts.rhp > 0) {
-    return { verdict: "unstable", counts, reason: `${plural(counts.rhp, noun)} in the right half-plane.` };
+    return { verdict: "unstable", counts, reason: `${counted(counts.rhp, noun)} in the right half-plane.` };
   }
   if (counts.repeatedAxis) {
     return { verdict: "unstable", counts, reason: `A repeated ${noun} on the imaginary axis (${axisText(counts.axisFrequencies)}): the response grows like a power of t.` };
   }
   if (counts.axis > 0) {
-    return { verdict: "marginal", counts, reason: `Simple ${noun}s on the imaginary axis (${axisText(counts.axisFrequencies)}) and none to the right.` };
+    return { verdict: "marginal", counts, reason: `${counts.axis === 1 ? `A simple ${noun}` : `Simple ${noun}s`} on the imaginary axis (${axisText(counts.axisFrequencies)}) and none to the right.` };
   }
-  const all = upDeg(u) < 1 ? `No ${noun}s.` : `All ${plural(counts.lhp, noun)} in the open left half-plane.`;
+  const all = upDeg(u) < 1 ? `No ${plural(0, noun)}.` : counts.lhp === 1 ? `The one ${noun} is in the open left half-plane.` : `All ${counted(counts.lhp, noun)} in the open left half-plane.`;
   return { verdict: "stable", counts, reason: all };
 }

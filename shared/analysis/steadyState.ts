@@ -15,6 +15,17 @@ export interface Quantity {
   note: string;
 }
 
+/**
+ * The three error constants as every reader sees them: in words, with a symbol subscripted by a word, so that none is
+ * taken for a parameter of the diagram (Kp and Kv are common parameter names). `key` is the field name in
+ * `SteadyState.constants` and the JSON of the analysis, kept stable. Example: ERROR_CONSTANTS[1].latex is K_{\mathrm{vel}}.
+ */
+export const ERROR_CONSTANTS = [
+  { key: "Kp", name: "position error constant", symbol: "K_pos", latex: "K_{\\mathrm{pos}}", limit: "lim s→0 L(s)", limitLatex: "\\lim_{s\\to 0} L(s)" },
+  { key: "Kv", name: "velocity error constant", symbol: "K_vel", latex: "K_{\\mathrm{vel}}", limit: "lim s→0 s·L(s)", limitLatex: "\\lim_{s\\to 0} s\\,L(s)" },
+  { key: "Ka", name: "acceleration error constant", symbol: "K_acc", latex: "K_{\\mathrm{acc}}", limit: "lim s→0 s²·L(s)", limitLatex: "\\lim_{s\\to 0} s^2 L(s)" },
+] as const;
+
 export interface SteadyState {
   finalValue: Quantity;
   initialValue: Quantity;
@@ -81,10 +92,10 @@ export function steadyState(num: UPoly, den: UPoly, verdict: Verdict, loop: { nu
   if (!loop) return { finalValue, initialValue, errors, systemType: null, constants: null, errorsFromConstants: null };
   const type = Math.max(0, upZeroOrder(loop.den) - upZeroOrder(loop.num));
   const lims = [0, 1, 2].map((k) => limitAtZero(loop.num, loop.den, k));
-  const names = ["Kp", "Kv", "Ka"];
-  const [Kp, Kv, Ka] = lims.map((lim, k) =>
-    asQuantity(lim, `${names[k]} = lim s→0 s^${k}·L(s).`, `${names[k]} is infinite (type ${type} loop).`),
-  );
+  const [Kp, Kv, Ka] = lims.map((lim, k) => {
+    const c = ERROR_CONSTANTS[k];
+    return asQuantity(lim, `The ${c.name} ${c.symbol} = ${c.limit}.`, `The ${c.name} ${c.symbol} is infinite (type ${type} loop).`);
+  });
   const errorsFromConstants = stable
     ? {
         step: errorFromConstant(lims[0], qOne, "step"),

@@ -17,6 +17,8 @@ export type SignalRole = "source" | "sink" | "sum" | "branch" | "scale";
 type ExpressionSpec<B> = B extends { expr: string } ? { mayContainS: boolean } : null;
 
 export interface BlockKind<B extends Block = Block> {
+  /** The kind's one name in every sentence, lower case: the rail, the panels and the problems all say it. */
+  name: string;
   role: SignalRole;
   /** The block's own expression, when it has one (the type checker ties this to the schema's `expr`). */
   expression: ExpressionSpec<B>;
@@ -31,19 +33,22 @@ const ONE_OVER_S: ExprNode = { kind: "div", left: { kind: "num", num: 1n, den: 1
  * Example: BLOCK_KINDS.transfer.expression?.mayContainS === true.
  */
 export const BLOCK_KINDS: { readonly [T in BlockType]: BlockKind<Extract<Block, { type: T }>> } = {
-  input: { role: "source", expression: null, fixedTransfer: null },
-  output: { role: "sink", expression: null, fixedTransfer: null },
-  sum: { role: "sum", expression: null, fixedTransfer: null },
-  branch: { role: "branch", expression: null, fixedTransfer: null },
-  gain: { role: "scale", expression: { mayContainS: false }, fixedTransfer: null },
-  transfer: { role: "scale", expression: { mayContainS: true }, fixedTransfer: null },
-  integrator: { role: "scale", expression: null, fixedTransfer: ONE_OVER_S },
+  input: { name: "input", role: "source", expression: null, fixedTransfer: null },
+  output: { name: "output", role: "sink", expression: null, fixedTransfer: null },
+  sum: { name: "summing junction", role: "sum", expression: null, fixedTransfer: null },
+  branch: { name: "pickoff point", role: "branch", expression: null, fixedTransfer: null },
+  gain: { name: "gain", role: "scale", expression: { mayContainS: false }, fixedTransfer: null },
+  transfer: { name: "transfer function", role: "scale", expression: { mayContainS: true }, fixedTransfer: null },
+  integrator: { name: "integrator", role: "scale", expression: null, fixedTransfer: ONE_OVER_S },
 };
 
 export type ExpressionBlock = Extract<Block, { expr: string }>;
 
 /** The block has an `expr` field. Example: hasExpression({ id: "c", type: "gain", expr: "2" }) === true. */
 export const hasExpression = (block: Block): block is ExpressionBlock => BLOCK_KINDS[block.type].expression !== null;
+
+/** The kind's name with its block id, as problems name a block. Example: namedBlock({ id: "p1", type: "branch" }) === 'pickoff point "p1"'. */
+export const namedBlock = (block: Pick<Block, "id" | "type">): string => `${BLOCK_KINDS[block.type].name} "${block.id}"`;
 
 /** The kind's row. Example: kindOf(block).role === "scale" for a transfer block. */
 export const kindOf = (block: Block): BlockKind => BLOCK_KINDS[block.type] as BlockKind;

@@ -1,11 +1,11 @@
 import type { Problem } from "@shared/diagram/problems";
 import { LIMITS, wireLabel, type Block, type DiagramDocument } from "@shared/diagram/schema";
+import { namedBlock } from "@shared/diagram/blockKinds";
+import { capital } from "@shared/text/words";
 import { blocksById, incomingWiresByPort, inputPortCount, type WireRef } from "@shared/diagram/graph";
 
 /** How a sentence names a wire: `wire "w1"` or `wire #2 (e → c)`. Example: wireName(ref) → 'wire "w1"'. */
 export const wireName = (ref: WireRef): string => (ref.wire.id !== undefined ? `wire "${ref.wire.id}"` : ref.label);
-
-const capital = (text: string): string => text.charAt(0).toUpperCase() + text.slice(1);
 
 const error = (code: string, message: string, at: Partial<Problem> = {}): Problem => ({
   severity: "error",
@@ -74,7 +74,7 @@ export function wireProblems(doc: DiagramDocument): Problem[] {
         problems.push(error("port-out-of-range", message, { ...at, blockId: to.id, field: "port" }));
       }
     } else if (wire.port !== undefined) {
-      const message = `${capital(wireName(ref))} sets port ${wire.port} on ${to.type} block "${to.id}"; only wires into a summing junction have a port — remove it`;
+      const message = `${capital(wireName(ref))} sets port ${wire.port} on ${namedBlock(to)}; only wires into a summing junction have a port — remove it`;
       problems.push(error("port-on-non-sum", message, { ...at, blockId: to.id, field: "port" }));
     }
   });
@@ -93,7 +93,7 @@ export function portProblems(doc: DiagramDocument): Problem[] {
         const message =
           block.type === "sum"
             ? `Summing junction "${id}" has nothing wired into port ${port} (sign ${block.signs[port]}): connect a wire with port ${port} or remove the sign`
-            : `Block "${id}" (${block.type}) has no incoming wire: connect its input`;
+            : `${capital(namedBlock(block))} has no incoming wire: connect its input`;
         problems.push(error("unwired-port", message, { blockId: id, ...(field ? { field } : {}) }));
       }
       for (const extra of wires.slice(1)) problems.push(extraWire(block, port, wires[0], extra));
@@ -109,7 +109,7 @@ function extraWire(block: Block, port: number, first: WireRef, extra: WireRef): 
     return error("port-occupied", message, { ...at, field: "port" });
   }
   const message =
-    `${capital(wireName(extra))} is a second wire into ${block.type} block "${block.id}" (already fed by ${wireName(first)}); ` +
+    `${capital(wireName(extra))} is a second wire into ${namedBlock(block)} (already fed by ${wireName(first)}); ` +
     `a block has ${inputPortCount(block)} input — add a summing junction to combine signals`;
   return error("second-incoming-wire", message, at);
 }

@@ -5,6 +5,7 @@ import { expressionLatex } from "@shared/expr/exprLatex";
 import { estimatedSize, fallbackPosition, inPoint, outPoint } from "@shared/geometry/blockBox";
 import { BLOCK_SHAPES } from "@shared/geometry/blockShape";
 import { arrowHead, roundedPath, wireRoute, type Point } from "@shared/geometry/wireRoute";
+import { counted } from "@shared/text/words";
 
 export interface Typeset { svg: string; width: number; height: number }
 export type Typesetter = (tex: string) => Typeset;
@@ -114,7 +115,7 @@ export function diagramSvg({ document: doc, result, meta, pins = [], typeset }: 
   let y = y1 - y0 + 90;
   out.push(`<text x="24" y="${r1(y)}" font-size="13" font-weight="600" fill="${INK}">Closed-loop result</text>`);
   y += 12;
-  if (result && !result.ok) out.push(`<text x="24" y="${r1(y + 12)}" font-size="12" fill="${FAULT}">Saved with ${result.problems.length} problem${result.problems.length === 1 ? "" : "s"}</text>`);
+  if (result && !result.ok) out.push(`<text x="24" y="${r1(y + 12)}" font-size="12" fill="${FAULT}">Saved with ${counted(result.problems.length, "problem")}</text>`);
   if (!result) out.push(`<text x="24" y="${r1(y + 12)}" font-size="12" fill="${SOFT}">Not checked</text>`);
   for (const t of resultTex) {
     out.push(`<g class="result" transform="translate(24 ${r1(y)})">${t.svg}</g>`);

@@ -1,5 +1,7 @@
 import type { Problem } from "@shared/diagram/problems";
 import type { DiagramDocument } from "@shared/diagram/schema";
+import { BLOCK_KINDS } from "@shared/diagram/blockKinds";
+import { withArticle } from "@shared/text/words";
 
 /** Most (input, output) pairs one reduction computes; beyond it, ask for one pair. */
 export const MAX_PAIRS = 1000;
@@ -18,7 +20,7 @@ export function selectPairs(
     const all = doc.blocks.filter((b) => b.type === kind).map((b) => b.id);
     if (chosen === undefined || all.includes(chosen)) return chosen === undefined ? all : [chosen];
     const block = doc.blocks.find((b) => b.id === chosen);
-    const why = block ? `block "${chosen}" is a ${block.type} block, not an ${kind}` : `there is no block "${chosen}"`;
+    const why = block ? `block "${chosen}" is ${withArticle(BLOCK_KINDS[block.type].name)}, not an ${kind}` : `there is no block "${chosen}"`;
     problems.push({
       severity: "error",
       code: "unknown-pair-id",

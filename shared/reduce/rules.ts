@@ -219,7 +219,7 @@ function move<T>(ctx: RuleContext<T>, node: SfgNode<T>, rule: "move-sum" | "move
     const draft = produce(ctx, rule, consumed, last ? [node.own] : [], gain, (eq) =>
       isSum
         ? `Move junction ${node.id} past ${G}: ${x} becomes ${eq} = ${value}.`
-        : `Move pickoff ${node.id} before ${G}: ${x} becomes ${eq} = ${value}.`,
+        : `Move pickoff point ${node.id} before ${G}: ${x} becomes ${eq} = ${value}.`,
     );
     const [from, to] = ends(e);
     link(ctx, from, to, draft);

@@ -1,6 +1,7 @@
 import type { Problem } from "@shared/diagram/problems";
 import { analyzeDocument } from "@shared/analysis/analyzeDiagram";
 import type { AnalysisResult } from "@shared/analysis/schema";
+import { counted, plural } from "@shared/text/words";
 import { parseReduceArgs } from "@server/tools/cli/args";
 import { CliExit, readJsonFile, runCommand, usageError as cliUsageError } from "@server/tools/cli/command";
 import { formatProblem } from "@server/tools/cli/report";
@@ -96,7 +97,7 @@ function run(argv: readonly string[]): string {
     const usage = out.problems.filter((p: Problem) => USAGE_CODES.has(p.code));
     if (usage.length) throw new CliExit(2, [...usage.map((p) => `analyze: ${p.message}`), USAGE]);
     const errors = out.problems.filter((p) => p.severity === "error").length;
-    throw new CliExit(1, [`analyze: ${file}: ${errors} problem${errors === 1 ? "" : "s"} prevent analysis`, ...out.problems.map(formatProblem)]);
+    throw new CliExit(1, [`analyze: ${file}: ${counted(errors, "problem")} ${plural(errors, "prevents", "prevent")} analysis`, ...out.problems.map(formatProblem)]);
   }
   return json ? `${JSON.stringify(out.result, null, 2)}\n` : report(out.result, out.doc.title);
 }

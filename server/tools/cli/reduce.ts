@@ -1,4 +1,5 @@
 import type { Problem } from "@shared/diagram/problems";
+import { counted, plural } from "@shared/text/words";
 import { HELP, USAGE, parseReduceArgs } from "@server/tools/cli/args";
 import { CliExit, readJsonFile, runCommand, usageError as cliUsageError } from "@server/tools/cli/command";
 import { caretLines, formatProblem, formatReport } from "@server/tools/cli/report";
@@ -35,7 +36,7 @@ async function run(argv: readonly string[]): Promise<string> {
     const pairProblems = reduced.problems.filter((p) => p.code === "unknown-pair-id");
     if (pairProblems.length) throw new CliExit(2, [...pairProblems.map((p) => `reduce: ${p.message}`), USAGE]);
     const errors = reduced.problems.filter((p) => p.severity === "error").length;
-    const lines = [`reduce: ${file}: ${errors} problem${errors === 1 ? "" : "s"} prevent reduction`];
+    const lines = [`reduce: ${file}: ${counted(errors, "problem")} ${plural(errors, "prevents", "prevent")} reduction`];
     for (const p of reduced.problems) lines.push(formatProblem(p), ...caretLines(p, exprText(raw, p)));
     throw new CliExit(1, lines);
   }

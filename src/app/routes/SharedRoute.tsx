@@ -3,6 +3,7 @@ import { PageTitle } from "@/components/PageTitle";
 import { Loading } from "@/components/QueryState";
 import { errorMessage, isApiError } from "@/lib/apiClient";
 import { SharedDiagramView } from "@/features/editor/components/SharedDiagramView";
+import { SharedFigureDownloads } from "@/features/editor/components/SharedFigureDownloads";
 import { useSharedVersion } from "@/features/shareLinks/api/getSharedVersion";
 
 /** /s/:token — the version a share link opens, read-only, for anyone holding the link. */
@@ -22,7 +23,9 @@ export function SharedRoute() {
   const { diagram, version } = shared.data;
   return (
     <>
-      <PageTitle title={diagram.title} kicker={`Version ${version.number} · shared read-only`} />
+      <PageTitle title={diagram.title} kicker={`Version ${version.number} · shared read-only`}>
+        <SharedFigureDownloads token={token} />
+      </PageTitle>
       <SharedDiagramView title={diagram.title} version={version} />
     </>
   );

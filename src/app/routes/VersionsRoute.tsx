@@ -6,6 +6,7 @@ import { useEditorDiagram } from "@/features/editor/api/getEditorDiagram";
 import { useVersions } from "@/features/versions/api/getVersions";
 import { VersionTable } from "@/features/versions/components/VersionTable";
 import { href } from "@shared/routes";
+import { counted } from "@shared/text/words";
 
 /** /diagrams/:id/versions — the diagram's history. */
 export function VersionsRoute() {
@@ -23,7 +24,7 @@ export function VersionsRoute() {
           ← Back to the editor
         </Link>
       </PageTitle>
-      <Panel title={`${versions.data.length} version${versions.data.length === 1 ? "" : "s"}`}>
+      <Panel title={counted(versions.data.length, "version")}>
         <VersionTable diagramId={id} versions={versions.data} editable={d.role !== "viewer"} />
       </Panel>
     </>

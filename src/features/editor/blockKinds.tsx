@@ -1,5 +1,7 @@
 import type { NodeTypes } from "@xyflow/react";
+import { BLOCK_KINDS } from "@shared/diagram/blockKinds";
 import type { Block, BlockType } from "@shared/diagram/schema";
+import { capital } from "@shared/text/words";
 import { ArrowLeftToLine, ArrowRightFromLine, CircleDot, CirclePlus, Divide, Triangle } from "lucide-react";
 import type { ReactNode } from "react";
 import { GainNode, IntegratorNode, TransferNode } from "@/features/editor/components/nodes/ExpressionNodes";
@@ -8,7 +10,7 @@ import { BranchNode, InputNode, OutputNode } from "@/features/editor/components/
 
 /** What the editor shows and does for one block kind; its signal role lives in shared/diagram/blockKinds.ts, its outline in shared/geometry/blockShape.ts. */
 export interface BlockKindView {
-  /** The kind's name in labels and headings. */
+  /** The kind's name in labels and headings: the shared row's name, capitalised. */
   name: string;
   /** The rail's short caption, glyph and hint; `key` is the digit that adds one. */
   rail: { short: string; key: string; glyph: ReactNode; hint: string };
@@ -20,17 +22,19 @@ export interface BlockKindView {
   node: NodeTypes[string];
 }
 
+const nameOf = (type: BlockType) => capital(BLOCK_KINDS[type].name);
+
 /** Every block kind of the editor in one row each, in rail order; a new kind in the schema makes the compiler ask for its row. */
 export const BLOCK_VIEWS: Record<BlockType, BlockKindView> = {
   input: {
-    name: "Input",
+    name: nameOf("input"),
     rail: { short: "Input", key: "1", glyph: <ArrowRightFromLine className="size-5" />, hint: "External signal: reference or disturbance" },
     idPrefix: "r",
     create: (id) => ({ id, type: "input" }),
     node: InputNode,
   },
   sum: {
-    name: "Summing junction",
+    name: nameOf("sum"),
     rail: { short: "Sum", key: "2", glyph: <CirclePlus className="size-5" />, hint: "Adds and subtracts its inputs" },
     idPrefix: "e",
     // A comparator: + reference, − feedback.
@@ -38,35 +42,35 @@ export const BLOCK_VIEWS: Record<BlockType, BlockKindView> = {
     node: SumNode,
   },
   gain: {
-    name: "Gain",
+    name: nameOf("gain"),
     rail: { short: "Gain", key: "3", glyph: <Triangle className="size-5 rotate-90" />, hint: "Static gain, no s" },
     idPrefix: "k",
     create: (id) => ({ id, type: "gain", expr: "1" }),
     node: GainNode,
   },
   transfer: {
-    name: "Transfer function",
+    name: nameOf("transfer"),
     rail: { short: "Transfer", key: "4", glyph: <Divide className="size-5" />, hint: "Rational function of s" },
     idPrefix: "G",
     create: (id) => ({ id, type: "transfer", expr: "1/(s + 1)" }),
     node: TransferNode,
   },
   integrator: {
-    name: "Integrator",
+    name: nameOf("integrator"),
     rail: { short: "Integrator", key: "5", glyph: <span className="font-serif text-xl leading-5 italic">∫</span>, hint: "1/s" },
     idPrefix: "int",
     create: (id) => ({ id, type: "integrator" }),
     node: IntegratorNode,
   },
   branch: {
-    name: "Pickoff point",
-    rail: { short: "Pickoff", key: "6", glyph: <CircleDot className="size-5" />, hint: "Pickoff: one signal to several wires" },
+    name: nameOf("branch"),
+    rail: { short: "Pickoff point", key: "6", glyph: <CircleDot className="size-5" />, hint: "One signal to several wires" },
     idPrefix: "p",
     create: (id) => ({ id, type: "branch" }),
     node: BranchNode,
   },
   output: {
-    name: "Output",
+    name: nameOf("output"),
     rail: { short: "Output", key: "7", glyph: <ArrowLeftToLine className="size-5" />, hint: "A signal to observe" },
     idPrefix: "y",
     create: (id) => ({ id, type: "output" }),

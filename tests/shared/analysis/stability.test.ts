@@ -22,6 +22,17 @@ describe("exact stability verdict (definitions of the analysis; roots known by c
     expect(rootCounts(p)).toMatchObject(counts);
   });
 
+  it.each([
+    ["one stable pole", product([2, 1]), "The one pole is in the open left half-plane."],
+    ["three stable poles", product([1, 1], [2, 1], [3, 1]), "All 3 poles in the open left half-plane."],
+    ["one pole on the right", product([-1, 1], [2, 1]), "1 pole in the right half-plane."],
+    ["two poles on the right", product([-1, 1], [-2, 1]), "2 poles in the right half-plane."],
+    ["one simple pole at 0", product([0, 1], [1, 1]), "A simple pole on the imaginary axis (s = 0) and none to the right."],
+    ["a simple pair on the axis", product([4, 0, 1], [1, 1]), "Simple poles on the imaginary axis (s = ±2j) and none to the right."],
+  ] as const)("the reason reads in the right number: %s (common practice: English number agreement)", (_, p, reason) => {
+    expect(stabilityOf(p).reason).toBe(reason);
+  });
+
   it("a verdict no float tolerance could give: s^2 + 10^-30·s + 1 is stable (roots at Re = −5·10^-31)", () => {
     const den = ratDenominator(parseTransfer("1", "s^2 + s/(10^30) + 1", []));
     expect(stabilityOf(upFromPoly(den)).verdict).toBe("stable");

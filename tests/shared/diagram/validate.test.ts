@@ -126,6 +126,23 @@ describe("reachability warnings", () => {
   });
 });
 
+describe("problems name a pickoff point as the rail does", () => {
+  it("an unfed pickoff point and a second wire into one say 'pickoff point', never its type key", () => {
+    const unfed = check(edited((d) => {
+      d.blocks.push({ id: "b", type: "branch" });
+      d.wires.push({ from: "b", to: "y2" });
+      d.blocks.push({ id: "y2", type: "output" });
+    })).problems.find((p) => p.code === "unwired-port");
+    expect(unfed).toMatchObject({ blockId: "b", message: 'Pickoff point "b" has no incoming wire: connect its input' });
+    const twice = check(edited((d) => {
+      d.blocks.push({ id: "b", type: "branch" });
+      d.wires.push({ id: "wb1", from: "p", to: "b" }, { id: "wb2", from: "r", to: "b" });
+    })).problems.find((p) => p.code === "second-incoming-wire");
+    expect(twice?.message).toContain('is a second wire into pickoff point "b"');
+    for (const p of [unfed, twice]) expect(p?.message).not.toMatch(/branch/);
+  });
+});
+
 describe("limits", () => {
   /** r → n transfer blocks in series → y. */
   const chain = (n: number, expr: string) => ({

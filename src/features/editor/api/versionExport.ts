@@ -1,16 +1,21 @@
 import { href } from "@shared/routes";
 import { versionDocumentHref } from "@/features/editor/api/versionDocument";
 
+export type FigureFormat = "svg" | "png";
+
 /** GET /api/diagrams/:id/versions/:n/export.svg|.png — version n's figure shown in a page (an image's src). */
-export const versionFigureSrc = (diagramId: string, number: number, format: "svg" | "png") =>
+export const versionFigureSrc = (diagramId: string, number: number, format: FigureFormat) =>
   `/api/diagrams/${encodeURIComponent(diagramId)}/versions/${number}/export.${format}`;
 
 /**
  * GET /api/diagrams/:id/versions/:n/export.svg|.png?download=1 — version n's figure as a file download (the server
- * names it `<title>-v<n>.svg|png`; the PNG is rendered at 2× from the same SVG), so these are links, not queries.
+ * names it `<title>-v<n>.svg|png`), so these are links, not queries.
  */
-export const versionFigureHref = (diagramId: string, number: number, format: "svg" | "png") =>
+export const versionFigureHref = (diagramId: string, number: number, format: FigureFormat) =>
   `${versionFigureSrc(diagramId, number, format)}?download=1`;
+
+/** GET /api/shared/:token/export.svg|.png?download=1 — the figure of the version a share link opens (no session). */
+export const sharedFigureHref = (token: string, format: FigureFormat) => `/api/shared/${encodeURIComponent(token)}/export.${format}?download=1`;
 
 /** The files the editor's Export menu offers for one saved version. */
 export interface VersionExports {

@@ -1,4 +1,5 @@
-import { hasExpression } from "@shared/diagram/blockKinds";
+import { BLOCK_KINDS, hasExpression } from "@shared/diagram/blockKinds";
+import { withArticle } from "@shared/text/words";
 import type { Block, BlockType } from "@shared/diagram/schema";
 import { BLOCK_VIEWS } from "@/features/editor/blockKinds";
 import { blockIds, freshId } from "@/features/editor/commands/ids";
@@ -28,7 +29,7 @@ export function updateBlock(doc: EditorDoc, blockId: string, change: (b: Block) 
 
 /** Sets the expression of a block that has one, as typed (checked live by the parser, not here). */
 export function setExpression(doc: EditorDoc, blockId: string, expr: string): Outcome {
-  return updateBlock(doc, blockId, (b) => (hasExpression(b) ? { ...b, expr } : `Block "${blockId}" is a ${b.type} and has no expression`));
+  return updateBlock(doc, blockId, (b) => (hasExpression(b) ? { ...b, expr } : `Block "${blockId}" is ${withArticle(BLOCK_KINDS[b.type].name)} and has no expression`));
 }
 
 /** Sets the label shown on a block; an empty label removes it (the id is shown instead). */

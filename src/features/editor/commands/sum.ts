@@ -1,3 +1,5 @@
+import { BLOCK_KINDS } from "@shared/diagram/blockKinds";
+import { withArticle } from "@shared/text/words";
 import { updateBlock } from "@/features/editor/commands/blocks";
 import { done, refuse, type EditorDoc, type Outcome } from "@/features/editor/commands/types";
 
@@ -7,7 +9,7 @@ const MAX_PORTS = 16;
 /** Sets the sign of one input port of a summing junction. */
 export function setSign(doc: EditorDoc, blockId: string, port: number, sign: Sign): Outcome {
   return updateBlock(doc, blockId, (b) => {
-    if (b.type !== "sum") return `Block "${blockId}" is a ${b.type}, not a summing junction`;
+    if (b.type !== "sum") return `Block "${blockId}" is ${withArticle(BLOCK_KINDS[b.type].name)}, not a summing junction`;
     if (port < 0 || port >= b.signs.length) return `Summing junction "${blockId}" has no port ${port}`;
     const signs = b.signs.slice();
     signs[port] = sign;
@@ -18,7 +20,7 @@ export function setSign(doc: EditorDoc, blockId: string, port: number, sign: Sig
 /** Adds an input port with `sign` after the last one (at most 16). */
 export function addSumPort(doc: EditorDoc, blockId: string, sign: Sign): Outcome {
   return updateBlock(doc, blockId, (b) => {
-    if (b.type !== "sum") return `Block "${blockId}" is a ${b.type}, not a summing junction`;
+    if (b.type !== "sum") return `Block "${blockId}" is ${withArticle(BLOCK_KINDS[b.type].name)}, not a summing junction`;
     if (b.signs.length >= MAX_PORTS) return `A summing junction has at most ${MAX_PORTS} ports`;
     return { ...b, signs: [...b.signs, sign] };
   });
@@ -30,7 +32,7 @@ export function addSumPort(doc: EditorDoc, blockId: string, sign: Sign): Outcome
  */
 export function removeSumPort(doc: EditorDoc, blockId: string, port: number): Outcome {
   const updated = updateBlock(doc, blockId, (b) => {
-    if (b.type !== "sum") return `Block "${blockId}" is a ${b.type}, not a summing junction`;
+    if (b.type !== "sum") return `Block "${blockId}" is ${withArticle(BLOCK_KINDS[b.type].name)}, not a summing junction`;
     if (port < 0 || port >= b.signs.length) return `Summing junction "${blockId}" has no port ${port}`;
     if (b.signs.length === 1) return `Summing junction "${blockId}" keeps at least one port; delete the block instead`;
     return { ...b, signs: b.signs.filter((_, i) => i !== port) };

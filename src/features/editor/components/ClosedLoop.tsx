@@ -2,6 +2,7 @@ import type { LiveAnalysis, LiveResult } from "@/features/editor/hooks/useLiveDi
 import { LargeTex } from "@/features/editor/components/LargeTex";
 import { transferText } from "@/features/editor/lib/resultText";
 import { resultView } from "@/features/editor/lib/resultView";
+import { counted } from "@shared/text/words";
 
 /**
  * A saved version's closed-loop transfer function of the default pair, typeset as the editor shows it, with its
@@ -27,7 +28,7 @@ export function ClosedLoop({ label, title = label, live, analysis }: { label: st
           </output>
         </>
       ) : (
-        <p className="text-sm font-medium text-fault">No result: {problems.filter((p) => p.severity === "error").length} problem(s), e.g. {problems[0]?.message ?? "no input–output pair"}</p>
+        <p className="text-sm font-medium text-fault">No result: {counted(problems.filter((p) => p.severity === "error").length, "problem")}, e.g. {problems[0]?.message ?? "no input–output pair"}</p>
       )}
       {analysis.problems.length > 0 && !analysis.result && <p className="mt-1 text-xs text-ink-soft">No analysis: {analysis.problems[0].message}</p>}
     </section>

@@ -1,5 +1,6 @@
 import { lazy, Suspense, useCallback, useMemo, useRef, useState, type ReactNode } from "react";
 import type { CommentPin, PinnedThread } from "@shared/api/comments";
+import { counted } from "@shared/text/words";
 import type { DiagramDetail } from "@shared/api/diagrams";
 import type { Problem } from "@shared/diagram/problems";
 import { Panel } from "@/components/Panel";
@@ -222,7 +223,7 @@ export function EditorSession(props: Props) {
       {flawed !== null && (
         <strong className="font-medium text-fault">
           {" "}
-          · v{base} was saved with {flawed} problem{flawed === 1 ? "" : "s"}
+          · v{base} was saved with {counted(flawed, "problem")}
         </strong>
       )}
     </>

@@ -8,6 +8,8 @@ import { nodeBox } from "@/features/editor/geometry/nodeBox";
 import { arrowHead, midpointAlong, roundedPath, wireRoute, type Box } from "@shared/geometry/wireRoute";
 import { strokeColor } from "@/features/editor/components/nodes/nodeStyle";
 import { BreakMark, wireLook } from "@/features/editor/components/SignalEdgeView";
+import { useEditorActions } from "@/features/editor/components/EditorContext";
+import { counted } from "@shared/text/words";
 import { portOfHandle, type FlowNode, type SignalEdge } from "@/features/editor/lib/flowModel";
 
 export interface OverviewPick {
@@ -116,6 +118,7 @@ const WireBundle = memo(function WireBundle({ look, wide, routes, heads, count }
  * selected here; moving and wiring happen once zoomed in.
  */
 export const OverviewLayer = memo(function OverviewLayer({ nodes, edges, onPick, onOpen }: Props) {
+  const { readOnly } = useEditorActions();
   const named = useStore(legibleIds);
   const boxes = useMemo(() => new Map(nodes.map((n) => [n.id, nodeBox(n)])), [nodes]);
   const blocks = useMemo(() => new Map(nodes.map((n) => [n.id, n.data.block])), [nodes]);
@@ -153,7 +156,7 @@ export const OverviewLayer = memo(function OverviewLayer({ nodes, edges, onPick,
     <ViewportPortal>
       <svg
         role="group"
-        aria-label={`Overview of ${nodes.length} blocks: select a block here, double-click it or zoom in to edit`}
+        aria-label={`Overview of ${counted(nodes.length, "block")}: select a block here, double-click it or zoom in to ${readOnly ? "see it" : "edit"}`}
         className="pointer-events-none absolute overflow-visible"
         style={{ left: frame.x, top: frame.y }}
         width={frame.width}

@@ -1,4 +1,6 @@
+import { BLOCK_KINDS } from "@shared/diagram/blockKinds";
 import type { BlockType } from "@shared/diagram/schema";
+import { withArticle } from "@shared/text/words";
 import { BLOCK_TYPES, BLOCK_VIEWS } from "@/features/editor/blockKinds";
 
 export type ShortcutAction =
@@ -47,8 +49,6 @@ export interface Shortcut {
 const mod = (e: KeyLike) => e.ctrlKey || e.metaKey;
 const plain = (e: KeyLike) => !mod(e) && !e.altKey;
 const key = (e: KeyLike, k: string) => e.key.toLowerCase() === k;
-/** "an input", "a gain": the name as the help dialog lists it. */
-const article = (name: string) => `${/^[aeiou]/i.test(name) ? "an" : "a"} ${name.toLowerCase()}`;
 
 /** Every keyboard shortcut of the editor: the handler and the help dialog both read this one table. */
 export const SHORTCUTS: Shortcut[] = [
@@ -67,7 +67,7 @@ export const SHORTCUTS: Shortcut[] = [
   { action: "nudgeDown", keys: "↓", description: "Move the selection down (Shift: further)", edits: true, test: (e) => !mod(e) && e.key === "ArrowDown" },
   ...BLOCK_TYPES.map((type): Shortcut => {
     const k = BLOCK_VIEWS[type].rail.key;
-    return { action: `add:${type}`, keys: k, description: `Add ${article(BLOCK_VIEWS[type].name)}`, edits: true, test: (e) => plain(e) && e.key === k };
+    return { action: `add:${type}`, keys: k, description: `Add ${withArticle(BLOCK_KINDS[type].name)}`, edits: true, test: (e) => plain(e) && e.key === k };
   }),
   { action: "editProperties", keys: "Enter", description: "Edit the selected block's properties", edits: false, test: (e) => plain(e) && e.key === "Enter" },
   { action: "layout", keys: "L", description: "Lay the diagram out automatically", edits: true, test: (e) => plain(e) && key(e, "l") },

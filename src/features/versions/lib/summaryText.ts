@@ -1,4 +1,5 @@
 import type { VersionListItem } from "@shared/api/versions";
+import { counted } from "@shared/text/words";
 
 const VERDICT = { stable: "stable", marginal: "marginally stable", unstable: "unstable" } as const;
 const MINUS = "\u2212";
@@ -9,7 +10,7 @@ const oneDecimal = (x: number) => x.toFixed(1).replace("-", MINUS);
  * `problem` marks the text to be shown as a fault. Example: "r → y: order 2, stable, PM 51.8°, overshoot 16.3 %".
  */
 export function summaryText(v: Pick<VersionListItem, "ok" | "problemCount" | "summary">): { text: string; problem: boolean } {
-  if (v.ok === false) return { text: `Saved with ${v.problemCount} problem${v.problemCount === 1 ? "" : "s"}`, problem: true };
+  if (v.ok === false) return { text: `Saved with ${counted(v.problemCount, "problem")}`, problem: true };
   if (v.ok === null) return { text: "Not checked", problem: false };
   const s = v.summary;
   if (!s) return { text: "Checked; no input–output pair to summarise", problem: false };

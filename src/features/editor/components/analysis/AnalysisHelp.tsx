@@ -1,4 +1,5 @@
 import { useId, type ReactNode } from "react";
+import { ERROR_CONSTANTS } from "@shared/analysis/steadyState";
 import { Tex } from "@/features/editor/components/Tex";
 
 /** One defined term: its name and what the analysis means by it. */
@@ -101,7 +102,16 @@ const TERMS: { term: string; body: ReactNode }[] = [
       <>
         <Tex latex="\lim_{t\to\infty} y(t) = \lim_{s\to 0} sY(s)" /> holds only when every pole of sY(s) lies in the open left
         half-plane; otherwise the panel does not apply it and says why. Steady-state errors are those of e = (pair input) − (pair
-        output); system type and the error constants Kp, Kv, Ka come from the loop gain at the break.
+        output); system type and the position, velocity and acceleration error constants come from the loop gain at the break.
+        Each is written with a word as subscript, so that none is read as a parameter of the diagram (a parameter named Kp or Kv
+        is a different thing):{" "}
+        {ERROR_CONSTANTS.map((c, i) => (
+          <span key={c.key}>
+            {i > 0 && (i === ERROR_CONSTANTS.length - 1 ? " and " : ", ")}
+            the {c.name} <Tex latex={`${c.latex} = ${c.limitLatex}`} />
+          </span>
+        ))}
+        .
       </>
     ),
   },

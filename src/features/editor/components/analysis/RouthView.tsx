@@ -4,6 +4,7 @@ import type { RouthArray } from "@shared/analysis/routh";
 import type { Endpoint, StableSet } from "@shared/analysis/stableSet";
 import { Tex } from "@/features/editor/components/Tex";
 import { firstColumnSign, formatExact, verdictWord } from "@/features/editor/lib/analysisFormat";
+import { counted } from "@shared/text/words";
 
 type Source = "pair" | "diagram";
 
@@ -119,9 +120,9 @@ function RouthTable({ routh }: { routh: RouthArray }) {
           })}
         </tbody>
       </table>
-      {signs && (
+      {signs && routh.signChanges !== null && (
         <p className="pt-1 text-xs text-ink-soft">
-          {routh.signChanges} sign change{routh.signChanges === 1 ? "" : "s"} down the first column{routh.special.some((s) => s.kind === "zero-first-element") ? " (signs read as ε → 0+)" : ""}.
+          {counted(routh.signChanges, "sign change")} down the first column{routh.special.some((s) => s.kind === "zero-first-element") ? " (signs read as ε → 0+)" : ""}.
         </p>
       )}
     </div>

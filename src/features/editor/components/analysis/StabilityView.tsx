@@ -4,6 +4,7 @@ import type { RootInfo } from "@shared/analysis/poles";
 import type { Verdict } from "@shared/analysis/stability";
 import { SPlanePlot, type SPlaneMarker } from "@/features/editor/components/analysis/SPlanePlot";
 import { formatComplex, formatNumber, formatQuantity, rootRows, verdictWord } from "@/features/editor/lib/analysisFormat";
+import { counted, plural } from "@shared/text/words";
 
 const TONE: Record<Verdict, { box: string; heading: string; mark: string }> = {
   stable: { box: "border-steady bg-steady-tint", heading: "text-steady", mark: "✓" },
@@ -14,7 +15,6 @@ const TONE: Record<Verdict, { box: string; heading: string; mark: string }> = {
 const TH = "border-b border-rule-strong px-2 py-1 text-left font-medium text-ink-soft";
 const TD = "border-b border-rule px-2 py-1 font-mono";
 
-const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? "" : "s"}`;
 
 const sameRoot = (a: RootInfo, b: RootInfo) => a.re === b.re && Math.abs(a.im) === Math.abs(b.im);
 
@@ -37,7 +37,7 @@ export function StabilityView({ analysis }: { analysis: Analysis }) {
         <h4 id={mapId} className="text-sm font-semibold">Pole-zero map</h4>
         <SPlanePlot
           label="Pole-zero map of T(s) in the s-plane"
-          description={`${plural(count(poles), "pole")} (×) and ${plural(count(zeros), "finite zero")} (○); the numbers beside a marker are multiplicities. The tables below list the same values.`}
+          description={`${counted(count(poles), "pole")} (×) and ${counted(count(zeros), "finite zero")} (○); the numbers beside a marker are multiplicities. The tables below list the same values.`}
           markers={markers}
           legend={[
             { symbol: "pole", text: "Pole" },
@@ -102,7 +102,7 @@ function HiddenModes({ modes }: { modes: HiddenMode[] }) {
             className={`rounded border px-3 py-1.5 ${m.unstable ? "border-fault/60 bg-fault-tint text-fault" : "border-rule bg-paper-raised"}`}
           >
             <span className="font-semibold">{m.unstable ? "Unstable hidden mode" : "Stable hidden mode"}</span>{" "}
-            <span className="font-mono">{m.factor}</span> (root{m.roots.length === 1 ? "" : "s"} {uniqueRoots(m.roots)}):{" "}
+            <span className="font-mono">{m.factor}</span> ({plural(m.roots.length, "root")} {uniqueRoots(m.roots)}):{" "}
             {m.source === "reduction" ? "cancelled from T(s) for every parameter value." : "cancels from T(s) only at these parameter values."}
             {m.unstable && " It does not appear in T(s), but it still grows inside the loop."}
           </li>

@@ -1,5 +1,6 @@
 import type { Analysis } from "@shared/analysis/analyze";
-import type { Quantity } from "@shared/analysis/steadyState";
+import { ERROR_CONSTANTS, type Quantity } from "@shared/analysis/steadyState";
+import { capital } from "@shared/text/words";
 import { Tex } from "@/features/editor/components/Tex";
 import { formatQuantity } from "@/features/editor/lib/analysisFormat";
 
@@ -75,16 +76,17 @@ function LoopConstants({ analysis }: { analysis: Analysis }) {
       <section aria-label="System type and error constants">
         <h4 className="font-semibold">System type and error constants</h4>
         <p className="text-ink-soft">
-          There is no loop gain for this pair (no feedback loop was broken), so the system type and the error constants Kp, Kv and Ka do not apply.
+          There is no loop gain for this pair (no feedback loop was broken), so the system type and the position, velocity and acceleration error constants do not apply.
         </p>
       </section>
     );
   }
   const fromConstants = ss.errorsFromConstants;
+  const [pos, vel, acc] = ERROR_CONSTANTS;
   const rows = [
-    { name: "Kp", what: "position", k: ss.constants.Kp, error: fromConstants?.step, formula: "1/(1 + Kp)" },
-    { name: "Kv", what: "velocity", k: ss.constants.Kv, error: fromConstants?.ramp, formula: "1/Kv" },
-    { name: "Ka", what: "acceleration", k: ss.constants.Ka, error: fromConstants?.parabola, formula: "1/Ka" },
+    { constant: pos, k: ss.constants.Kp, error: fromConstants?.step, formula: `\\frac{1}{1 + ${pos.latex}}` },
+    { constant: vel, k: ss.constants.Kv, error: fromConstants?.ramp, formula: `\\frac{1}{${vel.latex}}` },
+    { constant: acc, k: ss.constants.Ka, error: fromConstants?.parabola, formula: `\\frac{1}{${acc.latex}}` },
   ];
   return (
     <section aria-label="System type and error constants" className="flex flex-col gap-2">
@@ -104,22 +106,22 @@ function LoopConstants({ analysis }: { analysis: Analysis }) {
           <caption className="pb-1 text-left font-semibold">Error constants and the errors they give</caption>
           <thead>
             <tr>
-              <th scope="col" className={TH}>Constant</th>
+              <th scope="col" className={TH}>Error constant</th>
               <th scope="col" className={TH}>Value</th>
               <th scope="col" className={TH}>Unity-feedback error</th>
             </tr>
           </thead>
           <tbody>
             {rows.map((r) => (
-              <tr key={r.name}>
+              <tr key={r.constant.key}>
                 <th scope="row" className={`${TD} text-left font-normal`}>
-                  <span className="font-mono">{r.name}</span> <span className="text-xs text-ink-soft">({r.what})</span>
+                  {capital(r.constant.name)} <Tex latex={r.constant.latex} />
                 </th>
                 <td className={TD}>
                   <Value q={r.k} />
                 </td>
                 <td className={TD}>
-                  <span className="block text-xs text-ink-soft">{r.formula}</span>
+                  <span className="block text-xs text-ink-soft"><Tex latex={r.formula} /></span>
                   {r.error && <Value q={r.error} />}
                 </td>
               </tr>

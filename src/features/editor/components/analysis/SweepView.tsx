@@ -7,6 +7,7 @@ import { SPlanePlot, type SPlaneMarker } from "@/features/editor/components/anal
 import { niceStep } from "@shared/analysis/axisSteps";
 import { formatComplex, formatNumber, rootRows } from "@/features/editor/lib/analysisFormat";
 import type { SweepData } from "@shared/analysis/answer";
+import { counted } from "@shared/text/words";
 
 /** Series colours; the legend below the chart uses the same classes (recharts' legend cannot read currentColor). */
 const SERIES = ["text-signal", "text-trace", "text-steady", "text-fault", "text-ink-soft"];
@@ -68,7 +69,7 @@ function Locus({ locus, analysis, current, range }: { locus: RootLocus; analysis
       <h4 id={headingId} className="text-sm font-semibold">Root locus of the closed-loop poles</h4>
       <SPlanePlot
         label={`Root locus: closed-loop poles as ${p} varies from ${formatNumber(range[0])} to ${formatNumber(range[1])}`}
-        description={`${locus.branches.length} branches, one line each; the table below gives where each starts and ends.`}
+        description={`${counted(locus.branches.length, "branch", "branches")}, one line each; the table below gives where each starts and ends.`}
         markers={markers}
         paths={locus.branches}
         legend={[

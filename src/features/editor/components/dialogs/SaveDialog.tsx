@@ -3,6 +3,7 @@ import type { Problem } from "@shared/diagram/problems";
 import { Button } from "@/components/Button";
 import { FormError, TextField } from "@/components/Field";
 import { Dialog } from "@/features/editor/components/dialogs/Dialog";
+import { counted, plural } from "@shared/text/words";
 
 interface Props {
   nextNumber: number;
@@ -40,7 +41,7 @@ export function SaveDialog({ nextNumber, pending, error, problems, onSave, onClo
         {problems.length > 0 && (
           <div role="alert" className="rounded border border-fault/40 bg-fault-tint px-3 py-2 text-sm">
             <p className="font-medium text-fault">
-              This document has {problems.length} problem{problems.length === 1 ? "" : "s"}; the version will be stored with {problems.length === 1 ? "it" : "them"} and
+              This document has {counted(problems.length, "problem")}; the version will be stored with {plural(problems.length, "it", "them")} and
               its result marked as failed.
             </p>
             <ul className="mt-1 list-disc pl-5">

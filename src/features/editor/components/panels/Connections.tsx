@@ -41,7 +41,7 @@ export function Connections({ doc, blockId, hasOutput }: { doc: EditorDoc; block
       <ul className="flex flex-col gap-1" aria-label="Wires out of this block">
         {outgoing.map((w) => wireRow(w.id, `${w.id}: to ${w.to}${signOf(w.to, w.port)}`))}
       </ul>
-      {incoming.length + outgoing.length === 0 && <p className="text-xs text-ink-soft">No wires yet.</p>}
+      {incoming.length + outgoing.length === 0 && <p className="text-xs text-ink-soft">{readOnly ? "No wires." : "No wires yet."}</p>}
       {options.length > 0 && (
         <div className="flex items-end gap-2">
           <div className="flex flex-1 flex-col gap-1">

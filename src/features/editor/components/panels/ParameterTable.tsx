@@ -25,7 +25,9 @@ export function ParameterTable({ doc }: { doc: EditorDoc }) {
   return (
     <div className="flex flex-col gap-3">
       {names.length === 0 ? (
-        <p className="text-sm text-ink-soft">No parameters yet. Expressions may only use the names declared here.</p>
+        <p className="text-sm text-ink-soft">
+          {readOnly ? "This diagram has no parameters." : "No parameters yet. Expressions may only use the names declared here."}
+        </p>
       ) : (
         <div className="overflow-x-auto">
           <table className="w-full text-sm">

@@ -12,6 +12,7 @@ import { BLOCK_KINDS, hasExpression } from "@shared/diagram/blockKinds";
 import { BLOCK_VIEWS } from "@/features/editor/blockKinds";
 import { wireAriaLabel } from "@/features/editor/lib/flowModel";
 import type { BreakWire } from "@shared/analysis/answer";
+import { counted } from "@shared/text/words";
 
 interface Props {
   doc: EditorDoc;
@@ -31,7 +32,9 @@ export function PropertiesPanel({ doc, selection, firstFieldRef, analysisBreak }
   if (blocks.length === 0 && wires.length === 0) {
     return (
       <p className="text-sm text-ink-soft">
-        Select a block or a wire to see and change it. {readOnly ? "" : "Add blocks from the rail; drag from a block's right-hand port to another block's input to wire them."}
+        {readOnly
+          ? "Select a block or a wire to see its details."
+          : "Select a block or a wire to see and change it. Add blocks from the rail; drag from a block's right-hand port to another block's input to wire them."}
       </p>
     );
   }
@@ -39,7 +42,7 @@ export function PropertiesPanel({ doc, selection, firstFieldRef, analysisBreak }
     return (
       <div className="flex flex-col gap-3 text-sm">
         <p>
-          {blocks.length} block{blocks.length === 1 ? "" : "s"} and {wires.length} wire{wires.length === 1 ? "" : "s"} selected.
+          {counted(blocks.length, "block")} and {counted(wires.length, "wire")} selected.
         </p>
         {!readOnly && (
           <div className="flex gap-2">

@@ -2,11 +2,13 @@ import { useId } from "react";
 import { toast } from "sonner";
 import { Button } from "@/components/Button";
 import type { Analysis } from "@shared/analysis/analyze";
+import { useEditorActions } from "@/features/editor/components/EditorContext";
 import { LargeTex } from "@/features/editor/components/LargeTex";
 import { ClosedLoopAtValues } from "@/features/editor/components/panels/ClosedLoopAtValues";
 import { pairKey, pairName, type ResultView } from "@/features/editor/lib/resultView";
 import { resultLatex, resultPlainText, transferText } from "@/features/editor/lib/resultText";
 import type { LiveResult } from "@/features/editor/hooks/useLiveDiagram";
+import { plural } from "@shared/text/words";
 
 interface Props {
   live: LiveResult;
@@ -27,6 +29,7 @@ const copy = (text: string, what: string) =>
 /** The closed-loop transfer function of the chosen pair, its characteristic polynomial and cancelled modes. */
 export function ResultsPanel({ live, view, stale, onPair, atValues = null }: Props) {
   const pairId = useId();
+  const { readOnly } = useEditorActions();
   const { result, transfer, transfers } = view;
   const status = live.crash
     ? "The reducer stopped unexpectedly."
@@ -41,7 +44,7 @@ export function ResultsPanel({ live, view, stale, onPair, atValues = null }: Pro
       {live.crash && <p role="alert" className="text-sm text-fault">{live.crash}</p>}
       {!result && !live.crash && (
         <p className="text-sm text-ink-soft">
-          {live.outcome ? "No result while the diagram has errors: fix the problems listed." : "Working out the result…"}
+          {live.outcome ? (readOnly ? "No result: the diagram has the errors listed under Problems." : "No result while the diagram has errors: fix the problems listed.") : "Working out the result…"}
         </p>
       )}
       {result && transfer && (
@@ -110,7 +113,7 @@ function Cancellations({ transfer }: { transfer: ResultView["transfer"] & object
             {c.unstable ? "Hidden unstable mode" : "Cancelled stable mode"}: <span className="font-mono">({c.factor})</span>
           </p>
           <p className="text-xs">
-            Cancels between numerator and denominator of {transfer.input} → {transfer.output}; root{c.roots.length === 1 ? "" : "s"} at nominal values:{" "}
+            Cancels between numerator and denominator of {transfer.input} → {transfer.output}; {plural(c.roots.length, "root")} at nominal values:{" "}
             <span className="font-mono">{c.roots.map(rootText).join(", ")}</span>.
             {c.unstable && " The transfer function hides it, but the loop is internally unstable."}
           </p>

@@ -3,6 +3,7 @@ import type { ReductionStep } from "@shared/reduce/result";
 import { Button } from "@/components/Button";
 import { LargeTex } from "@/features/editor/components/LargeTex";
 import { RULE_NAME, StepList } from "@/features/editor/components/panels/StepList";
+import { counted } from "@shared/text/words";
 
 interface Props {
   steps: ReductionStep[];
@@ -30,7 +31,7 @@ export function StepThrough({ steps, current, onChange }: Props) {
           </Button>
         )}
         <span className="text-xs text-ink-soft" aria-live="polite">
-          {current === null ? `${steps.length} step${steps.length === 1 ? "" : "s"}` : `Step ${current + 1} of ${steps.length}`}
+          {current === null ? counted(steps.length, "step") : `Step ${current + 1} of ${steps.length}`}
         </span>
       </div>
       {step && (

@@ -8,6 +8,7 @@ import { RouthView } from "@/features/editor/components/analysis/RouthView";
 import { StabilityView } from "@/features/editor/components/analysis/StabilityView";
 import { SteadyStateView } from "@/features/editor/components/analysis/SteadyStateView";
 import { SweepView } from "@/features/editor/components/analysis/SweepView";
+import { AnalysisHelp } from "@/features/editor/components/analysis/AnalysisHelp";
 import { hiddenUnstableLoop, makeDoc, unityFeedback } from "../../../../support/docBuilder";
 
 
@@ -78,11 +79,35 @@ describe("SteadyStateView", () => {
     expect(t).toMatch(/Unit parabola r\(t\) = t²\/2 ∞/);
   });
 
+  it("a parameter named Kp = 6 beside the error constants: the rows are named in words with word subscripts, never Kp/Kv/Ka (common practice: type-1 loop, infinite position constant)", () => {
+    const withKp = analyzeAt(prepared(unityFeedback("Kp/(s*(s + 2))", { Kp: 6 })));
+    const html = renderToStaticMarkup(<SteadyStateView analysis={withKp} />);
+    const rowHeads = [...html.matchAll(/<th scope="row"[^>]*>(.*?)<\/th>/g)].map((m) => text(m[1]));
+    const constants = rowHeads.filter((h) => h.includes("error constant"));
+    expect(constants.map((h) => h.split(" K")[0])).toEqual(["Position error constant", "Velocity error constant", "Acceleration error constant"]);
+    for (const [h, sub] of constants.map((h, i) => [h, ["pos", "vel", "acc"][i]] as const)) {
+      expect(h).toContain(`K_{\\mathrm{${sub}}}`);
+      expect(h).not.toMatch(/\bK[pva]\b/);
+    }
+    // Kv = lim s·L(s) = 6/2 = 3; the position constant is infinite for a type-1 loop.
+    expect(text(html)).toContain("The velocity error constant K_vel = lim s→0 s·L(s).");
+    expect(text(html)).toContain("The position error constant K_pos is infinite (type 1 loop).");
+  });
+
   it("an unstable pair without a loop: no final value (FVT refused) and no constants (common practice: final value theorem conditions)", () => {
     const t = text(renderToStaticMarkup(<SteadyStateView analysis={analyzeAt(prepared(open("1/(s - 1)")))} />));
     expect(t).toContain("the final value theorem does not apply");
     expect(t).toContain("There is no loop gain for this pair");
     expect(t).not.toMatch(/Final value of the step response\s+</);
+  });
+});
+
+describe("AnalysisHelp", () => {
+  it("the Definitions name the three error constants in words and say why their symbols carry word subscripts", () => {
+    const t = text(renderToStaticMarkup(<AnalysisHelp />));
+    for (const name of ["position error constant", "velocity error constant", "acceleration error constant"]) expect(t).toContain(`the ${name}`);
+    expect(t).toContain("so that none is read as a parameter of the diagram");
+    expect(t).toContain("K_{\\mathrm{acc}} = \\lim_{s\\to 0} s^2 L(s)");
   });
 });
 
