@@ -42,6 +42,16 @@ describe("saving versions", () => {
     expect(stored.body.version.result).toEqual(checked);
   });
 
+  it("gives the parameters back in the order they were declared (common practice: a table keeps its author's order)", async () => {
+    const ordered = { ...servo, parameters: { Kpos: 3, T: 0.5, K: 4, a: 1 } };
+    const id = (await owner.client.post(`/api/teams/${teamId}/diagrams`).send({ title: "Order kept" })).body.diagram.id;
+    await owner.client.post(`/api/diagrams/${id}/versions`).send({ baseVersion: 0, document: ordered }).expect(201);
+    const stored = await owner.client.get(`/api/diagrams/${id}/versions/1`).expect(200);
+    expect(Object.keys(stored.body.version.document.parameters)).toEqual(["Kpos", "T", "K", "a"]);
+    const page = await owner.client.get(`/api/diagrams/${id}`).expect(200);
+    expect(Object.keys(page.body.latestVersion.document.parameters)).toEqual(["Kpos", "T", "K", "a"]);
+  });
+
   it("answers a stale base version with 409 and the version that won, overwriting nothing", async () => {
     const base = (await owner.client.get(`/api/diagrams/${diagramId}`)).body.latestVersion.number as number;
     const winner = await owner.client.post(`/api/diagrams/${diagramId}/versions`).send({ baseVersion: base, message: "teammate", document: servo });

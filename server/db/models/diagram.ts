@@ -41,7 +41,7 @@ export function initDiagramModels(sequelize: Sequelize): void {
       id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
       diagramId: { type: DataTypes.UUID, allowNull: false },
       number: { type: DataTypes.INTEGER, allowNull: false },
-      document: { type: DataTypes.JSONB, allowNull: false },
+      document: { type: DataTypes.JSON, allowNull: false }, // JSON keeps the key order the author wrote
       result: { type: DataTypes.JSONB, allowNull: true },
       message: { type: DataTypes.TEXT, allowNull: false, defaultValue: "" },
       createdBy: { type: DataTypes.TEXT, allowNull: false },

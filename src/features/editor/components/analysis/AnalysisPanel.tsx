@@ -62,7 +62,7 @@ export function AnalysisPanel({ live, settings, onSettings, onPickProblem }: Pro
       )}
       <div className="grid gap-4 lg:grid-cols-[18rem_minmax(0,1fr)]">
         <section aria-label="Parameter sliders" className="flex flex-col gap-2">
-          <h3 className="text-sm font-semibold">Parameters</h3>
+          <h3 className="text-sm font-semibold">Sliders</h3>
           <ParameterSliders
             parameters={live.parameters}
             values={settings.values}
