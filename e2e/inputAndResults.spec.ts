@@ -33,3 +33,33 @@ test("the closed loop shows at its nominal values beside the symbolic one, and a
   await expect(problems).toContainText("Unknown name `Kx`");
   await expect(problems).toContainText("Syntax error");
 });
+
+test("the wheel over the canvas scrolls the page; Ctrl + wheel zooms the canvas (common practice for a canvas inside a page)", async ({ page }) => {
+  test.setTimeout(120_000);
+  await page.setViewportSize({ width: 1440, height: 900 });
+  await signUp(page, "Willa Wheel", uniqueEmail("wheel"));
+  const teamId = await createTeam(page, `Winder ${Date.now()}`);
+  const id = await seedDiagram(page, teamId, unityLoop("Winder tension loop", "2/(s + 1)"), "First");
+  await page.goto(`/diagrams/${id}`);
+  const canvas = page.getByRole("application", { name: "Diagram canvas" });
+  await expect(canvas).toBeVisible({ timeout: 60_000 });
+  const viewport = () => page.locator(".react-flow__viewport").getAttribute("style");
+  await expect.poll(async () => (await viewport()) ?? "").toContain("scale(");
+  await page.waitForTimeout(500); // the opening fit-view animation
+  const before = await viewport();
+  const box = (await canvas.boundingBox())!;
+  await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
+  await page.mouse.wheel(0, 150);
+  await expect.poll(() => page.evaluate(() => window.scrollY)).toBeGreaterThan(0);
+  expect(await viewport()).toBe(before);
+  const scrolled = await page.evaluate(() => window.scrollY);
+  // The page moved under the pointer: point at the canvas again.
+  const moved = (await canvas.boundingBox())!;
+  const top = Math.max(moved.y, 0);
+  await page.mouse.move(moved.x + moved.width / 2, (top + moved.y + moved.height) / 2);
+  await page.keyboard.down("Control");
+  await page.mouse.wheel(0, -200);
+  await page.keyboard.up("Control");
+  await expect.poll(viewport).not.toBe(before);
+  expect(await page.evaluate(() => window.scrollY)).toBe(scrolled);
+});

@@ -134,6 +134,8 @@ export function DiagramCanvas({ nodes, edges, onNodesChange, onEdgesChange, read
           fitViewOptions={WHOLE_DIAGRAM}
           onlyRenderVisibleElements={large}
           connectionRadius={24}
+          // The canvas sits in a longer page: the wheel scrolls the page, Ctrl + wheel (or a pinch) zooms the canvas.
+          preventScrolling={false}
           aria-label="Diagram canvas"
           className="bg-paper"
         >
