@@ -1,5 +1,7 @@
 import type { Block } from "@shared/diagram/schema";
+import { boundsOf, boxOf, fallbackPosition } from "@shared/geometry/blockBox";
 import { BLOCK_VIEWS } from "@/features/editor/blockKinds";
+import { GRID } from "@/features/editor/commands/blocks";
 import { blockIds, idSource, wireIds } from "@/features/editor/commands/ids";
 import { done, refuse, type EditorDoc, type EditorWire, type Outcome, type Point, type Selection } from "@/features/editor/commands/types";
 
@@ -10,7 +12,15 @@ export interface Fragment {
   layout: Record<string, Point>;
 }
 
-export const PASTE_OFFSET: Point = { x: 32, y: 32 };
+/**
+ * How far the n-th paste of a fragment lands from the original: one grid step right and the fragment's own
+ * height plus two grid steps down for each paste, so no copy covers the blocks it was copied from.
+ */
+export function pasteOffset(fragment: Fragment, n: number): Point {
+  const box = boundsOf(fragment.blocks.map((b) => boxOf(b, fragment.layout[b.id] ?? { x: 0, y: 0 }, undefined)));
+  const height = box?.height ?? 0;
+  return { x: n * GRID, y: n * (height + 2 * GRID) };
+}
 
 /** Every block and wire of the document. */
 export const selectAll = (doc: EditorDoc): Selection => ({ blocks: doc.blocks.map((b) => b.id), wires: doc.wires.map((w) => w.id) });
@@ -20,7 +30,8 @@ export function copySelection(doc: EditorDoc, sel: Selection): Fragment {
   const ids = new Set(sel.blocks);
   const blocks = doc.blocks.filter((b) => ids.has(b.id));
   const wires = doc.wires.filter((w) => ids.has(w.from) && ids.has(w.to));
-  const layout = Object.fromEntries(blocks.flatMap((b) => (doc.layout?.[b.id] ? [[b.id, doc.layout[b.id]]] : [])));
+  // Where each block is drawn: its layout entry, or the fallback place the canvas gives a block without one.
+  const layout = Object.fromEntries(blocks.map((b) => [b.id, doc.layout?.[b.id] ?? fallbackPosition(doc.blocks.indexOf(b))]));
   return { blocks, wires, layout };
 }
 
@@ -39,7 +50,7 @@ export function deleteSelection(doc: EditorDoc, sel: Selection): Outcome {
  * Inserts a fragment with fresh block and wire ids, shifted by `offset`, and selects what was pasted.
  * Blocks keep their type's id prefix; wires are re-pointed to the new ids.
  */
-export function paste(doc: EditorDoc, fragment: Fragment, offset: Point = PASTE_OFFSET): Outcome {
+export function paste(doc: EditorDoc, fragment: Fragment, offset: Point = pasteOffset(fragment, 1)): Outcome {
   if (fragment.blocks.length === 0) return refuse("The clipboard holds no blocks: copy a selection first");
   const freshBlock = idSource(blockIds(doc));
   const freshWire = idSource(wireIds(doc));

@@ -73,6 +73,9 @@ export function DiagramCanvas({ nodes, edges, onNodesChange, onEdgesChange, read
   // Opens at about the fitted view (the window bounds the canvas from above), so a large diagram is drawn once
   // in its far form rather than typeset first and redrawn.
   const [opening] = useState(() => openingViewport(nodes, { width: window.innerWidth, height: window.innerHeight }));
+  // Fit the view to the diagram it opens with; an empty sheet keeps its view, or the first block dropped on it
+  // would be fitted into the middle instead of staying where it was dropped.
+  const [fitOnOpen] = useState(() => nodes.length > 0);
 
   const { live, far, large, overviewOnly } = useLiveCanvas(nodes, edges, opening);
   const onPick = useOverviewPick(nodes, edges, onNodesChange, onEdgesChange);
@@ -130,7 +133,7 @@ export function DiagramCanvas({ nodes, edges, onNodesChange, onEdgesChange, read
           minZoom={MIN_ZOOM}
           maxZoom={2.5}
           defaultViewport={opening}
-          fitView={!large}
+          fitView={!large && fitOnOpen}
           fitViewOptions={WHOLE_DIAGRAM}
           onlyRenderVisibleElements={large}
           connectionRadius={24}

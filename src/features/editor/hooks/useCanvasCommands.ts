@@ -3,7 +3,7 @@ import { useReactFlow } from "@xyflow/react";
 import { toast } from "sonner";
 import type { BlockType } from "@shared/diagram/schema";
 import { addBlock, GRID, moveBlocks } from "@/features/editor/commands/blocks";
-import { copySelection, deleteSelection, duplicate, paste, PASTE_OFFSET, selectAll, type Fragment } from "@/features/editor/commands/selection";
+import { copySelection, deleteSelection, duplicate, paste, pasteOffset, selectAll, type Fragment } from "@/features/editor/commands/selection";
 import { connect, type ConnectArgs } from "@/features/editor/commands/wires";
 import type { EditorDoc, Point, Selection } from "@/features/editor/commands/types";
 import type { Act } from "@/features/editor/components/EditorContext";
@@ -13,7 +13,8 @@ import { useFitBox, WHOLE_DIAGRAM } from "@/features/editor/hooks/useFitBox";
 import { useShortcuts } from "@/features/editor/hooks/useShortcuts";
 import { autoLayout } from "@/features/editor/lib/autoLayout";
 import { BLOCK_TYPES, BLOCK_VIEWS } from "@/features/editor/blockKinds";
-import { fallbackPosition } from "@shared/geometry/blockBox";
+import { estimatedSize, fallbackPosition } from "@shared/geometry/blockBox";
+import { freeSpot } from "@/features/editor/geometry/freeSpot";
 import type { FlowNode } from "@/features/editor/lib/flowModel";
 import { errorMessage } from "@/lib/apiClient";
 
@@ -46,20 +47,23 @@ export function useCanvasCommands(a: Args) {
 
   const positionOf = (id: string) => doc.layout?.[id] ?? fallbackPosition(doc.blocks.findIndex((b) => b.id === id));
 
-  /** Right of the one selected block (so keyboard drawing flows left to right), else the middle of the view. */
-  const placeFor = (): Point => {
+  /**
+   * Right of the one selected block (so keyboard drawing flows left to right), else the middle of the view; then
+   * down to the first place where the new block covers no other.
+   */
+  const placeFor = (type: BlockType): Point => {
+    let at: Point;
     if (selection.blocks.length === 1) {
       const p = positionOf(selection.blocks[0]);
       const width = a.measured.get(selection.blocks[0])?.width ?? 64;
-      return { x: p.x + width + 5 * GRID, y: p.y };
+      at = { x: p.x + width + 5 * GRID, y: p.y };
+    } else {
+      const rect = a.canvasBox.current?.getBoundingClientRect();
+      const centre = rect ? flow.screenToFlowPosition({ x: rect.left + rect.width / 2, y: rect.top + rect.height / 2 }) : { x: 0, y: 0 };
+      at = { x: centre.x - 40, y: centre.y - 24 };
     }
-    const rect = a.canvasBox.current?.getBoundingClientRect();
-    const centre = rect ? flow.screenToFlowPosition({ x: rect.left + rect.width / 2, y: rect.top + rect.height / 2 }) : { x: 0, y: 0 };
-    // Step aside from blocks already there, so repeated clicks do not stack blocks on one spot.
-    const at = { x: centre.x - 40, y: centre.y - 24 };
-    const taken = doc.blocks.map((b) => positionOf(b.id));
-    while (taken.some((p) => Math.abs(p.x - at.x) < 48 && Math.abs(p.y - at.y) < 40)) at.y += 4 * GRID;
-    return at;
+    const size = estimatedSize(BLOCK_VIEWS[type].create("new"));
+    return freeSpot(at, size, a.nodes.map(nodeBox), GRID, 2 * GRID);
   };
 
   /** Pans (never zooms) just far enough that a block placed off-screen comes into view. */
@@ -74,7 +78,7 @@ export function useCanvasCommands(a: Args) {
     const v = flow.getViewport();
     void flow.setViewport({ x: v.x + dx, y: v.y + dy, zoom: v.zoom }, { duration: 200 });
   };
-  const add = (type: BlockType, at: Point = placeFor()) => {
+  const add = (type: BlockType, at: Point = placeFor(type)) => {
     const added = act(`Add ${BLOCK_VIEWS[type].name.toLowerCase()}`, (d) => addBlock(d, type, at));
     if (added) reveal(at);
     return added;
@@ -97,7 +101,9 @@ export function useCanvasCommands(a: Args) {
     setLayingOut(true);
     try {
       const positions = await autoLayout(doc, a.measured);
-      if (act("Auto layout", (d) => moveBlocks(d, positions))) window.requestAnimationFrame(fit);
+      // Fit to where the blocks go, not where the nodes of this render still stand.
+      const placed = a.nodes.map((n) => nodeBox({ ...n, position: positions[n.id] ?? n.position }));
+      if (act("Auto layout", (d) => moveBlocks(d, positions))) window.requestAnimationFrame(() => fitBox(boundsOf(placed), { ...WHOLE_DIAGRAM, duration: 200 }));
     } catch (e) {
       toast.error(`Auto layout failed: ${errorMessage(e)}`);
     } finally {
@@ -122,7 +128,7 @@ export function useCanvasCommands(a: Args) {
         const clip = clipboard.current;
         if (!clip) return void act("Paste", (d) => paste(d, { blocks: [], wires: [], layout: {} }));
         clip.pastes += 1;
-        act("Paste", (d) => paste(d, clip.fragment, { x: PASTE_OFFSET.x * clip.pastes, y: PASTE_OFFSET.y * clip.pastes }));
+        act("Paste", (d) => paste(d, clip.fragment, pasteOffset(clip.fragment, clip.pastes)));
       },
       duplicate: () => act("Duplicate", (d) => duplicate(d, selection)),
       selectAll: () => a.setSelection(selectAll(doc)),

@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { reduceDocument } from "@shared/reduce/reduceDiagram";
 import { validateDiagram } from "@shared/diagram/validate";
-import { copySelection, deleteSelection, duplicate, paste, selectAll } from "@/features/editor/commands/selection";
+import { copySelection, deleteSelection, duplicate, paste, pasteOffset, selectAll } from "@/features/editor/commands/selection";
+import { estimatedSize, fallbackPosition } from "@shared/geometry/blockBox";
 import { withWireIds } from "@/features/editor/commands/document";
 import type { EditorDoc, Outcome } from "@/features/editor/commands/types";
 import { unityLoop } from "../support";
@@ -38,6 +39,22 @@ describe("selection commands", () => {
     expect(newIds).toEqual(["e1", "G1"]);
     expect(pasted.layout?.e1).toEqual({ x: 132, y: 82 });
     expect(pasted.wires.slice(4).map((w) => `${w.from}>${w.to}:${w.port ?? ""}`)).toEqual(["e1>G1:", "G1>e1:1"]);
+  });
+
+  it("pastes a copy clear of its original by default, and each further paste clear of the one before", () => {
+    const doc = { ...unityLoop(), layout: { G: { x: 200, y: 48 } } };
+    const fragment = copySelection(doc, { blocks: ["G"], wires: [] });
+    const once = pasteOffset(fragment, 1);
+    const twice = pasteOffset(fragment, 2);
+    // One block's estimated box is under 80 px tall: the copy moves down by its height plus two grid steps.
+    expect(once.y).toBeGreaterThan(estimatedSize(doc.blocks[2]).height);
+    expect(twice.y).toBe(2 * once.y);
+    expect(ok(paste(doc, fragment)).layout?.G1).toEqual({ x: 200 + once.x, y: 48 + once.y });
+  });
+
+  it("copies a block without a layout entry from where the canvas draws it", () => {
+    const doc = { ...unityLoop(), layout: {} };
+    expect(copySelection(doc, { blocks: ["G"], wires: [] }).layout.G).toEqual(fallbackPosition(2));
   });
 
   it("deleting a block deletes its wires and layout; an empty selection is refused with a reason", () => {
