@@ -65,6 +65,7 @@ const isError = (p: Problem) => p.severity === "error";
  * cancelled modes. Never throws for a valid but unreducible diagram: every failure is a Problem with a code.
  * Improper blocks (deg num > deg den, e.g. a PD controller "K*(s+1)") are reduced like any other; a loop whose
  * return difference vanishes as s → ∞ is refused ("improper-loop") only when all its blocks are proper.
+ * Refused for a wrong pair id or a gain that cannot be formed, it still names the loop problems of the rest.
  * Example: reduceDiagram(parsed).reduction.transfers[0].gain is K·(s + 2)/(s² + …) for the spindle loop.
  */
 export function reduceDiagram(diagram: ParsedDiagram, opts: ReduceOptions = {}): ExactOutcome {

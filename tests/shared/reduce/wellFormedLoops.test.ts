@@ -113,6 +113,14 @@ describe("a loop that cannot be judged is skipped, not guessed", () => {
   });
 });
 
+describe("the work limit", () => {
+  test("loops too large to judge within it stay unjudged; the errors found still stand", () => {
+    const doc = diagram([...SINGULAR, ["h", "transfer", "1/(s+1)"]], SINGULAR_WIRES);
+    const problems = problemsOf(doc, { limits: { maxEdges: -1 } });
+    expect(errors(problems)).toEqual([["unwired-port", "h", undefined]]);
+  });
+});
+
 describe("valid diagrams: exactly today's problems", () => {
   test("a valid singular loop is reported once, with its warnings", () => {
     // g2 hangs off the loop and reaches no output: a warning, and the loop still counted once.
