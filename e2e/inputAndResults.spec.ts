@@ -63,3 +63,36 @@ test("the wheel over the canvas scrolls the page; Ctrl + wheel zooms the canvas 
   await expect.poll(viewport).not.toBe(before);
   expect(await page.evaluate(() => window.scrollY)).toBe(scrolled);
 });
+
+test("the problems panel lists an algebraic loop beside an unconnected block", async ({ page }) => {
+  test.setTimeout(180_000);
+  await signUp(page, "Lotte Loop", uniqueEmail("loops"));
+  const teamId = await createTeam(page, `Winder ${Date.now()}`);
+  // common practice: positive unity feedback around a gain of 1 is singular (e = r + e); h is not yet wired in.
+  const document = {
+    format: "loopwright-diagram",
+    version: 1,
+    title: "Winder tension draft",
+    parameters: {},
+    blocks: [
+      { id: "r", type: "input" },
+      { id: "e", type: "sum", signs: ["+", "+"] },
+      { id: "g", type: "gain", expr: "1" },
+      { id: "y", type: "output" },
+      { id: "h", type: "transfer", expr: "1/(s+1)" },
+    ],
+    wires: [
+      { id: "w1", from: "r", to: "e", port: 0 },
+      { id: "w2", from: "e", to: "g" },
+      { id: "w3", from: "g", to: "y" },
+      { id: "w4", from: "g", to: "e", port: 1 },
+    ],
+    layout: { r: { x: 0, y: 0 }, e: { x: 160, y: 0 }, g: { x: 320, y: 0 }, y: { x: 520, y: 0 }, h: { x: 320, y: 160 } },
+  };
+  const id = await seedDiagram(page, teamId, document, "Draft with a loose block");
+  await page.goto(`/diagrams/${id}`);
+  await expect(page.getByRole("application", { name: "Diagram canvas" })).toBeVisible({ timeout: 60_000 });
+  const problems = page.getByRole("region", { name: /^Problems/ });
+  await expect(problems).toContainText("Algebraic loop through e, g", { timeout: 60_000 });
+  await expect(problems).toContainText('Block "h" (transfer) has no incoming wire');
+});

@@ -12,9 +12,8 @@ import type { AnalysisResult } from "@shared/analysis/schema";
 import { stableSet, type StableSet } from "@shared/analysis/stableSet";
 import { analysisSummary } from "@shared/analysis/summary";
 import { parameterRange, rootLocus, stepOverlay, sweepValues } from "@shared/analysis/sweep";
-import { parseDiagram } from "@shared/diagram/parseDiagram";
 import type { Problem } from "@shared/diagram/problems";
-import { reduceDiagram, type ExactReduction } from "@shared/reduce/reduceDiagram";
+import { reduceDocumentExact, type ExactReduction } from "@shared/reduce/reduceDiagram";
 
 /** Points of the root locus and step responses in the overlay. */
 export const LOCUS_POINTS = 200;
@@ -150,9 +149,7 @@ export type AnalyzeOutcome =
  * "degree-limit", the reducer's codes…). Example: analyzeDocument(json, { break: "w6" }).result.margins.
  */
 export function analyzeDocument(raw: unknown, opts: { input?: string; output?: string; break?: string; values?: Record<string, number>; settlingBand?: number } = {}): AnalyzeOutcome {
-  const parsed = parseDiagram(raw);
-  if (!parsed.ok) return { ok: false, problems: parsed.problems };
-  const reduced = reduceDiagram(parsed.diagram, { input: opts.input, output: opts.output });
+  const reduced = reduceDocumentExact(raw, { input: opts.input, output: opts.output });
   if (!reduced.ok) return reduced;
   const { reduction } = reduced;
   const answer = createAnalyzer()(reduction, {
@@ -165,5 +162,5 @@ export function analyzeDocument(raw: unknown, opts: { input?: string; output?: s
     withSweep: false,
   });
   if (!answer.ok) return { ok: false, problems: answer.problems };
-  return { ok: true, doc: parsed.diagram.doc, analysis: answer.analysis, result: analysisSummary(answer.analysis, reduction.warnings) };
+  return { ok: true, doc: reduction.diagram.doc, analysis: answer.analysis, result: analysisSummary(answer.analysis, reduction.warnings) };
 }

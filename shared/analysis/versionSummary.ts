@@ -5,10 +5,9 @@ import { ratDenominator } from "@shared/algebra/ratfn";
 import { analyzeAt, type Analysis } from "@shared/analysis/analyze";
 import { AnalysisError } from "@shared/analysis/errors";
 import { prepareAnalysis } from "@shared/analysis/prepare";
-import { parseDiagram } from "@shared/diagram/parseDiagram";
 import type { Problem } from "@shared/diagram/problems";
 import { printReduction } from "@shared/reduce/printReduction";
-import { reduceDiagram, type ExactReduction, type ReduceOptions } from "@shared/reduce/reduceDiagram";
+import { reduceDocumentExact, type ExactReduction, type ReduceOptions } from "@shared/reduce/reduceDiagram";
 import type { ReductionResult } from "@shared/reduce/result";
 
 /** Above this closed-loop order only the order is given: the analysis would cost seconds (save check, compare view). */
@@ -81,9 +80,7 @@ export type CheckedDocument =
  * Example: checkDocument(json).pair?.analysis?.loop?.margins.phaseMarginDeg.
  */
 export function checkDocument(raw: unknown, opts: { limits?: ReduceOptions["limits"]; maxOrder?: number } = {}): CheckedDocument {
-  const parsed = parseDiagram(raw);
-  if (!parsed.ok) return { ok: false, problems: parsed.problems };
-  const reduced = reduceDiagram(parsed.diagram, { limits: opts.limits });
+  const reduced = reduceDocumentExact(raw, { limits: opts.limits });
   if (!reduced.ok) return reduced;
   return { ok: true, result: printReduction(reduced.reduction), pair: analyzeDefaultPair(reduced.reduction, opts.maxOrder ?? SUMMARY_MAX_ORDER) };
 }

@@ -13,8 +13,10 @@ export interface ParsedDiagram {
 
 export type ParseOutcome =
   | { ok: true; diagram: ParsedDiagram }
-  /** `doc` is there when the format was right but validation found errors. */
-  | { ok: false; problems: Problem[]; doc?: DiagramDocument };
+  /** The format was wrong: there is no document. */
+  | { ok: false; problems: Problem[]; doc?: undefined }
+  /** The format was right but validation found errors: the document and the expressions that parsed. */
+  | { ok: false; problems: Problem[]; doc: DiagramDocument; expressions: ReadonlyMap<string, ExprNode> };
 
 const isError = (p: Problem) => p.severity === "error";
 
@@ -28,6 +30,6 @@ export function parseDiagram(raw: unknown): ParseOutcome {
   if (!loaded.doc) return { ok: false, problems: loaded.problems };
   const { problems, expressions } = validateDiagram(loaded.doc);
   const found = [...loaded.problems, ...problems];
-  if (found.some(isError)) return { ok: false, problems: found, doc: loaded.doc };
+  if (found.some(isError)) return { ok: false, problems: found, doc: loaded.doc, expressions };
   return { ok: true, diagram: { doc: loaded.doc, expressions, warnings: found } };
 }

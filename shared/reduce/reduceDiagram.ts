@@ -11,6 +11,7 @@ import { checkLoops } from "@shared/reduce/loops";
 import { weighRat } from "@shared/reduce/ratView";
 import { listBlocks } from "@shared/reduce/wellPosed";
 import { buildSignalGraph } from "@shared/reduce/build";
+import { wellFormedLoopProblems } from "@shared/reduce/wellFormedLoops";
 import { createBudget, ReductionLimitError } from "@shared/reduce/budget";
 import { SingularLoopError } from "@shared/reduce/dense";
 import type { SignalFlowGraph } from "@shared/reduce/graph";
@@ -64,16 +65,16 @@ const isError = (p: Problem) => p.severity === "error";
  * cancelled modes. Never throws for a valid but unreducible diagram: every failure is a Problem with a code.
  * Improper blocks (deg num > deg den, e.g. a PD controller "K*(s+1)") are reduced like any other; a loop whose
  * return difference vanishes as s → ∞ is refused ("improper-loop") only when all its blocks are proper.
+ * Refused for a wrong pair id or a gain that cannot be formed, it still names the loop problems of the rest.
  * Example: reduceDiagram(parsed).reduction.transfers[0].gain is K·(s + 2)/(s² + …) for the spindle loop.
  */
 export function reduceDiagram(diagram: ParsedDiagram, opts: ReduceOptions = {}): ExactOutcome {
   const { doc } = diagram;
   const selection = selectPairs(doc, opts);
   const found = [...diagram.warnings, ...selection.problems];
-  if (found.some(isError)) return { ok: false, problems: found };
+  const { gains, problems: gainProblems } = blockGains(doc, diagram.expressions);
+  if (found.some(isError) || gainProblems.length > 0) return refuse(doc, gains, [...found, ...gainProblems], opts);
   try {
-    const { gains, problems: gainProblems } = blockGains(doc, diagram.expressions);
-    if (gainProblems.length > 0) return { ok: false, problems: [...found, ...gainProblems] };
     return reduceChecked(diagram, gains, selection.pairs, found, opts);
   } catch (err) {
     const problem = reductionProblem(err);
@@ -83,18 +84,41 @@ export function reduceDiagram(diagram: ParsedDiagram, opts: ReduceOptions = {}):
 }
 
 /**
- * Untrusted input to the published result in one call (parse, reduce, print): for the CLI, the server's
- * save check and the editor's results. Example: reduceDocument(json).result.transfers[0].numerator === "K*s + 2*K".
+ * Untrusted input to the exact reduction in one call (parse, reduce): the one entry of the editor, the server's
+ * save check and the command-line tools. A document that cannot be reduced gets every independent problem at
+ * once: validation, a wrong pair id, gains that cannot be formed and the loop problems of its well-formed part.
+ * Example: reduceDocumentExact(json).reduction.transfers[0].gain is K·(s + 2)/(s² + …) for the spindle loop.
+ */
+export function reduceDocumentExact(raw: unknown, opts: ReduceOptions = {}): ExactOutcome {
+  const parsed = parseDiagram(raw);
+  if (parsed.ok) return reduceDiagram(parsed.diagram, opts);
+  if (!parsed.doc) return { ok: false, problems: parsed.problems };
+  // Name a wrong pair id together with the validation problems, as one answer.
+  const found = [...parsed.problems, ...selectPairs(parsed.doc, opts).problems];
+  // A diagram over the degree limit is refused before any algebra runs, loops included.
+  if (found.some((p) => p.code === "degree-limit")) return { ok: false, problems: found };
+  const { gains, problems: gainProblems } = blockGains(parsed.doc, parsed.expressions);
+  return refuse(parsed.doc, gains, [...found, ...gainProblems], opts);
+}
+
+/**
+ * Untrusted input to the published result in one call (parse, reduce, print): reduceDocumentExact, printed.
+ * Example: reduceDocument(json).result.transfers[0].numerator === "K*s + 2*K".
  */
 export function reduceDocument(raw: unknown, opts: ReduceOptions = {}): ReduceOutcome {
-  const parsed = parseDiagram(raw);
-  if (!parsed.ok) {
-    // Name a wrong pair id together with the validation problems, as one answer.
-    const pairProblems = parsed.doc ? selectPairs(parsed.doc, opts).problems : [];
-    return { ok: false, problems: [...parsed.problems, ...pairProblems] };
+  const reduced = reduceDocumentExact(raw, opts);
+  return reduced.ok ? { ok: true, doc: reduced.reduction.diagram.doc, result: printReduction(reduced.reduction) } : reduced;
+}
+
+/** The refusal of a document with errors: those found and the loop problems of its well-formed part. */
+function refuse(doc: DiagramDocument, gains: ReadonlyMap<string, RatFn>, found: Problem[], opts: ReduceOptions): ExactOutcome {
+  try {
+    return { ok: false, problems: [...found, ...wellFormedLoopProblems(doc, gains, found, createBudget(opts.limits))] };
+  } catch (err) {
+    // Loops too large to judge within the work limit stay unjudged; the errors found still stand.
+    if (!reductionProblem(err)) throw err;
+    return { ok: false, problems: found };
   }
-  const reduced = reduceDiagram(parsed.diagram, opts);
-  return reduced.ok ? { ok: true, doc: parsed.diagram.doc, result: printReduction(reduced.reduction) } : reduced;
 }
 
 function reduceChecked(

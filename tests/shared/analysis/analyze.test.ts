@@ -4,6 +4,7 @@ import { analyzeDocument } from "@shared/analysis/analyzeDiagram";
 import { prepared } from "../../support/reduced";
 import { analysisResultSchema } from "@shared/analysis/schema";
 import { hiddenUnstableLoop, makeDoc, unityFeedback } from "../../support/docBuilder";
+import { diagram } from "../reduce/diagramSpec";
 
 
 
@@ -92,5 +93,19 @@ describe("analysis of a document", () => {
     const bad = analyzeDocument(unityFeedback("4/((s + 1)*(s + 2))"), { break: "nope" });
     expect(bad.ok).toBe(false);
     if (!bad.ok) expect(bad.problems[0]).toMatchObject({ code: "unknown-break-wire", field: "break" });
+  });
+});
+
+describe("analyzeDocument's problems (the analysis CLI)", () => {
+  // common practice: positive unity feedback around a gain of 1 is singular (e = r + e); h is left unconnected.
+  it("lists an algebraic loop beside an unconnected block", () => {
+    const out = analyzeDocument(diagram(
+      [["r", "input"], ["e", "sum", ["+", "+"]], ["g", "gain", "1"], ["y", "output"], ["h", "transfer", "1/(s+1)"]],
+      ["r>e:0", "e>g", "g>e:1", "g>y"],
+    ));
+    expect(out.ok ? [] : out.problems.filter((p) => p.severity === "error").map((p) => [p.code, p.blockId])).toEqual([
+      ["unwired-port", "h"],
+      ["algebraic-loop", "e"],
+    ]);
   });
 });

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { checkDocument, versionSummary } from "@shared/analysis/versionSummary";
 import { unityFeedback } from "../../support/docBuilder";
+import { diagram } from "../reduce/diagramSpec";
 
 describe("versionSummary", () => {
   // common practice: K/(s(s+2)) in unity feedback closes to K/(s² + 2s + K); K = 4 gives ζ = 0.5 and 16.3 % overshoot,
@@ -17,5 +18,19 @@ describe("versionSummary", () => {
     const checked = checkDocument(unityFeedback("K/(s*(s + 2))", { K: 1 }));
     if (!checked.ok) throw new Error("expected a result");
     expect(versionSummary(checked.pair)?.order).toBe(2);
+  });
+});
+
+describe("checkDocument's problems (the save check)", () => {
+  // common practice: positive unity feedback around a gain of 1 is singular (e = r + e); h is left unconnected.
+  it("lists an algebraic loop beside an unconnected block", () => {
+    const checked = checkDocument(diagram(
+      [["r", "input"], ["e", "sum", ["+", "+"]], ["g", "gain", "1"], ["y", "output"], ["h", "transfer", "1/(s+1)"]],
+      ["r>e:0", "e>g", "g>e:1", "g>y"],
+    ));
+    expect(checked.ok ? [] : checked.problems.filter((p) => p.severity === "error").map((p) => [p.code, p.blockId])).toEqual([
+      ["unwired-port", "h"],
+      ["algebraic-loop", "e"],
+    ]);
   });
 });

@@ -2,9 +2,8 @@
 // what the result depends on, and the analysis of that same reduction.
 import { createAnalyzer } from "@shared/analysis/analyzeDiagram";
 import type { AnalysisAnswer, AnalysisQuery } from "@shared/analysis/answer";
-import { parseDiagram } from "@shared/diagram/parseDiagram";
 import { printReduction } from "@shared/reduce/printReduction";
-import { reduceDiagram, type ExactOutcome } from "@shared/reduce/reduceDiagram";
+import { reduceDocumentExact, type ExactOutcome } from "@shared/reduce/reduceDiagram";
 import { LIVE_LIMITS, type LiveOutcome } from "@/features/editor/worker/liveProtocol";
 
 /**
@@ -32,8 +31,7 @@ export function createLiveSession(): LiveSession {
       const key = reductionKey(document);
       if (last?.key === key) return { outcome: last.outcome, reduced: false };
       last = null; // set again only once the reduction has not thrown
-      const parsed = parseDiagram(document);
-      const exact: ExactOutcome = parsed.ok ? reduceDiagram(parsed.diagram, { limits: LIVE_LIMITS }) : parsed;
+      const exact: ExactOutcome = reduceDocumentExact(document, { limits: LIVE_LIMITS });
       const outcome: LiveOutcome = exact.ok ? { ok: true, result: printReduction(exact.reduction) } : { ok: false, problems: exact.problems };
       last = { key, exact, outcome };
       return { outcome, reduced: true };

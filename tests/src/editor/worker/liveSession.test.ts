@@ -6,6 +6,7 @@ import type { EditorDoc } from "@/features/editor/commands/types";
 import { createLiveSession, reductionKey } from "@/features/editor/worker/liveSession";
 import { prepared } from "../../../support/reduced";
 import { docOf, unityLoop } from "../support";
+import { diagram } from "../../../shared/reduce/diagramSpec";
 
 type Query = AnalysisQuery & { document: EditorDoc };
 
@@ -129,6 +130,23 @@ describe("the editor worker's analysis (unity feedback around K/(s(s+2)): closed
     const open = docOf([{ id: "r", type: "input" }, { id: "G", type: "transfer", expr: "1/(K*s+K)" }, { id: "y", type: "output" }], ["r>G", "G>y"], { K: 1 });
     const singular = analyze(query(open, { values: { K: 0 } }));
     expect(singular).toMatchObject({ ok: false, problems: [{ code: "singular-at-values" }], parameters: [{ name: "K" }] });
+  });
+});
+
+describe("the editor's problems", () => {
+  // common practice: positive unity feedback around a gain of 1 is singular (e = r + e); h is left unconnected.
+  it("lists an algebraic loop beside an unconnected block, in the result and in the analysis", () => {
+    const session = createLiveSession();
+    const doc = diagram(
+      [["r", "input"], ["e", "sum", ["+", "+"]], ["g", "gain", "1"], ["y", "output"], ["h", "transfer", "1/(s+1)"]],
+      ["r>e:0", "e>g", "g>e:1", "g>y"],
+    );
+    const { outcome } = session.reduce(doc);
+    const errors = (problems: { severity: string; code: string; blockId?: string }[]) =>
+      problems.filter((p) => p.severity === "error").map((p) => [p.code, p.blockId]);
+    expect(outcome.ok ? [] : errors(outcome.problems)).toEqual([["unwired-port", "h"], ["algebraic-loop", "e"]]);
+    const answer = session.analyze(query(unityLoop()));
+    expect(answer.ok ? [] : errors(answer.problems)).toEqual([["unwired-port", "h"], ["algebraic-loop", "e"]]);
   });
 });
 
