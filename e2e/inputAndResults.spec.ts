@@ -94,5 +94,5 @@ test("the problems panel lists an algebraic loop beside an unconnected block", a
   await expect(page.getByRole("application", { name: "Diagram canvas" })).toBeVisible({ timeout: 60_000 });
   const problems = page.getByRole("region", { name: /^Problems/ });
   await expect(problems).toContainText("Algebraic loop through e, g", { timeout: 60_000 });
-  await expect(problems).toContainText('Block "h" (transfer) has no incoming wire');
+  await expect(problems).toContainText('Transfer function "h" has no incoming wire');
 });
