@@ -37,20 +37,22 @@ export function findBreak(doc: DiagramDocument, text: string): BreakPoint {
 }
 
 /**
- * The default break: the wire into the first minus-signed port of the first summing junction with a minus
- * sign that the input reaches (breadth-first along the wires); null when there is none.
- * Example: r → e(+, −) → G → y with y → e port 1 gives the wire y → e.
+ * The default break: a wire into a minus-signed port of the first summing junction, with such a wire on a loop, that
+ * the input reaches (breadth-first along the wires): a loop wire, never a disturbance's own wire into a minus port,
+ * which would give L = 0. Null when there is none.
+ * Example: r → e(+, −) → G → y with y → e port 1 gives the wire y → e; d → e2(−, +) with d outside the loop skips d → e2.
  */
 export function defaultBreak(doc: DiagramDocument, input: string): BreakPoint | null {
   const out = outgoingWires(doc);
   const blocks = blocksById(doc);
-  const order = [...reachable([input], (id) => (out.get(id) ?? []).map((r) => r.wire.to))];
+  const downstream = (from: string) => reachable([from], (id) => (out.get(id) ?? []).map((r) => r.wire.to));
+  const order = [...downstream(input)];
   for (const id of order) {
     const block = blocks.get(id);
     if (block?.type !== "sum") continue;
-    const port = block.signs.indexOf("-");
-    if (port < 0) continue;
-    const index = doc.wires.findIndex((w) => w.to === id && w.port === port);
+    // The junction's loop: what it feeds that comes back to it. A wire from there closes the loop.
+    const onLoop = downstream(id);
+    const index = doc.wires.findIndex((w) => w.to === id && w.port !== undefined && block.signs[w.port] === "-" && onLoop.has(w.from));
     if (index >= 0) return { index, label: wireLabel(doc.wires[index], index), wire: doc.wires[index], chosen: "default" };
   }
   return null;

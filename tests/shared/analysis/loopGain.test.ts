@@ -46,6 +46,25 @@ describe("loop gain at a break, L = −w/u", () => {
     expect(defaultBreak(loop(["+", "+"]), "r")).toBeNull();
   });
 
+  it("the default break for a disturbance entering a minus port is a wire of the loop, not the disturbance's own (common practice: L is read around the loop)", () => {
+    // r → e(+, −) → g → s2(−, +) → y, with y fed back to e; d enters s2's minus port from outside the loop.
+    const doc = makeDoc(
+      [
+        { id: "r", type: "input" },
+        { id: "d", type: "input" },
+        { id: "e", type: "sum", signs: ["+", "-"] },
+        { id: "g", type: "transfer", expr: "K/(s*(s + 2))" },
+        { id: "s2", type: "sum", signs: ["-", "+"] },
+        { id: "y", type: "output" },
+      ],
+      ["r->e:0", "e->g", "d->s2:0", "g->s2:1", "s2->y", "s2->e:1"],
+      { K: 4 },
+    );
+    expect(defaultBreak(doc, "d")).toMatchObject({ label: "w6" });
+    const out = loopGain(reduced(doc), defaultBreak(doc, "d")!);
+    expect(out.ok && ratToText(out.L)).toBe("K/(s^2 + 2*s)");
+  });
+
   it("a wire by 0-based index; an unknown wire is an AnalysisError naming it", () => {
     expect(findBreak(loop(["+", "-"]), "5").label).toBe("w6");
     try {
