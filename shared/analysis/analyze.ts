@@ -15,6 +15,7 @@ import type { PreparedAnalysis } from "@shared/analysis/prepare";
 import { routhArray, type RouthArray } from "@shared/analysis/routh";
 import { rootCounts, stabilityOf, type Stability } from "@shared/analysis/stability";
 import { stableSet, type StableSet } from "@shared/analysis/stableSet";
+import { inputRole } from "@shared/analysis/inputRole";
 import { steadyState, type SteadyState } from "@shared/analysis/steadyState";
 import { horizon, stepMetrics, type StepMetrics } from "@shared/analysis/stepMetrics";
 import { timeResponse, type TimeResponse } from "@shared/analysis/timeResponse";
@@ -120,7 +121,7 @@ export function analyzeAt(p: PreparedAnalysis, opts: AnalyzeOptions = {}): Analy
     bandwidth: bandwidth(num, den),
     bode: bode(zpk, frequencyRange(zpk)),
     loop,
-    steadyState: steadyState(num, den, stability.verdict, loopNumeric),
+    steadyState: steadyState(num, den, stability.verdict, loopNumeric, inputRole(p.doc, p.input)),
     notes: [...notes, ...(loop?.notes ?? [])],
   };
 }

@@ -70,6 +70,13 @@ export const analysisResultSchema = z.object({
     conditions: z.array(z.string()).nullable(),
   }),
   steadyState: z.object({
+    inputRole: z
+      .discriminatedUnion("kind", [
+        z.object({ kind: z.literal("reference") }),
+        z.object({ kind: z.literal("disturbance"), entersAt: z.array(z.string()), junction: z.string() }),
+        z.object({ kind: z.literal("no-loop") }),
+      ])
+      .describe("Where the input enters the loop: at its comparison junction (reference) or elsewhere (disturbance)."),
     finalValue: quantity,
     initialValue: quantity,
     errors: threeErrors,

@@ -1,6 +1,7 @@
 // Steady state by the limit theorems on exact polynomials: every limit s → 0 is read from the lowest
 // coefficients, so "infinite" and "zero" are exact, never a large or small float.
 import { qAdd, qDiv, qInv, qOne, qToNumber, qToString, type Q } from "@shared/algebra/rational";
+import type { InputRole } from "@shared/analysis/inputRole";
 import type { Verdict } from "@shared/analysis/stability";
 import { upDeg, upSub, upZeroOrder, type UPoly } from "@shared/analysis/upoly";
 
@@ -27,9 +28,11 @@ export const ERROR_CONSTANTS = [
 ] as const;
 
 export interface SteadyState {
+  /** Where the pair's input enters the loop: the errors e = r − y mean something only for a reference. */
+  inputRole: InputRole;
   finalValue: Quantity;
   initialValue: Quantity;
-  /** e = r − y for a unit step, ramp (t) and parabola (t²/2) at the pair's input. */
+  /** e = r − y for a unit step, ramp (t) and parabola (t²/2) at the pair's input; null values with a note for a disturbance. */
   errors: { step: Quantity; ramp: Quantity; parabola: Quantity };
   /** From the loop gain at the break; null without one. */
   systemType: number | null;
@@ -71,7 +74,7 @@ function errorFromConstant(k: Limit, shift: Q, name: string): Quantity {
  * constants of the loop gain L (when a break is known). The final value theorem is applied only when every
  * pole of sY(s) = T(s) is in the open left half-plane. Example: T = 1/(s + 2) → final value 1/2, step error 1/2.
  */
-export function steadyState(num: UPoly, den: UPoly, verdict: Verdict, loop: { num: UPoly; den: UPoly } | null): SteadyState {
+export function steadyState(num: UPoly, den: UPoly, verdict: Verdict, loop: { num: UPoly; den: UPoly } | null, inputRole: InputRole = { kind: "reference" }): SteadyState {
   const stable = verdict === "stable";
   const noSteadyState = `No steady state: T(s) is ${verdict}, so sY(s) has a pole outside the open left half-plane and the final value theorem does not apply.`;
   const finalValue = stable
@@ -88,8 +91,14 @@ export function steadyState(num: UPoly, den: UPoly, verdict: Verdict, loop: { nu
     stable
       ? asQuantity(limitAtZero(oneMinusT, den, 1 - order), `Final value theorem on E(s) = (1 − T(s))·R(s) for a unit ${name}.`, `The error grows without bound for a unit ${name} (sE(s) keeps a pole at s = 0).`)
       : none(noSteadyState);
-  const errors = { step: error(1, "step"), ramp: error(2, "ramp"), parabola: error(3, "parabola") };
-  if (!loop) return { finalValue, initialValue, errors, systemType: null, constants: null, errorsFromConstants: null };
+  const notReference =
+    inputRole.kind === "disturbance"
+      ? none(`Not a reference: the input enters the loop at ${inputRole.entersAt.join(", ")}, not at its comparison junction ${inputRole.junction}, so e = r − y does not apply; the final value is the output's steady response to it.`)
+      : null;
+  const errors = notReference
+    ? { step: notReference, ramp: notReference, parabola: notReference }
+    : { step: error(1, "step"), ramp: error(2, "ramp"), parabola: error(3, "parabola") };
+  if (!loop) return { inputRole, finalValue, initialValue, errors, systemType: null, constants: null, errorsFromConstants: null };
   const type = Math.max(0, upZeroOrder(loop.den) - upZeroOrder(loop.num));
   const lims = [0, 1, 2].map((k) => limitAtZero(loop.num, loop.den, k));
   const [Kp, Kv, Ka] = lims.map((lim, k) => {
@@ -103,5 +112,5 @@ export function steadyState(num: UPoly, den: UPoly, verdict: Verdict, loop: { nu
         parabola: errorFromConstant(lims[2], ZERO, "parabola"),
       }
     : { step: none(noSteadyState), ramp: none(noSteadyState), parabola: none(noSteadyState) };
-  return { finalValue, initialValue, errors, systemType: type, constants: { Kp, Kv, Ka }, errorsFromConstants };
+  return { inputRole, finalValue, initialValue, errors, systemType: type, constants: { Kp, Kv, Ka }, errorsFromConstants };
 }

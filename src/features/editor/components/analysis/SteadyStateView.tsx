@@ -1,4 +1,5 @@
 import type { Analysis } from "@shared/analysis/analyze";
+import type { InputRole } from "@shared/analysis/inputRole";
 import { ERROR_CONSTANTS, type Quantity } from "@shared/analysis/steadyState";
 import { capital } from "@shared/text/words";
 import { Tex } from "@/features/editor/components/Tex";
@@ -39,33 +40,65 @@ export function SteadyStateView({ analysis }: { analysis: Analysis }) {
           <Value q={ss.initialValue} />
         </dd>
       </dl>
-      <div className="overflow-x-auto">
-        <table className="w-full border-collapse">
-          <caption className="pb-1 text-left font-semibold">
-            Steady-state error e = r − y (input {analysis.input}, output {analysis.output})
-          </caption>
-          <thead>
-            <tr>
-              <th scope="col" className={TH}>Input</th>
-              <th scope="col" className={TH}>Steady-state error</th>
-            </tr>
-          </thead>
-          <tbody>
-            {INPUTS.map((i) => (
-              <tr key={i.key}>
-                <th scope="row" className={`${TD} text-left font-normal`}>
-                  {i.name} <span className="font-mono text-xs text-ink-soft">{i.signal}</span>
-                </th>
-                <td className={TD}>
-                  <Value q={ss.errors[i.key]} />
-                </td>
+      {ss.inputRole.kind === "disturbance" ? (
+        <DisturbanceRejection analysis={analysis} role={ss.inputRole} />
+      ) : (
+        <div className="overflow-x-auto">
+          <table className="w-full border-collapse">
+            <caption className="pb-1 text-left font-semibold">
+              Steady-state error e = r − y (input {analysis.input}, output {analysis.output})
+            </caption>
+            <thead>
+              <tr>
+                <th scope="col" className={TH}>Input</th>
+                <th scope="col" className={TH}>Steady-state error</th>
               </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
+            </thead>
+            <tbody>
+              {INPUTS.map((i) => (
+                <tr key={i.key}>
+                  <th scope="row" className={`${TD} text-left font-normal`}>
+                    {i.name} <span className="font-mono text-xs text-ink-soft">{i.signal}</span>
+                  </th>
+                  <td className={TD}>
+                    <Value q={ss.errors[i.key]} />
+                  </td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      )}
       <LoopConstants analysis={analysis} />
     </div>
+  );
+}
+
+/**
+ * For an input that is not the reference: what a unit step there leaves at the output once settled (the final value)
+ * and whether the loop rejects it fully, instead of an error e = r − y that would mean nothing.
+ */
+function DisturbanceRejection({ analysis, role }: { analysis: Analysis; role: InputRole & { kind: "disturbance" } }) {
+  const final = analysis.steadyState.finalValue;
+  const rejected = final.value === 0;
+  return (
+    <section aria-label="Disturbance rejection" className="flex flex-col gap-1">
+      <h3 className="font-semibold">
+        Disturbance rejection ({analysis.input} → {analysis.output})
+      </h3>
+      <p>
+        {analysis.input} enters the loop at {role.entersAt.join(", ")}, not at its comparison junction {role.junction}: it is a disturbance,
+        so e = r − y does not apply.
+      </p>
+      <dl className="grid grid-cols-[max-content_1fr] gap-x-4 gap-y-1">
+        <dt className="font-medium">Output after a unit step at {analysis.input}, settled</dt>
+        <dd>
+          <Value q={final} />
+        </dd>
+        <dt className="font-medium">Rejection</dt>
+        <dd>{final.value === null ? "—" : rejected ? "Full: the step leaves no lasting effect on the output." : "Partial: the step leaves a lasting offset of the value above."}</dd>
+      </dl>
+    </section>
   );
 }
 
