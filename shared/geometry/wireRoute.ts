@@ -24,39 +24,105 @@ export interface WireEnds {
   side: Side;
   sourceBox: Box;
   targetBox: Box;
+  /** Other blocks near the wire (see `obstaclesFor`), which the route goes around when one of its shapes can. */
+  obstacles?: readonly Box[];
 }
 
 /** Straight run out of an output and into an input before the first bend. */
 const STUB = 16;
 /** Clearance between a detour and the blocks it passes. */
 export const GAP = 24;
+/** Ports at most this far apart in height are joined by one straight run rather than a jog of a few pixels. */
+export const LEVEL = 4;
+/** How far into a box a wire must reach to pass under it: running along its edge, as wires into ports do, is not. */
+const INSET = 2;
 
 const bottom = (b: Box) => b.y + b.height;
+const right = (b: Box) => b.x + b.width;
 
 /**
- * The orthogonal polyline of a signal wire. Forward wires take one vertical jog halfway; wires that must run
- * backwards (feedback) leave to the right, pass underneath both blocks and come back, so return paths sit
- * below the forward path; wires into the bottom or top port of a junction arrive vertically.
+ * The orthogonal polyline of a signal wire. Ports at about the same height with the target to the right are
+ * joined straight (at the target's height); other forward wires take one vertical jog halfway, or in the
+ * nearest free column beside the blocks in the way; wires that must run backwards (feedback) leave to the
+ * right, pass underneath both blocks and come back, so return paths sit below the forward path; wires into
+ * the bottom or top port of a junction arrive vertically. Of these shapes the first that passes under no
+ * block (the two ends' included) is taken, else the first one.
+ * Example: (80, 24) → (200, 26) on the left → [(80, 26), (200, 26)].
  */
-export function wireRoute({ source: s, target: t, side, sourceBox, targetBox }: WireEnds): Point[] {
+export function wireRoute(ends: WireEnds): Point[] {
+  const blockers = [ends.sourceBox, ends.targetBox, ...(ends.obstacles ?? [])];
+  let first: Point[] | undefined;
+  for (const route of shapes(ends, blockers)) {
+    if (isClear(route, blockers)) return route;
+    first ??= route;
+  }
+  return first!;
+}
+
+/** The candidate shapes of a wire, best first; lazily, as the first is usually clear. */
+function* shapes({ source: s, target: t, side, sourceBox, targetBox }: WireEnds, blockers: Box[]): Generator<Point[]> {
   const out = s.x + STUB;
+  const low = (start: number, x0: number, x1: number) => clearLevel(start, x0, x1, blockers, 1);
+  const high = (start: number, x0: number, x1: number) => clearLevel(start, x0, x1, blockers, -1);
+  // Columns for the run down (or up) out of the output: right after its stub, else beside the blocks in the way.
+  const drops = () => columns(out, Infinity, out, blockers);
   if (side === "left") {
-    if (t.x - s.x >= 2 * STUB) {
-      const mx = (s.x + t.x) / 2;
-      return simplify([s, { x: mx, y: s.y }, { x: mx, y: t.y }, t]);
-    }
-    const low = Math.max(bottom(sourceBox), bottom(targetBox)) + GAP;
+    if (t.x > s.x && Math.abs(t.y - s.y) <= LEVEL) yield [{ x: s.x, y: t.y }, t];
+    if (t.x - s.x >= 2 * STUB)
+      for (const x of columns(out, t.x - STUB, (s.x + t.x) / 2, blockers)) yield simplify([s, { x, y: s.y }, { x, y: t.y }, t]);
     const back = t.x - STUB;
-    return simplify([s, { x: out, y: s.y }, { x: out, y: low }, { x: back, y: low }, { x: back, y: t.y }, t]);
+    const around = (x: number, y: number) => simplify([s, { x, y: s.y }, { x, y }, { x: back, y }, { x: back, y: t.y }, t]);
+    for (const x of drops()) {
+      yield around(x, low(Math.max(bottom(sourceBox), bottom(targetBox)) + GAP, back, x));
+      yield around(x, high(Math.min(sourceBox.y, targetBox.y) - GAP, back, x));
+    }
+    return;
   }
+  const via = (x: number, y: number) => simplify([s, { x, y: s.y }, { x, y }, { x: t.x, y }, t]);
   if (side === "bottom") {
-    if (t.x >= out && s.y >= t.y + STUB) return simplify([s, { x: t.x, y: s.y }, t]);
-    const low = Math.max(bottom(sourceBox), bottom(targetBox), t.y) + GAP;
-    return simplify([s, { x: out, y: s.y }, { x: out, y: low }, { x: t.x, y: low }, t]);
+    if (t.x >= out && s.y >= t.y + STUB) yield simplify([s, { x: t.x, y: s.y }, t]);
+    for (const x of drops()) yield via(x, low(Math.max(bottom(sourceBox), bottom(targetBox), t.y) + GAP, t.x, x));
+    return;
   }
-  if (t.x >= out && s.y <= t.y - STUB) return simplify([s, { x: t.x, y: s.y }, t]);
-  const high = Math.min(sourceBox.y, targetBox.y, t.y) - GAP;
-  return simplify([s, { x: out, y: s.y }, { x: out, y: high }, { x: t.x, y: high }, t]);
+  if (t.x >= out && s.y <= t.y - STUB) yield simplify([s, { x: t.x, y: s.y }, t]);
+  for (const x of drops()) yield via(x, high(Math.min(sourceBox.y, targetBox.y, t.y) - GAP, t.x, x));
+}
+
+/**
+ * Where a jog's vertical run may go between `lo` and `hi`: the preferred x first, then half a gap beside each
+ * block, nearest the preferred first. Example: no blocks → [preferred].
+ */
+function columns(lo: number, hi: number, preferred: number, blockers: Box[]): number[] {
+  const xs = [preferred];
+  for (const b of blockers) xs.push(b.x - GAP / 2, right(b) + GAP / 2);
+  const inside = xs.filter((x) => x >= lo && x <= hi);
+  return [...new Set(inside)].sort((a, b) => Math.abs(a - preferred) - Math.abs(b - preferred));
+}
+
+/** The first height from `start` on, going down (+1) or up (−1), at which a run from x0 to x1 keeps a half gap off every block. */
+function clearLevel(start: number, x0: number, x1: number, blockers: Box[], way: 1 | -1): number {
+  const [a, b] = x0 < x1 ? [x0, x1] : [x1, x0];
+  let y = start;
+  for (let moved = true; moved; ) {
+    moved = false;
+    for (const box of blockers) {
+      if (right(box) <= a || box.x >= b || y <= box.y - GAP / 2 || y >= bottom(box) + GAP / 2) continue;
+      y = way === 1 ? bottom(box) + GAP : box.y - GAP;
+      moved = true;
+    }
+  }
+  return y;
+}
+
+/** Whether no segment of the route reaches more than INSET into any of the boxes. */
+function isClear(route: Point[], blockers: Box[]): boolean {
+  for (let i = 1; i < route.length; i += 1) {
+    const [p, q] = [route[i - 1], route[i]];
+    const [x0, x1, y0, y1] = [Math.min(p.x, q.x), Math.max(p.x, q.x), Math.min(p.y, q.y), Math.max(p.y, q.y)];
+    for (const b of blockers)
+      if (x1 > b.x + INSET && x0 < right(b) - INSET && y1 > b.y + INSET && y0 < bottom(b) - INSET) return false;
+  }
+  return true;
 }
 
 /**
