@@ -4,6 +4,7 @@ import type { CheckedResult } from "@shared/api/versions";
 import { expressionLatex } from "@shared/expr/exprLatex";
 import { estimatedSize, fallbackPosition, inPoint, outPoint } from "@shared/geometry/blockBox";
 import { BLOCK_SHAPES } from "@shared/geometry/blockShape";
+import { indexBoxes, obstaclesFor } from "@shared/geometry/boxIndex";
 import { arrowHead, roundedPath, wireRoute, type Point } from "@shared/geometry/wireRoute";
 
 export interface Typeset { svg: string; width: number; height: number }
@@ -80,11 +81,14 @@ export function diagramSvg({ document: doc, result, meta, pins = [], typeset }: 
   const all = [...placed.values()];
   const x0 = Math.min(0, ...all.map((p) => p.x)) - 40, y0 = Math.min(0, ...all.map((p) => p.y)) - 40;
   const x1 = Math.max(200, ...all.map((p) => p.x + p.w)) + 40, y1 = Math.max(100, ...all.map((p) => p.y + p.h)) + 60;
+  const index = indexBoxes(all.map((p) => [p.block.id, boxOfPlaced(p)] as const));
   const wires = doc.wires.flatMap((w, i) => {
     const s = placed.get(w.from), t = placed.get(w.to);
     if (!s || !t) return [];
-    const entry = inPoint(t.block, boxOfPlaced(t), w.port);
-    const pts = wireRoute({ source: outPoint(boxOfPlaced(s)), target: entry.at, side: entry.side, sourceBox: boxOfPlaced(s), targetBox: boxOfPlaced(t) });
+    const [sourceBox, targetBox] = [boxOfPlaced(s), boxOfPlaced(t)];
+    const entry = inPoint(t.block, targetBox, w.port);
+    const obstacles = obstaclesFor(index, w.from, w.to, sourceBox, targetBox);
+    const pts = wireRoute({ source: outPoint(sourceBox), target: entry.at, side: entry.side, sourceBox, targetBox, obstacles });
     const id = w.id ?? `wire-${i}`;
     return [{ id, pts, d: roundedPath(pts), head: arrowHead(pts) }];
   });

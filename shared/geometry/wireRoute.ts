@@ -15,6 +15,9 @@ export interface Box {
 /** Whether two boxes have the same place and size. */
 export const sameBox = (a: Box, b: Box) => a.x === b.x && a.y === b.y && a.width === b.width && a.height === b.height;
 
+/** Whether two lists hold the same boxes in the same order. */
+export const sameBoxes = (a: readonly Box[], b: readonly Box[]) => a.length === b.length && a.every((box, i) => sameBox(box, b[i]));
+
 export interface WireEnds {
   /** Where the wire leaves the source's output (on its right side). */
   source: Point;
