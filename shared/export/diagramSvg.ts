@@ -2,7 +2,7 @@ import type { DiagramDocument, Block } from "@shared/diagram/schema";
 import { hasExpression } from "@shared/diagram/blockKinds";
 import type { CheckedResult } from "@shared/api/versions";
 import { expressionLatex } from "@shared/expr/exprLatex";
-import { estimatedSize, fallbackPosition, inPoint, outPoint } from "@shared/geometry/blockBox";
+import { boundsOf, captionBox, estimatedSize, fallbackPosition, inPoint, outPoint } from "@shared/geometry/blockBox";
 import { BLOCK_SHAPES } from "@shared/geometry/blockShape";
 import { indexBoxes, obstaclesFor } from "@shared/geometry/boxIndex";
 import { arrowHead, roundedPath, wireRoute, type Point } from "@shared/geometry/wireRoute";
@@ -79,8 +79,10 @@ export function diagramSvg({ document: doc, result, meta, pins = [], typeset }: 
     placed.set(block.id, { block, x: at.x, y: at.y, ...sizeOf(block, tex), tex });
   });
   const all = [...placed.values()];
-  const x0 = Math.min(0, ...all.map((p) => p.x)) - 40, y0 = Math.min(0, ...all.map((p) => p.y)) - 40;
-  const x1 = Math.max(200, ...all.map((p) => p.x + p.w)) + 40, y1 = Math.max(100, ...all.map((p) => p.y + p.h)) + 60;
+  // The captions above blocks count too, or a long one on the outermost block is cut off at the figure's edge.
+  const drawn = boundsOf(all.flatMap((p) => [boxOfPlaced(p), captionBox(p.block, boxOfPlaced(p)) ?? boxOfPlaced(p)])) ?? { x: 0, y: 0, width: 0, height: 0 };
+  const x0 = Math.min(0, drawn.x) - 40, y0 = Math.min(0, drawn.y) - 40;
+  const x1 = Math.max(200, drawn.x + drawn.width) + 40, y1 = Math.max(100, drawn.y + drawn.height) + 60;
   const index = indexBoxes(all.map((p) => [p.block.id, boxOfPlaced(p)] as const));
   const wires = doc.wires.flatMap((w, i) => {
     const s = placed.get(w.from), t = placed.get(w.to);
