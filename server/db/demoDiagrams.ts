@@ -30,13 +30,15 @@ export const demoDiagrams: { title: string; description: string; document: Diagr
         { id: "w5", from: "drive", to: "tacho" },
         { id: "w6", from: "tacho", to: "err", port: 1 },
       ],
-      // One row at port height 120 (each block's top is 120 less half its height); the tachometer below and
-      // right of the drive, so its feedback returns under the whole row.
+      // One row at port height 120 (each block's top is 120 less half its height). A fraction's box is 60 tall
+      // in the figure and 48 on the canvas: its top at 93 puts its ports 3 px off the row in both, within the
+      // straight-wire tolerance. The tachometer sits below and right of the drive, so its feedback returns
+      // under the whole row.
       layout: {
         w_ref: { x: 40, y: 102 },
         err: { x: 280, y: 96 },
-        pi: { x: 400, y: 90 },
-        drive: { x: 600, y: 90 },
+        pi: { x: 400, y: 93 },
+        drive: { x: 600, y: 93 },
         w: { x: 800, y: 102 },
         tacho: { x: 760, y: 220 },
       },
@@ -73,7 +75,7 @@ export const demoDiagrams: { title: string; description: string; document: Diagr
         h_ref: { x: 40, y: 102 },
         e: { x: 280, y: 96 },
         ctrl: { x: 390, y: 92 },
-        valve: { x: 560, y: 90 },
+        valve: { x: 560, y: 93 },
         net: { x: 720, y: 96 },
         tank: { x: 840, y: 96 },
         h: { x: 980, y: 102 },
@@ -109,7 +111,7 @@ export const demoDiagrams: { title: string; description: string; document: Diagr
         { id: "w9", from: "pos", to: "x" },
         { id: "w10", from: "pos", to: "ep", port: 1 },
       ],
-      // The position loop at port height 120, the velocity loop raised to 60, so the two feedback wires return
+      // The position loop at port height 120, the velocity loop raised to 60 (the fraction 3 px lower, as above), so the two feedback wires return
       // at different heights (84 + 24 under the velocity loop, 144 + 24 under the position loop).
       layout: {
         x_ref: { x: 40, y: 102 },
@@ -117,7 +119,7 @@ export const demoDiagrams: { title: string; description: string; document: Diagr
         cp: { x: 400, y: 92 },
         ev: { x: 540, y: 36 },
         cv: { x: 640, y: 32 },
-        motor: { x: 780, y: 30 },
+        motor: { x: 780, y: 33 },
         v_pick: { x: 940, y: 52 },
         pos: { x: 1040, y: 96 },
         x: { x: 1160, y: 102 },

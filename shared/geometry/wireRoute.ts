@@ -70,7 +70,8 @@ function* shapes({ source: s, target: t, side, sourceBox, targetBox }: WireEnds,
   // Columns for the run down (or up) out of the output: right after its stub, else beside the blocks in the way.
   const drops = () => columns(out, Infinity, out, blockers);
   if (side === "left") {
-    if (t.x > s.x && Math.abs(t.y - s.y) <= LEVEL) yield [{ x: s.x, y: t.y }, t];
+    // To the nearest pixel: the canvas measures its ports in fractions of one (4.00005 apart is 4).
+    if (t.x > s.x && Math.abs(t.y - s.y) < LEVEL + 0.5) yield [{ x: s.x, y: t.y }, t];
     if (t.x - s.x >= 2 * STUB)
       for (const x of columns(out, t.x - STUB, (s.x + t.x) / 2, blockers)) yield simplify([s, { x, y: s.y }, { x, y: t.y }, t]);
     const back = t.x - STUB;
