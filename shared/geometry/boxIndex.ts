@@ -20,29 +20,36 @@ const cellsOf = (b: Box) => ({
   y1: Math.floor((b.y + b.height) / CELL),
 });
 
+type Entry = { id: string; box: Box };
+
+// A number per cell (cells far apart may share one: a shared bucket only costs a few extra box tests).
+const cellKey = (i: number, j: number) => i * 92821 + j;
+
 const meets = (a: Box, b: Box) => a.x < b.x + b.width && b.x < a.x + a.width && a.y < b.y + b.height && b.y < a.y + a.height;
 
 /** Builds the index once per set of boxes (a document or canvas state), in time linear in their number. */
 export function indexBoxes(entries: Iterable<readonly [string, Box]>): BoxIndex {
-  const cells = new Map<string, { id: string; box: Box }[]>();
+  const cells = new Map<number, Entry[]>();
   for (const [id, box] of entries) {
+    const entry = { id, box };
     const c = cellsOf(box);
     for (let i = c.x0; i <= c.x1; i += 1)
       for (let j = c.y0; j <= c.y1; j += 1) {
-        const key = `${i},${j}`;
-        const bucket = cells.get(key);
-        if (bucket) bucket.push({ id, box });
-        else cells.set(key, [{ id, box }]);
+        const bucket = cells.get(cellKey(i, j));
+        if (bucket) bucket.push(entry);
+        else cells.set(cellKey(i, j), [entry]);
       }
   }
   return {
     near(region) {
       const c = cellsOf(region);
-      const found = new Map<string, { id: string; box: Box }>();
+      const found = new Set<Entry>();
       for (let i = c.x0; i <= c.x1; i += 1)
-        for (let j = c.y0; j <= c.y1; j += 1)
-          for (const entry of cells.get(`${i},${j}`) ?? []) if (!found.has(entry.id) && meets(entry.box, region)) found.set(entry.id, entry);
-      return [...found.values()];
+        for (let j = c.y0; j <= c.y1; j += 1) {
+          const bucket = cells.get(cellKey(i, j));
+          if (bucket) for (const entry of bucket) if (meets(entry.box, region)) found.add(entry);
+        }
+      return [...found];
     },
   };
 }

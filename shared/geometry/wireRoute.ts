@@ -53,54 +53,79 @@ const right = (b: Box) => b.x + b.width;
  * Example: (80, 24) → (200, 26) on the left → [(80, 26), (200, 26)].
  */
 export function wireRoute(ends: WireEnds): Point[] {
-  const blockers = [ends.sourceBox, ends.targetBox, ...(ends.obstacles ?? [])];
-  let first: Point[] | undefined;
-  for (const route of shapes(ends, blockers)) {
-    if (isClear(route, blockers)) return route;
-    first ??= route;
-  }
-  return first!;
+  const search: Search = { blockers: [ends.sourceBox, ends.targetBox, ...(ends.obstacles ?? [])], first: undefined };
+  return firstClear(ends, search) ?? search.first!;
 }
 
-/** The candidate shapes of a wire, best first; lazily, as the first is usually clear. */
-function* shapes({ source: s, target: t, side, sourceBox, targetBox }: WireEnds, blockers: Box[]): Generator<Point[]> {
+/** The blocks a route must keep off, and the first shape offered (taken when none is clear). */
+interface Search {
+  blockers: Box[];
+  first: Point[] | undefined;
+}
+
+/** The route if it passes under none of the blocks. Plain functions, no closures: every wire of a large diagram comes here. */
+function take(route: Point[], search: Search): Point[] | undefined {
+  search.first ??= route;
+  return isClear(route, search.blockers) ? route : undefined;
+}
+
+/** The wire's candidate shapes, best first, built one at a time (the first is usually clear); the first clear one. */
+function firstClear(ends: WireEnds, search: Search): Point[] | undefined {
+  const { source: s, target: t, side } = ends;
   const out = s.x + STUB;
-  const low = (start: number, x0: number, x1: number) => clearLevel(start, x0, x1, blockers, 1);
-  const high = (start: number, x0: number, x1: number) => clearLevel(start, x0, x1, blockers, -1);
-  // Columns for the run down (or up) out of the output: right after its stub, else beside the blocks in the way.
-  const drops = () => columns(out, Infinity, out, blockers);
   if (side === "left") {
     // To the nearest pixel: the canvas measures its ports in fractions of one (4.00005 apart is 4).
-    if (t.x > s.x && Math.abs(t.y - s.y) < LEVEL + 0.5) yield [{ x: s.x, y: t.y }, t];
-    if (t.x - s.x >= 2 * STUB)
-      for (const x of columns(out, t.x - STUB, (s.x + t.x) / 2, blockers)) yield simplify([s, { x, y: s.y }, { x, y: t.y }, t]);
-    const back = t.x - STUB;
-    const around = (x: number, y: number) => simplify([s, { x, y: s.y }, { x, y }, { x: back, y }, { x: back, y: t.y }, t]);
-    for (const x of drops()) {
-      yield around(x, low(Math.max(bottom(sourceBox), bottom(targetBox)) + GAP, back, x));
-      yield around(x, high(Math.min(sourceBox.y, targetBox.y) - GAP, back, x));
+    const straight = t.x > s.x && Math.abs(t.y - s.y) < LEVEL + 0.5 ? take([{ x: s.x, y: t.y }, t], search) : undefined;
+    const jogged = straight ?? (t.x - s.x >= 2 * STUB ? firstColumn("jog", out, t.x - STUB, (s.x + t.x) / 2, ends, search) : undefined);
+    // Columns for the run down (or up) out of the output: right after its stub, else beside the blocks in the way.
+    return jogged ?? firstColumn("under", out, Infinity, out, ends, search) ?? firstColumn("over", out, Infinity, out, ends, search);
+  }
+  const direct = t.x >= out && (side === "bottom" ? s.y >= t.y + STUB : s.y <= t.y - STUB);
+  const bent = direct ? take(simplify([s, { x: t.x, y: s.y }, t]), search) : undefined;
+  return bent ?? firstColumn(side === "bottom" ? "intoBottom" : "intoTop", out, Infinity, out, ends, search);
+}
+
+/** A shape with one free column x: a jog, a detour below or above both ends, a detour into a bottom or top port. */
+type Family = "jog" | "under" | "over" | "intoBottom" | "intoTop";
+
+function shapeAt(family: Family, x: number, { source: s, target: t, sourceBox, targetBox }: WireEnds, blockers: Box[]): Point[] {
+  switch (family) {
+    case "jog":
+      return simplify([s, { x, y: s.y }, { x, y: t.y }, t]);
+    case "under":
+    case "over": {
+      const back = t.x - STUB;
+      const y =
+        family === "under"
+          ? clearLevel(Math.max(bottom(sourceBox), bottom(targetBox)) + GAP, back, x, blockers, 1)
+          : clearLevel(Math.min(sourceBox.y, targetBox.y) - GAP, back, x, blockers, -1);
+      return simplify([s, { x, y: s.y }, { x, y }, { x: back, y }, { x: back, y: t.y }, t]);
     }
-    return;
+    case "intoBottom":
+    case "intoTop": {
+      const y =
+        family === "intoBottom"
+          ? clearLevel(Math.max(bottom(sourceBox), bottom(targetBox), t.y) + GAP, t.x, x, blockers, 1)
+          : clearLevel(Math.min(sourceBox.y, targetBox.y, t.y) - GAP, t.x, x, blockers, -1);
+      return simplify([s, { x, y: s.y }, { x, y }, { x: t.x, y }, t]);
+    }
   }
-  const via = (x: number, y: number) => simplify([s, { x, y: s.y }, { x, y }, { x: t.x, y }, t]);
-  if (side === "bottom") {
-    if (t.x >= out && s.y >= t.y + STUB) yield simplify([s, { x: t.x, y: s.y }, t]);
-    for (const x of drops()) yield via(x, low(Math.max(bottom(sourceBox), bottom(targetBox), t.y) + GAP, t.x, x));
-    return;
-  }
-  if (t.x >= out && s.y <= t.y - STUB) yield simplify([s, { x: t.x, y: s.y }, t]);
-  for (const x of drops()) yield via(x, high(Math.min(sourceBox.y, targetBox.y, t.y) - GAP, t.x, x));
 }
 
 /**
- * Where a jog's vertical run may go between `lo` and `hi`: the preferred x first, then half a gap beside each
- * block, nearest the preferred first. Example: no blocks → [preferred].
+ * The first clear shape of the family with its column between `lo` and `hi`: the preferred x first, then (only
+ * if that is blocked) half a gap beside each block, nearest the preferred first.
  */
-function columns(lo: number, hi: number, preferred: number, blockers: Box[]): number[] {
-  const xs = [preferred];
-  for (const b of blockers) xs.push(b.x - GAP / 2, right(b) + GAP / 2);
-  const inside = xs.filter((x) => x >= lo && x <= hi);
-  return [...new Set(inside)].sort((a, b) => Math.abs(a - preferred) - Math.abs(b - preferred));
+function firstColumn(family: Family, lo: number, hi: number, preferred: number, ends: WireEnds, search: Search): Point[] | undefined {
+  const best = take(shapeAt(family, preferred, ends, search.blockers), search);
+  if (best) return best;
+  const xs = new Set<number>();
+  for (const b of search.blockers) for (const x of [b.x - GAP / 2, right(b) + GAP / 2]) if (x >= lo && x <= hi && x !== preferred) xs.add(x);
+  for (const x of [...xs].sort((a, b) => Math.abs(a - preferred) - Math.abs(b - preferred))) {
+    const route = take(shapeAt(family, x, ends, search.blockers), search);
+    if (route) return route;
+  }
+  return undefined;
 }
 
 /** The first height from `start` on, going down (+1) or up (−1), at which a run from x0 to x1 keeps a half gap off every block. */

@@ -1,9 +1,8 @@
 import { memo, useMemo } from "react";
 import { BaseEdge, useStore, type EdgeProps, type InternalNode, type ReactFlowState } from "@xyflow/react";
-import { obstaclesFor } from "@shared/geometry/boxIndex";
 import { midpointAlong, roundedPath, sameBox, sameBoxes, wireRoute, type Box, type WirePlace } from "@shared/geometry/wireRoute";
 import type { Severity } from "@shared/diagram/problems";
-import { nodeIndex } from "@/features/editor/geometry/nodeIndex";
+import { nearbyBlocks } from "@/features/editor/geometry/nodeIndex";
 import type { FlowNode, SignalEdge } from "@/features/editor/lib/flowModel";
 
 /** Stroke colours and the matching arrowhead markers (defined once in WireMarkers). */
@@ -56,8 +55,8 @@ export const SignalEdgeView = memo(function SignalEdgeView(props: EdgeProps<Sign
   const side = data?.side ?? "left";
   const sourceBox = useBox(source);
   const targetBox = useBox(target);
-  // The other blocks near the wire, kept as the same array while their boxes stay (a grid query, not a scan).
-  const obstacles = useStore((s: ReactFlowState) => obstaclesFor(nodeIndex(s.nodes as FlowNode[]), source, target, sourceBox, targetBox), sameBoxes);
+  // The other blocks near the wire, the same array while their boxes stay (a grid query per change, not a scan).
+  const obstacles = useStore((s: ReactFlowState) => nearbyBlocks(s.nodes as FlowNode[], source, target, sourceBox, targetBox), sameBoxes);
   // Routing reruns only when an end or a nearby block moved or resized (useBox keeps a box's object while its numbers stay).
   const points = useMemo(
     () => wireRoute({ source: { x: sourceX, y: sourceY }, target: { x: targetX, y: targetY }, side, sourceBox, targetBox, obstacles }),
