@@ -1,7 +1,7 @@
 import type { DiagramDocument } from "@shared/diagram/schema";
 
 /** Demo loops of the invented Brightwater Mills line 3, as Loopwright diagram documents. */
-const doc = (title: string, rest: Pick<DiagramDocument, "parameters" | "blocks" | "wires">): DiagramDocument => ({
+const doc = (title: string, rest: Pick<DiagramDocument, "parameters" | "blocks" | "wires" | "layout">): DiagramDocument => ({
   format: "loopwright-diagram",
   version: 1,
   title,
@@ -30,6 +30,18 @@ export const demoDiagrams: { title: string; description: string; document: Diagr
         { id: "w5", from: "drive", to: "tacho" },
         { id: "w6", from: "tacho", to: "err", port: 1 },
       ],
+      // One row at port height 120 (each block's top is 120 less half its height). A fraction's box is 60 tall
+      // in the figure and 48 on the canvas: its top at 93 puts its ports 3 px off the row in both, within the
+      // straight-wire tolerance. The tachometer sits below and right of the drive, so its feedback returns
+      // under the whole row.
+      layout: {
+        w_ref: { x: 40, y: 102 },
+        err: { x: 280, y: 96 },
+        pi: { x: 400, y: 93 },
+        drive: { x: 600, y: 93 },
+        w: { x: 800, y: 102 },
+        tacho: { x: 760, y: 220 },
+      },
     }),
   },
   {
@@ -57,6 +69,18 @@ export const demoDiagrams: { title: string; description: string; document: Diagr
         { id: "w7", from: "tank", to: "h" },
         { id: "w8", from: "tank", to: "e", port: 1 },
       ],
+      // One row at port height 120; the disturbance below it, entering the second junction from underneath,
+      // low enough that the level feedback passes between them.
+      layout: {
+        h_ref: { x: 40, y: 102 },
+        e: { x: 280, y: 96 },
+        ctrl: { x: 390, y: 92 },
+        valve: { x: 560, y: 93 },
+        net: { x: 720, y: 96 },
+        tank: { x: 840, y: 96 },
+        h: { x: 980, y: 102 },
+        q_out: { x: 480, y: 200 },
+      },
     }),
   },
   {
@@ -87,6 +111,19 @@ export const demoDiagrams: { title: string; description: string; document: Diagr
         { id: "w9", from: "pos", to: "x" },
         { id: "w10", from: "pos", to: "ep", port: 1 },
       ],
+      // The position loop at port height 120, the velocity loop raised to 60 (the fraction 3 px lower, as above), so the two feedback wires return
+      // at different heights (84 + 24 under the velocity loop, 144 + 24 under the position loop).
+      layout: {
+        x_ref: { x: 40, y: 102 },
+        ep: { x: 300, y: 96 },
+        cp: { x: 400, y: 92 },
+        ev: { x: 540, y: 36 },
+        cv: { x: 640, y: 32 },
+        motor: { x: 780, y: 33 },
+        v_pick: { x: 940, y: 52 },
+        pos: { x: 1040, y: 96 },
+        x: { x: 1160, y: 102 },
+      },
     }),
   },
 ];

@@ -2,8 +2,9 @@ import type { DiagramDocument, Block } from "@shared/diagram/schema";
 import { hasExpression } from "@shared/diagram/blockKinds";
 import type { CheckedResult } from "@shared/api/versions";
 import { expressionLatex } from "@shared/expr/exprLatex";
-import { estimatedSize, fallbackPosition, inPoint, outPoint } from "@shared/geometry/blockBox";
+import { boundsOf, captionBox, estimatedSize, fallbackPosition, inPoint, outPoint } from "@shared/geometry/blockBox";
 import { BLOCK_SHAPES } from "@shared/geometry/blockShape";
+import { indexBoxes, obstaclesFor } from "@shared/geometry/boxIndex";
 import { arrowHead, roundedPath, wireRoute, type Point } from "@shared/geometry/wireRoute";
 import { counted } from "@shared/text/words";
 
@@ -79,13 +80,18 @@ export function diagramSvg({ document: doc, result, meta, pins = [], typeset }: 
     placed.set(block.id, { block, x: at.x, y: at.y, ...sizeOf(block, tex), tex });
   });
   const all = [...placed.values()];
-  const x0 = Math.min(0, ...all.map((p) => p.x)) - 40, y0 = Math.min(0, ...all.map((p) => p.y)) - 40;
-  const x1 = Math.max(200, ...all.map((p) => p.x + p.w)) + 40, y1 = Math.max(100, ...all.map((p) => p.y + p.h)) + 60;
+  // The captions above blocks count too, or a long one on the outermost block is cut off at the figure's edge.
+  const drawn = boundsOf(all.flatMap((p) => [boxOfPlaced(p), captionBox(p.block, boxOfPlaced(p)) ?? boxOfPlaced(p)])) ?? { x: 0, y: 0, width: 0, height: 0 };
+  const x0 = Math.min(0, drawn.x) - 40, y0 = Math.min(0, drawn.y) - 40;
+  const x1 = Math.max(200, drawn.x + drawn.width) + 40, y1 = Math.max(100, drawn.y + drawn.height) + 60;
+  const index = indexBoxes(all.map((p) => [p.block.id, boxOfPlaced(p)] as const));
   const wires = doc.wires.flatMap((w, i) => {
     const s = placed.get(w.from), t = placed.get(w.to);
     if (!s || !t) return [];
-    const entry = inPoint(t.block, boxOfPlaced(t), w.port);
-    const pts = wireRoute({ source: outPoint(boxOfPlaced(s)), target: entry.at, side: entry.side, sourceBox: boxOfPlaced(s), targetBox: boxOfPlaced(t) });
+    const [sourceBox, targetBox] = [boxOfPlaced(s), boxOfPlaced(t)];
+    const entry = inPoint(t.block, targetBox, w.port);
+    const obstacles = obstaclesFor(index, w.from, w.to, sourceBox, targetBox);
+    const pts = wireRoute({ source: outPoint(sourceBox), target: entry.at, side: entry.side, sourceBox, targetBox, obstacles });
     const id = w.id ?? `wire-${i}`;
     return [{ id, pts, d: roundedPath(pts), head: arrowHead(pts) }];
   });

@@ -38,6 +38,19 @@ export function estimatedSize(block: Block): Size {
   }
 }
 
+/** The caption the canvas prints above a block (mono 11 px: 6.6 px a character, a 16.5-px line and a 2-px gap). */
+const CAPTION = { char: 6.6, height: 19 };
+
+/**
+ * The area of the caption above a block ("label · id", centred on it), or null for a terminal, whose name is
+ * inside it. Example: a gain "1" labelled "tachometer" with id "tacho" at (0, 100), 80 wide → 118.8 × 19 at (−19.4, 81).
+ */
+export function captionBox(block: Block, b: Box): Box | null {
+  if (block.type === "input" || block.type === "output") return null;
+  const width = (block.label ? `${block.label} · ${block.id}` : block.id).length * CAPTION.char;
+  return { x: b.x + b.width / 2 - width / 2, y: b.y - CAPTION.height, width, height: CAPTION.height };
+}
+
 /** Where a block without a stored position is placed: a loose grid in document order. Example: 0 → (48, 48). */
 export const fallbackPosition = (index: number): Point => ({ x: 48 + (index % 6) * 176, y: 48 + Math.floor(index / 6) * 128 });
 

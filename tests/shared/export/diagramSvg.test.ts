@@ -36,4 +36,18 @@ describe("diagramSvg (common practice: SVG 1.1 as XML)", () => {
     expect(pins[0]!.textContent).toContain("2");
     expect(svg).toContain("2. Check &lt;gain&gt;");
   });
+  it("widens the figure to hold a long caption on its outermost block, which used to run off the edge", () => {
+    // The plant is the rightmost block; its caption, centred on it, reaches far past its box.
+    const label = "plant with a caption much wider than its own box";
+    const long = diagramDocumentSchema.parse({ ...doc, blocks: doc.blocks.map((b) => (b.id === "g" ? { ...b, label } : b)), layout: { ...doc.layout, y: { x: 100, y: 200 } } });
+    const xml = parse(diagramSvg({ document: long, result: null, meta: { title: "Servo", version: 3, savedAt: "2026-12-03T07:00:00.000Z" }, typeset }));
+    const width = Number(xml.documentElement!.getAttribute("width"));
+    const caption = Array.from(xml.getElementsByTagName("text")).find((t) => t.textContent === `g: ${label}`)!;
+    // The caption is centred (text-anchor middle) in its block's group, inside the group shifted by the left margin.
+    const figure = Array.from(xml.getElementsByTagName("g")).find((g) => g.getAttribute("transform")?.startsWith("translate("))!;
+    const shift = Number(/translate\(([-\d.]+)/.exec(figure.getAttribute("transform")!)![1]);
+    // Sans 11 px runs about 0.55 em a character.
+    const right = Number(caption.getAttribute("x")) + shift + (label.length + 3) * 11 * 0.55 / 2;
+    expect(right).toBeLessThanOrEqual(width);
+  });
 });

@@ -2,7 +2,7 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import type { Point } from "@/features/editor/commands/types";
 import { sumDiameter, sumPortPlaces, type Side } from "@shared/geometry/sumPorts";
-import { arrowHead, GAP, midpointAlong, roundedPath, wireRoute, type Box } from "@shared/geometry/wireRoute";
+import { arrowHead, GAP, LEVEL, midpointAlong, roundedPath, wireRoute, type Box } from "@shared/geometry/wireRoute";
 
 const box = (x: number, y: number, width = 80, height = 48): Box => ({ x, y, width, height });
 /** Output on the right edge, middle height. */
@@ -12,16 +12,32 @@ const inOf = (b: Box, side: Side): Point =>
 
 const coord = fc.integer({ min: -600, max: 600 });
 
+/** Whether a segment gets more than 2 px inside the box, found by walking it pixel by pixel. */
+function passesUnder(p: Point, q: Point, b: Box): boolean {
+  const steps = Math.max(1, Math.ceil(Math.hypot(q.x - p.x, q.y - p.y)));
+  for (let i = 0; i <= steps; i += 1) {
+    const x = p.x + ((q.x - p.x) * i) / steps;
+    const y = p.y + ((q.y - p.y) * i) / steps;
+    if (x > b.x + 2 && x < b.x + b.width - 2 && y > b.y + 2 && y < b.y + b.height - 2) return true;
+  }
+  return false;
+}
+const routeUnder = (pts: Point[], b: Box) => pts.slice(1).some((q, i) => passesUnder(pts[i], q, b));
+
 describe("wire routing (common practice for block diagrams: orthogonal wires, feedback drawn underneath)", () => {
   it("every route is orthogonal, starts at the output, ends at the input and arrives from the port's side (property)", () => {
     fc.assert(
-      fc.property(coord, coord, coord, coord, fc.constantFrom<Side>("left", "top", "bottom"), (sx, sy, tx, ty, side) => {
+      fc.property(coord, coord, coord, coord, fc.constantFrom<Side>("left", "top", "bottom"), fc.option(fc.tuple(coord, coord)), (sx, sy, tx, ty, side, other) => {
         const sourceBox = box(sx, sy);
         const targetBox = box(tx, ty);
         const s = outOf(sourceBox);
         const t = inOf(targetBox, side);
-        const pts = wireRoute({ source: s, target: t, side, sourceBox, targetBox });
-        expect(pts[0]).toEqual(s);
+        const obstacles = other ? [box(other[0], other[1], 64, 56)] : [];
+        const pts = wireRoute({ source: s, target: t, side, sourceBox, targetBox, obstacles });
+        // It leaves from the output's edge: from the port itself, or level with the target when that is within LEVEL.
+        expect(pts[0].x).toBe(s.x);
+        if (pts.length !== 2 || side !== "left") expect(pts[0]).toEqual(s);
+        expect(Math.abs(pts[0].y - s.y)).toBeLessThan(LEVEL + 0.5);
         expect(pts[pts.length - 1]).toEqual(t);
         for (let i = 1; i < pts.length; i += 1) expect(pts[i].x === pts[i - 1].x || pts[i].y === pts[i - 1].y).toBe(true);
         if (pts.length < 2) return;
@@ -45,6 +61,74 @@ describe("wire routing (common practice for block diagrams: orthogonal wires, fe
       { x: 140, y: 64 },
       { x: 200, y: 64 },
     ]);
+  });
+
+  it("ports within LEVEL px of each other in height, target to the right, are joined by one straight run at the target's height", () => {
+    const a = box(0, 0);
+    const b = box(200, 3);
+    expect(wireRoute({ source: outOf(a), target: inOf(b, "left"), side: "left", sourceBox: a, targetBox: b })).toEqual([
+      { x: 80, y: 27 },
+      { x: 200, y: 27 },
+    ]);
+    const level = box(200, 0);
+    expect(wireRoute({ source: outOf(a), target: inOf(level, "left"), side: "left", sourceBox: a, targetBox: level })).toEqual([outOf(a), inOf(level, "left")]);
+    // As measured on the canvas, in fractions of a pixel: 4.00005 apart is still 4 px.
+    const measured = box(200, LEVEL + 0.00005);
+    expect(wireRoute({ source: outOf(a), target: inOf(measured, "left"), side: "left", sourceBox: a, targetBox: measured })).toHaveLength(2);
+    // One pixel more and it is a jog again, as before.
+    const off = box(200, LEVEL + 1);
+    expect(wireRoute({ source: outOf(a), target: inOf(off, "left"), side: "left", sourceBox: a, targetBox: off })).toHaveLength(4);
+  });
+
+  it("blocks 20 px apart at nearly the same height get a straight wire, not the hook under both that they used to get", () => {
+    const a = box(0, 0);
+    const b = box(100, 2);
+    const pts = wireRoute({ source: outOf(a), target: inOf(b, "left"), side: "left", sourceBox: a, targetBox: b });
+    expect(pts).toEqual([{ x: 80, y: 26 }, { x: 100, y: 26 }]);
+    expect(Math.max(...pts.map((p) => p.y))).toBeLessThan(a.y + a.height);
+  });
+
+  it("a jog whose halfway column runs through another block moves its vertical run to the nearest free column", () => {
+    const a = box(0, 0);
+    const b = box(400, 160);
+    // Straddles the halfway column x = 240, between the two ports' heights; its right side is the nearer.
+    const block = box(200, 60, 60, 48);
+    const pts = wireRoute({ source: outOf(a), target: inOf(b, "left"), side: "left", sourceBox: a, targetBox: b, obstacles: [block] });
+    expect(routeUnder(pts, block)).toBe(false);
+    expect(pts).toHaveLength(4);
+    expect(pts[1].x).toBe(block.x + block.width + GAP / 2);
+    // Without the block the column is the halfway one.
+    expect(wireRoute({ source: outOf(a), target: inOf(b, "left"), side: "left", sourceBox: a, targetBox: b })[1].x).toBe(240);
+  });
+
+  it("a straight wire with a block sitting on it goes around that block below, clear of it", () => {
+    const a = box(0, 0);
+    const b = box(400, 0);
+    const block = box(200, 4, 80, 40);
+    const pts = wireRoute({ source: outOf(a), target: inOf(b, "left"), side: "left", sourceBox: a, targetBox: b, obstacles: [block] });
+    expect(routeUnder(pts, block)).toBe(false);
+    expect(Math.max(...pts.map((p) => p.y))).toBe(48 + GAP);
+    expect(pts[pts.length - 1]).toEqual(inOf(b, "left"));
+  });
+
+  it("a feedback wire passes below a block between its ends that hangs lower than both", () => {
+    const junction = box(0, 0, 48, 48);
+    const plant = box(400, 0, 96, 48);
+    const hanging = box(200, 40, 80, 60);
+    const pts = wireRoute({ source: outOf(plant), target: inOf(junction, "bottom"), side: "bottom", sourceBox: plant, targetBox: junction, obstacles: [hanging] });
+    expect(routeUnder(pts, hanging)).toBe(false);
+    expect(Math.max(...pts.map((p) => p.y))).toBe(100 + GAP);
+  });
+
+  it("a wire into a bottom port whose drop after the stub would run through the junction itself drops beside it", () => {
+    // The source sits above and left; its stub ends over the junction's left half.
+    const sourceBox = box(0, -30);
+    const junction = box(88, 0, 48, 48);
+    const pts = wireRoute({ source: outOf(sourceBox), target: inOf(junction, "bottom"), side: "bottom", sourceBox, targetBox: junction });
+    expect(routeUnder(pts, junction)).toBe(false);
+    expect(routeUnder(pts, sourceBox)).toBe(false);
+    expect(pts[pts.length - 1]).toEqual(inOf(junction, "bottom"));
+    expect(pts[1]).toEqual({ x: junction.x + junction.width + GAP / 2, y: -6 });
   });
 
   it("unity feedback from the plant's output into the junction's bottom port runs below both blocks", () => {

@@ -4,6 +4,7 @@ import type { Block } from "@shared/diagram/schema";
 import { BLOCK_SHAPES } from "@shared/geometry/blockShape";
 import type { Severity } from "@shared/diagram/problems";
 import { boundsOf, inPoint, outPoint } from "@shared/geometry/blockBox";
+import { indexBoxes, obstaclesFor } from "@shared/geometry/boxIndex";
 import { nodeBox } from "@/features/editor/geometry/nodeBox";
 import { arrowHead, midpointAlong, roundedPath, wireRoute, type Box } from "@shared/geometry/wireRoute";
 import { strokeColor } from "@/features/editor/components/nodes/nodeStyle";
@@ -122,6 +123,7 @@ export const OverviewLayer = memo(function OverviewLayer({ nodes, edges, onPick,
   const named = useStore(legibleIds);
   const boxes = useMemo(() => new Map(nodes.map((n) => [n.id, nodeBox(n)])), [nodes]);
   const blocks = useMemo(() => new Map(nodes.map((n) => [n.id, n.data.block])), [nodes]);
+  const index = useMemo(() => indexBoxes(boxes), [boxes]);
   const wires = useMemo(
     () =>
       edges.flatMap((e) => {
@@ -130,12 +132,13 @@ export const OverviewLayer = memo(function OverviewLayer({ nodes, edges, onPick,
         const target = blocks.get(e.target);
         if (!sourceBox || !targetBox || !target) return [];
         const entry = inPoint(target, targetBox, portOfHandle(e.targetHandle));
-        const points = wireRoute({ source: outPoint(sourceBox), target: entry.at, side: entry.side, sourceBox, targetBox });
+        const obstacles = obstaclesFor(index, e.source, e.target, sourceBox, targetBox);
+        const points = wireRoute({ source: outPoint(sourceBox), target: entry.at, side: entry.side, sourceBox, targetBox, obstacles });
         const [highlighted, selected] = [e.data?.highlighted ?? false, e.selected ?? false];
         const look = wireLook(highlighted, selected, e.data?.problem ?? null);
         return [{ id: e.id, points, look, wide: highlighted || selected, isBreak: e.data?.isBreak ?? false }];
       }),
-    [edges, boxes, blocks],
+    [edges, boxes, blocks, index],
   );
   const bundles = useMemo(() => {
     // One look, one width: the look already says whether the wire is highlighted or selected.

@@ -1,8 +1,9 @@
 import { memo, useMemo } from "react";
 import { BaseEdge, useStore, type EdgeProps, type InternalNode, type ReactFlowState } from "@xyflow/react";
-import { midpointAlong, roundedPath, sameBox, wireRoute, type Box, type WirePlace } from "@shared/geometry/wireRoute";
+import { midpointAlong, roundedPath, sameBox, sameBoxes, wireRoute, type Box, type WirePlace } from "@shared/geometry/wireRoute";
 import type { Severity } from "@shared/diagram/problems";
-import type { SignalEdge } from "@/features/editor/lib/flowModel";
+import { nearbyBlocks } from "@/features/editor/geometry/nodeIndex";
+import type { FlowNode, SignalEdge } from "@/features/editor/lib/flowModel";
 
 /** Stroke colours and the matching arrowhead markers (defined once in WireMarkers). */
 const LOOK = {
@@ -54,10 +55,12 @@ export const SignalEdgeView = memo(function SignalEdgeView(props: EdgeProps<Sign
   const side = data?.side ?? "left";
   const sourceBox = useBox(source);
   const targetBox = useBox(target);
-  // Routing reruns only when an end moved or resized (useBox keeps a box's object while its numbers stay).
+  // The other blocks near the wire, the same array while their boxes stay (a grid query per change, not a scan).
+  const obstacles = useStore((s: ReactFlowState) => nearbyBlocks(s.nodes as FlowNode[], source, target, sourceBox, targetBox), sameBoxes);
+  // Routing reruns only when an end or a nearby block moved or resized (useBox keeps a box's object while its numbers stay).
   const points = useMemo(
-    () => wireRoute({ source: { x: sourceX, y: sourceY }, target: { x: targetX, y: targetY }, side, sourceBox, targetBox }),
-    [sourceX, sourceY, targetX, targetY, side, sourceBox, targetBox],
+    () => wireRoute({ source: { x: sourceX, y: sourceY }, target: { x: targetX, y: targetY }, side, sourceBox, targetBox, obstacles }),
+    [sourceX, sourceY, targetX, targetY, side, sourceBox, targetBox, obstacles],
   );
   const path = useMemo(() => roundedPath(points), [points]);
   const look = wireLook(data?.highlighted ?? false, selected ?? false, data?.problem ?? null);
