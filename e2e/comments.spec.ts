@@ -1,6 +1,6 @@
 import { readFile } from "node:fs/promises";
 import { expect, test, type Page } from "@playwright/test";
-import { createTeam, PASSWORD, seedDiagram, signUp, uniqueEmail } from "./helpers";
+import { createTeam, joinAsViewer, seedDiagram, signUp, uniqueEmail } from "./helpers";
 import { unityLoop } from "./loops";
 
 // Review comments as a team uses them (common practice for review tools: every member may comment, the diagram's
@@ -24,22 +24,7 @@ test("a viewer pins a comment on a block; the author is mailed a link that opens
   const id = await seedDiagram(page, teamId, unityLoop("Ram position loop", "4/(s*(s + 2))"), "First cut");
 
   // The author invites a viewer, who joins through the mailed invitation.
-  const viewerEmail = uniqueEmail("reviewer");
-  await page.goto(`/teams/${teamId}/members`);
-  await page.getByLabel("Colleague's e-mail").fill(viewerEmail);
-  await page.getByLabel("Role", { exact: true }).selectOption("viewer");
-  await page.getByRole("button", { name: "Send invitation" }).click();
-  await expect(page.getByRole("table", { name: "Open invitations" })).toContainText(viewerEmail);
-  await page.goto("/dev/mailbox");
-  const invite = await page.getByRole("article").filter({ hasText: `To ${viewerEmail}` }).getByRole("link", { name: /\/invite\// }).getAttribute("href");
-  const reviewerContext = await browser.newContext();
-  const reviewer = await reviewerContext.newPage();
-  await reviewer.setViewportSize({ width: 1400, height: 1000 });
-  await reviewer.goto(new URL(invite!).pathname);
-  await reviewer.getByLabel("Name").fill("Ravi Reviewer");
-  await reviewer.getByLabel("Password").fill(PASSWORD);
-  await reviewer.getByRole("button", { name: `Create account and join ${teamName}` }).click();
-  await expect(reviewer).toHaveURL(new RegExp(`/teams/${teamId}$`));
+  const { viewer: reviewer, context: reviewerContext, email: viewerEmail } = await joinAsViewer(page, browser, { id: teamId, name: teamName }, "Ravi Reviewer");
 
   // The viewer selects the plant and comments on it: the form suggests the selected block as the pin.
   await reviewer.goto(`/diagrams/${id}`);

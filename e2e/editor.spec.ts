@@ -1,5 +1,5 @@
 import { expect, test, type Locator, type Page } from "@playwright/test";
-import { PASSWORD, createTeam, signUp, uniqueEmail } from "./helpers";
+import { PASSWORD, createTeam, joinAsViewer, signUp, uniqueEmail } from "./helpers";
 
 // Canvas blocks and wires are found by the accessible names the editor gives them ("Transfer function G1",
 // "Wire w2 from e1 to G1"); handles are only used as drag points.
@@ -249,26 +249,8 @@ test("a viewer sees the same diagram and its result but cannot change it", async
   await saveVersion(page, "Open-loop plant");
   await expect(page.getByRole("toolbar", { name: "Editor" })).toContainText("Saved as v1");
 
-  // Invite a viewer; the invitation arrives in the dev mailbox.
-  const viewerEmail = uniqueEmail("viewer");
-  await page.goto(`/teams/${teamId}/members`);
-  await page.getByLabel("Colleague's e-mail").fill(viewerEmail);
-  await page.getByLabel("Role", { exact: true }).selectOption("viewer");
-  await page.getByRole("button", { name: "Send invitation" }).click();
-  await expect(page.getByRole("table", { name: "Open invitations" })).toContainText(viewerEmail);
-  await page.goto("/dev/mailbox");
-  const link = await page.getByRole("article").filter({ hasText: `To ${viewerEmail}` }).getByRole("link", { name: /\/invite\// }).getAttribute("href");
-
-  const viewerContext = await browser.newContext();
-  const viewer = await viewerContext.newPage();
-  await viewer.setViewportSize({ width: 1400, height: 1000 });
-  await viewer.goto(new URL(link!).pathname);
-  await viewer.getByLabel("Name").fill("Vik Viewer");
-  await viewer.getByLabel("Password").fill(PASSWORD);
-  await viewer.getByRole("button", { name: `Create account and join ${teamName}` }).click();
-  // Joined once the team page shows (the invitation page's own heading also names the team).
-  await expect(viewer).toHaveURL(new RegExp(`/teams/${teamId}$`));
-  await expect(viewer.getByRole("heading", { level: 1, name: teamName, exact: true })).toBeVisible();
+  // Invite a viewer; the invitation arrives in the dev mailbox and the viewer joins through it.
+  const { viewer, context: viewerContext } = await joinAsViewer(page, browser, { id: teamId, name: teamName }, "Vik Viewer");
 
   await openEditor(viewer, diagramPath);
   await expect(block(viewer, "Transfer function G1")).toBeVisible();

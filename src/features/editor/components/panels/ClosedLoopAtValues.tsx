@@ -1,6 +1,5 @@
 import type { Analysis } from "@shared/analysis/analyze";
-import { LargeTex } from "@/features/editor/components/LargeTex";
-import { transferText } from "@/features/editor/lib/resultText";
+import { TransferBox } from "@/features/editor/components/panels/TransferBox";
 
 interface Props {
   /** The analysis of the pair shown (it reduces the symbolic result at the values). */
@@ -19,16 +18,11 @@ export function ClosedLoopAtValues({ analysis, moved }: Props) {
   const { transfer, values } = analysis;
   if (Object.keys(values).length === 0) return null;
   return (
-    <section aria-label="Closed loop at the parameter values" className="rounded border border-rule bg-paper px-3 py-2">
-      <p className="text-xs text-ink-soft">
-        At the {moved ? "slider" : "nominal"} values ({valueList(values)})
-      </p>
-      <div className="overflow-x-auto py-1">
-        <LargeTex display latex={`T(s) = ${transfer.latex}`} what="T(s) at the values" plain={<span className="text-xs text-ink-soft">A large result: its text is below.</span>} />
-      </div>
-      <output aria-label="Closed loop at the parameter values as text" className="block font-mono text-xs break-all text-ink-soft">
-        {transferText(transfer)}
-      </output>
-    </section>
+    <TransferBox
+      name="Closed loop at the parameter values"
+      heading={`At the ${moved ? "slider" : "nominal"} values (${valueList(values)})`}
+      transfer={transfer}
+      what="T(s) at the values"
+    />
   );
 }

@@ -4,9 +4,10 @@ import { Button } from "@/components/Button";
 import type { Analysis } from "@shared/analysis/analyze";
 import { useEditorActions } from "@/features/editor/components/EditorContext";
 import { LargeTex } from "@/features/editor/components/LargeTex";
+import { TransferBox } from "@/features/editor/components/panels/TransferBox";
 import { ClosedLoopAtValues } from "@/features/editor/components/panels/ClosedLoopAtValues";
 import { pairKey, pairName, type ResultView } from "@/features/editor/lib/resultView";
-import { resultLatex, resultPlainText, transferText } from "@/features/editor/lib/resultText";
+import { resultLatex, resultPlainText } from "@/features/editor/lib/resultText";
 import type { LiveResult } from "@/features/editor/hooks/useLiveDiagram";
 import { plural } from "@shared/text/words";
 
@@ -59,17 +60,16 @@ export function ResultsPanel({ live, view, stale, onPair, atValues = null }: Pro
               </select>
             </div>
           )}
-          <section aria-label="Closed-loop transfer function" className="rounded border border-rule bg-paper px-3 py-2">
-            <p className="text-xs text-ink-soft">
-              From <span className="font-mono">{transfer.input}</span> to <span className="font-mono">{transfer.output}</span>
-            </p>
-            <div className="overflow-x-auto py-1">
-              <LargeTex display latex={`T(s) = ${transfer.latex}`} what="T(s)" plain={<span className="text-xs text-ink-soft">A large result: its text is below.</span>} />
-            </div>
-            <output aria-label="Closed-loop transfer function as text" className="block font-mono text-xs break-all text-ink-soft">
-              {transferText(transfer)}
-            </output>
-          </section>
+          <TransferBox
+            name="Closed-loop transfer function"
+            heading={
+              <>
+                From <span className="font-mono">{transfer.input}</span> to <span className="font-mono">{transfer.output}</span>
+              </>
+            }
+            transfer={transfer}
+            what="T(s)"
+          />
           {atValues && atValues.analysis.input === transfer.input && atValues.analysis.output === transfer.output && !stale && (
             <ClosedLoopAtValues analysis={atValues.analysis} moved={atValues.moved} />
           )}
