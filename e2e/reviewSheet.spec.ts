@@ -1,5 +1,5 @@
-import { expect, test, type Browser, type Page } from "@playwright/test";
-import { PASSWORD, createTeam, seedDiagram, signUp, uniqueEmail } from "./helpers";
+import { expect, test, type Page } from "@playwright/test";
+import { createTeam, joinAsViewer, seedDiagram, signUp, uniqueEmail } from "./helpers";
 import { unityLoop } from "./loops";
 
 /** Unity negative feedback around K/(s(s+2)) with K = 4: T = 4/(s² + 2s + 4), ζ = 0.5 (common practice). */
@@ -31,25 +31,6 @@ async function sheetReady(page: Page) {
   await expect.poll(() => figure.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth > 0), COLD_LOAD).toBe(true);
   await expect(sheet(page).getByRole("figure", { name: /^Unit-step response of v1/ })).toBeVisible(COLD_LOAD);
   await expect(sheet(page).getByRole("figure", { name: /^Closed-loop Bode plots of v1/ })).toBeVisible(COLD_LOAD);
-}
-
-/** Invites a viewer into the team and signs them up in a browser of their own. */
-async function joinAsViewer(page: Page, browser: Browser, teamId: string, teamName: string): Promise<Page> {
-  const email = uniqueEmail("sheet-viewer");
-  await page.goto(`/teams/${teamId}/members`);
-  await page.getByLabel("Colleague's e-mail").fill(email);
-  await page.getByLabel("Role", { exact: true }).selectOption("viewer");
-  await page.getByRole("button", { name: "Send invitation" }).click();
-  await expect(page.getByRole("table", { name: "Open invitations" })).toContainText(email);
-  await page.goto("/dev/mailbox");
-  const link = await page.getByRole("article").filter({ hasText: `To ${email}` }).getByRole("link", { name: /\/invite\// }).getAttribute("href");
-  const viewer = await (await browser.newContext()).newPage();
-  await viewer.goto(new URL(link!).pathname);
-  await viewer.getByLabel("Name").fill("Vik Viewer");
-  await viewer.getByLabel("Password").fill(PASSWORD);
-  await viewer.getByRole("button", { name: `Create account and join ${teamName}` }).click();
-  await expect(viewer).toHaveURL(new RegExp(`/teams/${teamId}$`));
-  return viewer;
 }
 
 test("the Export menu opens a one-page review sheet of the version that prints on A4 and on Letter", async ({ page }) => {
@@ -105,7 +86,7 @@ test("a viewer of the team opens the sheet from the versions table; a stranger i
   const { teamId, teamName } = await openImportedLoop(page);
   const sheetPath = `${new URL(page.url()).pathname}/versions/1/sheet`;
 
-  const viewer = await joinAsViewer(page, browser, teamId, teamName);
+  const { viewer } = await joinAsViewer(page, browser, { id: teamId, name: teamName }, "Vik Viewer");
   await viewer.goto(`${new URL(page.url()).origin}${sheetPath.replace(/\/1\/sheet$/, "")}`);
   await viewer.getByRole("link", { name: "Review sheet of v1" }).click();
   await expect(viewer).toHaveURL(new RegExp(`${sheetPath}$`));

@@ -1,9 +1,8 @@
 import { useState, type DragEvent, type ReactNode } from "react";
 import { useNavigate } from "react-router-dom";
-import { FileUp } from "lucide-react";
 import { toast } from "sonner";
 import { href } from "@shared/routes";
-import { buttonClass } from "@/components/Button";
+import { JsonFilePicker } from "@/components/JsonFilePicker";
 import { errorMessage, isApiError } from "@/lib/apiClient";
 import { useImportDiagram } from "@/features/diagrams/api/importDiagram";
 import { ProblemAlert } from "@/components/ProblemAlert";
@@ -55,20 +54,9 @@ export function ImportDiagramArea({ teamId, children }: { teamId: string; childr
       className={`flex flex-col gap-3 rounded ${over ? "outline-2 outline-dashed outline-signal" : ""}`}
     >
       <div className="flex flex-wrap items-center gap-3 text-sm">
-        <label className={`${buttonClass("secondary", "sm")} cursor-pointer focus-within:outline-2 focus-within:outline-signal`}>
-          <FileUp className="size-4" aria-hidden /> Import JSON
-          <input
-            type="file"
-            accept=".json,application/json"
-            className="sr-only"
-            disabled={importing.isPending}
-            onChange={(e) => {
-              const file = e.target.files?.[0];
-              e.target.value = ""; // picking the same file again after fixing it still fires a change
-              if (file) start(file);
-            }}
-          />
-        </label>
+        <JsonFilePicker disabled={importing.isPending} onFile={start}>
+          Import JSON
+        </JsonFilePicker>
         <span className="text-ink-soft" role="status">
           {importing.isPending ? "Importing…" : "or drop a .json diagram file on the list"}
         </span>

@@ -1,6 +1,6 @@
 import { useState } from "react";
-import { FileUp } from "lucide-react";
-import { Button, buttonClass } from "@/components/Button";
+import { Button } from "@/components/Button";
+import { JsonFilePicker } from "@/components/JsonFilePicker";
 import { errorMessage, isApiError } from "@/lib/apiClient";
 import { useImportVersion } from "@/features/editor/api/importVersion";
 import { ProblemAlert } from "@/components/ProblemAlert";
@@ -40,20 +40,9 @@ export function ImportVersion({ diagramId, teamId, dirty, onOpenLatest }: Props)
   return (
     <div className="mb-2 flex flex-col gap-2 text-sm">
       <div className="flex flex-wrap items-center gap-3">
-        <label className={`${buttonClass("secondary", "sm")} cursor-pointer focus-within:outline-2 focus-within:outline-signal`}>
-          <FileUp className="size-4" aria-hidden /> Import as new version…
-          <input
-            type="file"
-            accept=".json,application/json"
-            className="sr-only"
-            disabled={importing.isPending}
-            onChange={(e) => {
-              const file = e.target.files?.[0];
-              e.target.value = ""; // the same file, fixed, can be picked again
-              if (file) start(file);
-            }}
-          />
-        </label>
+        <JsonFilePicker disabled={importing.isPending} onFile={start}>
+          Import as new version…
+        </JsonFilePicker>
         <span role="status" className="text-ink-soft">
           {importing.isPending ? "Importing…" : imported !== null ? `Imported as version ${imported}.` : ""}
         </span>
