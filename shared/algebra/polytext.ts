@@ -2,7 +2,7 @@
 import type { Poly } from "@shared/algebra/poly";
 import { qMul, type Q } from "@shared/algebra/rational";
 import { zCoeffsS, type ZPoly } from "@shared/algebra/zpoly";
-import { nameLatex, readsAsWord } from "@shared/expr/names";
+import { nameLatex, nameText, readsAsWord } from "@shared/expr/names";
 
 type Mono = [name: string, exp: number][];
 /** A monomial with its coefficient's digits converted once for both styles (BigInt printing is costly). */
@@ -82,7 +82,7 @@ interface Style {
 const textStyle: Style = {
   num: (n, d) => (d ? `${n}/${d}` : n),
   power: (b, e) => (e === 1 ? b : `${b}^${e}`),
-  name: (n) => n,
+  name: nameText,
   times: () => "*",
   scale: "*",
   group: (inner) => `(${inner})`,

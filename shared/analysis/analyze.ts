@@ -4,6 +4,7 @@ import { polyConst, polyParams } from "@shared/algebra/poly";
 import { polyToText } from "@shared/algebra/polytext";
 import { ratDenominator, ratNumerator, ratReduceTracked } from "@shared/algebra/ratfn";
 import { qDiv, qOne, qToNumber, qToString, qZero } from "@shared/algebra/rational";
+import { deadTimeAt, type DeadTimeReport } from "@shared/analysis/deadTime";
 import { exactFactors } from "@shared/analysis/factors";
 import { bode, frequencyRange, type BodeData } from "@shared/analysis/frequency";
 import { analyzeLoop, fractionText, zpkOf, type LoopAnalysis } from "@shared/analysis/loopAnalysis";
@@ -40,6 +41,8 @@ export interface HiddenMode {
 
 export interface Analysis {
   input: string;
+  /** Dead times and the Padé order the figures rest on; null without dead times. */
+  deadTime: DeadTimeReport | null;
   output: string;
   values: Record<string, number>;
   transfer: { numerator: string; denominator: string; latex: string };
@@ -76,6 +79,8 @@ const CONDITIONS_DEGREE = 8;
 export function analyzeAt(p: PreparedAnalysis, opts: AnalyzeOptions = {}): Analysis {
   const values = { ...p.nominal, ...(opts.values ?? {}) };
   const notes: string[] = [];
+  const deadTime = p.delay && deadTimeAt(p.delay, values);
+  if (deadTime) notes.push(deadTime.note);
   const { num, den, cancelled } = transferAt(p.transfer, values);
   const denFactors = exactFactors(den, "denominator");
   const poles = rootsOf(den, denFactors);
@@ -122,6 +127,7 @@ export function analyzeAt(p: PreparedAnalysis, opts: AnalyzeOptions = {}): Analy
     bode: bode(zpk, frequencyRange(zpk)),
     loop,
     steadyState: steadyState(num, den, stability.verdict, loopNumeric, inputRole(p.doc, p.input)),
+    deadTime: deadTime?.report ?? null,
     notes: [...notes, ...(loop?.notes ?? [])],
   };
 }

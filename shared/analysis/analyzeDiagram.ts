@@ -64,7 +64,7 @@ export type Analyzer = (reduction: ExactReduction, q: AnalysisQuery) => Analysis
  * values only substitutes them. Example: createAnalyzer()(reduction, { input: null, …, values: { K: 2 } }).
  */
 export function createAnalyzer(): Analyzer {
-  let last: { reduction: ExactReduction; input: string | null; output: string | null; brk: string | null } | null = null;
+  let last: { reduction: ExactReduction; input: string | null; output: string | null; brk: string | null; pade: number | undefined } | null = null;
   let prepared: Prepared | null = null;
   let conditions: string[] | null = null;
   // The last answer and its query: a request that changes nothing the analysis reads (a block moved) reuses it.
@@ -75,13 +75,14 @@ export function createAnalyzer(): Analyzer {
   return (reduction, q) => {
     const notes: string[] = [];
     const brk = q.break;
-    const fresh = !last || last.reduction !== reduction || last.input !== q.input || last.output !== q.output || last.brk !== brk;
+    const pade = q.padeOrder;
+    const fresh = !last || last.reduction !== reduction || last.input !== q.input || last.output !== q.output || last.brk !== brk || last.pade !== pade;
     if (fresh) {
       last = null; // set again only once the preparation has not thrown
       sets.clear();
       sweeps.clear();
-      prepared = prepareAnalysis(reduction, { input: q.input ?? undefined, output: q.output ?? undefined, break: brk ?? undefined });
-      last = { reduction, input: q.input, output: q.output, brk };
+      prepared = prepareAnalysis(reduction, { input: q.input ?? undefined, output: q.output ?? undefined, break: brk ?? undefined, padeOrder: pade });
+      last = { reduction, input: q.input, output: q.output, brk, pade };
       answered = null;
     }
     const asked = JSON.stringify(q);
@@ -148,7 +149,10 @@ export type AnalyzeOutcome =
  * CLI's call. Never throws for bad input: every failure is a Problem with a code ("unknown-break-wire",
  * "degree-limit", the reducer's codes…). Example: analyzeDocument(json, { break: "w6" }).result.margins.
  */
-export function analyzeDocument(raw: unknown, opts: { input?: string; output?: string; break?: string; values?: Record<string, number>; settlingBand?: number } = {}): AnalyzeOutcome {
+export function analyzeDocument(
+  raw: unknown,
+  opts: { input?: string; output?: string; break?: string; values?: Record<string, number>; settlingBand?: number; padeOrder?: number } = {},
+): AnalyzeOutcome {
   const reduced = reduceDocumentExact(raw, { input: opts.input, output: opts.output });
   if (!reduced.ok) return reduced;
   const { reduction } = reduced;
@@ -160,6 +164,7 @@ export function analyzeDocument(raw: unknown, opts: { input?: string; output?: s
     settlingBand: opts.settlingBand ?? 0.02,
     sweepParameter: null,
     withSweep: false,
+    padeOrder: opts.padeOrder,
   });
   if (!answer.ok) return { ok: false, problems: answer.problems };
   return { ok: true, doc: reduction.diagram.doc, analysis: answer.analysis, result: analysisSummary(answer.analysis, reduction.warnings) };

@@ -27,6 +27,8 @@ export interface AnalysisQuery {
   sweepParameter: string | null;
   /** Compute the sweep (root locus and step overlay) — only while its tab is open, as it costs the most. */
   withSweep: boolean;
+  /** Order of the Padé approximant of each dead time (1–10); absent: 3. */
+  padeOrder?: number;
 }
 
 /** One row of the slider table: the parameter table's nominal value, range, unit and description. */

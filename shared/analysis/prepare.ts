@@ -11,12 +11,25 @@ import type { ExactCancellation } from "@shared/reduce/modes";
 import type { ExactReduction } from "@shared/reduce/reduceDiagram";
 import { AnalysisError } from "@shared/analysis/errors";
 import { defaultBreak, findBreak, loopGain, type BreakPoint } from "@shared/analysis/loopGain";
+import { PADE_DEFAULT, padeTable, polyPade, ratPade } from "@shared/analysis/pade";
+import type { DelaySymbol } from "@shared/reduce/blockGains";
 
 export interface PrepareOptions {
   input?: string;
   output?: string;
   /** A wire id or 0-based index into `wires`; default: see defaultBreak. */
   break?: string;
+  /** Order of the Padé approximant that stands for each dead time (1–10; default 3). */
+  padeOrder?: number;
+}
+
+/** The dead times of the diagram and the exact quasi-rational values before their Padé approximation. */
+export interface DelayInfo {
+  padeOrder: number;
+  delays: DelaySymbol[];
+  /** The pair's transfer and loop gain with e^(−sT) kept. */
+  exactTransfer: RatFn;
+  exactL: RatFn | null;
 }
 
 export interface PreparedAnalysis {
@@ -31,6 +44,8 @@ export interface PreparedAnalysis {
   cancelled: ExactCancellation[];
   characteristic: Poly;
   loop: { breakPoint: BreakPoint; L: RatFn } | null;
+  /** Dead times: transfer, χ and L above are their Padé approximations; null without dead times. */
+  delay: DelayInfo | null;
   /** Why there is no loop gain, when there is none. */
   loopNote: string | null;
   warnings: Problem[];
@@ -70,6 +85,9 @@ export function prepareAnalysis(reduction: ExactReduction, opts: PrepareOptions 
     if (l.ok) loop = { breakPoint, L: l.L };
     else loopNote = `The loop at ${breakPoint.label} cannot be formed: ${l.problems.filter((p) => p.severity === "error").map((p) => p.message).join("; ")}`;
   }
+  const padeOrder = opts.padeOrder ?? PADE_DEFAULT;
+  const table = padeTable(reduction.delays, padeOrder);
+  const delay: DelayInfo | null = table.length ? { padeOrder, delays: reduction.delays, exactTransfer: t.gain, exactL: loop?.L ?? null } : null;
   return {
     ok: true,
     prepared: {
@@ -78,12 +96,13 @@ export function prepareAnalysis(reduction: ExactReduction, opts: PrepareOptions 
       output: t.output,
       parameters,
       nominal,
-      transfer: t.gain,
-      cancelled: t.cancelled,
+      transfer: ratPade(t.gain, table),
+      cancelled: t.cancelled.map((c) => ({ ...c, factor: polyPade(c.factor, table) })),
       // The denominator of 1/χ: χ in the same normal form as every other denominator.
-      characteristic: ratDenominator(ratReduceTracked(polyConst(qOne), reduction.characteristic).value),
-      loop,
+      characteristic: ratDenominator(ratReduceTracked(polyConst(qOne), polyPade(reduction.characteristic, table)).value),
+      loop: loop && { ...loop, L: ratPade(loop.L, table) },
       loopNote,
+      delay,
       warnings: reduction.warnings,
     },
   };

@@ -99,6 +99,14 @@ export const analysisResultSchema = z.object({
   break: z.object({ wire: z.string(), index: z.number().int(), chosen: z.enum(["given", "default"]) }).nullable(),
   loopGain: z.object({ numerator: z.string(), denominator: z.string() }).nullable(),
   responses: z.object({ step: response, impulse: response, ramp: response }),
+  deadTime: z
+    .object({
+      padeOrder: z.number().int().min(1).max(10).describe("Order of the Padé approximant of each e^(-sT) behind poles, Routh array, time responses and margins."),
+      delays: z.array(z.object({ blocks: z.array(z.string()), seconds: z.number(), text: z.string() })),
+      exactTransfer: z.object({ numerator: z.string(), denominator: z.string(), latex: z.string() }).describe("The pair's transfer with exp(-T*s) kept."),
+    })
+    .nullable()
+    .describe("Dead-time blocks of the diagram; null when it has none."),
   notes: z.array(z.string()),
   warnings: z.array(problemSchema),
 });

@@ -69,6 +69,7 @@ export function analysisSummary(a: Analysis, warnings: Problem[]): AnalysisResul
     break: a.loop ? { wire: a.loop.breakPoint.label, index: a.loop.breakPoint.index, chosen: a.loop.breakPoint.chosen } : null,
     loopGain: a.loop ? { numerator: a.loop.L.numerator, denominator: a.loop.L.denominator } : null,
     responses: { step: response(a.responses.step), impulse: response(a.responses.impulse), ramp: response(a.responses.ramp) },
+    deadTime: a.deadTime,
     notes: a.notes,
     warnings,
   };

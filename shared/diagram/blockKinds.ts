@@ -9,12 +9,13 @@ import type { Block, BlockType } from "@shared/diagram/schema";
  * - "sum": adds the signals at its ports, each with its port's sign.
  * - "branch": passes its one input on to every wire out of it.
  * - "scale": its output is its input times the block's transfer, a rational function of s.
- * A kind that is not a rational function of s (a dead time e^(−sT)) needs a role of its own here.
+ * - "delay": its output is its input delayed by the dead time T of its expression, e^(−sT) — not a rational
+ *   function of s: the exact algebra carries e^(−sT) as a symbol of its own (shared/expr/names.ts delaySymbol).
  */
-export type SignalRole = "source" | "sink" | "sum" | "branch" | "scale";
+export type SignalRole = "source" | "sink" | "sum" | "branch" | "scale" | "delay";
 
 /** The `expr` field of a kind that has one: whether s may appear in it. */
-type ExpressionSpec<B> = B extends { expr: string } ? { mayContainS: boolean } : null;
+type ExpressionSpec<B> = B extends { expr: string } ? { mayContainS: boolean; sRefusal?: string } : null;
 
 export interface BlockKind<B extends Block = Block> {
   /** The kind's one name in every sentence, lower case: the rail, the panels and the problems all say it. */
@@ -40,6 +41,12 @@ export const BLOCK_KINDS: { readonly [T in BlockType]: BlockKind<Extract<Block, 
   gain: { name: "gain", role: "scale", expression: { mayContainS: false }, fixedTransfer: null },
   transfer: { name: "transfer function", role: "scale", expression: { mayContainS: true }, fixedTransfer: null },
   integrator: { name: "integrator", role: "scale", expression: null, fixedTransfer: ONE_OVER_S },
+  delay: {
+    name: "dead time",
+    role: "delay",
+    expression: { mayContainS: false, sRefusal: "a dead time: its expression is T in seconds (the block is e^(-sT))" },
+    fixedTransfer: null,
+  },
 };
 
 export type ExpressionBlock = Extract<Block, { expr: string }>;
@@ -49,6 +56,9 @@ export const hasExpression = (block: Block): block is ExpressionBlock => BLOCK_K
 
 /** The kind's name with its block id, as problems name a block. Example: namedBlock({ id: "p1", type: "branch" }) === 'pickoff point "p1"'. */
 export const namedBlock = (block: Pick<Block, "id" | "type">): string => `${BLOCK_KINDS[block.type].name} "${block.id}"`;
+
+/** The block's output is its input times a gain of its own (a transfer, or a dead time's e^(−sT)). Example: carriesGain(integrator) === true. */
+export const carriesGain = (block: Block): boolean => BLOCK_KINDS[block.type].role === "scale" || BLOCK_KINDS[block.type].role === "delay";
 
 /** The kind's row. Example: kindOf(block).role === "scale" for a transfer block. */
 export const kindOf = (block: Block): BlockKind => BLOCK_KINDS[block.type] as BlockKind;

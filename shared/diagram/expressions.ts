@@ -21,7 +21,8 @@ export function expressionProblems(doc: DiagramDocument): { problems: Problem[];
     const fixed = BLOCK_KINDS[block.type].fixedTransfer;
     if (fixed) degree += exprDegreeBound(fixed);
     if (!hasExpression(block)) continue;
-    const parsed = parseExpression(block.expr, { allowS: BLOCK_KINDS[block.type].expression.mayContainS, parameters });
+    const { mayContainS, sRefusal } = BLOCK_KINDS[block.type].expression;
+    const parsed = parseExpression(block.expr, { allowS: mayContainS, sRefusal, parameters });
     if (!parsed.ok) {
       for (const { code, message, position } of parsed.errors) {
         problems.push({ severity: "error", code, message: `Block "${block.id}", expr: ${message}`, blockId: block.id, field: "expr", position });

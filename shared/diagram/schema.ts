@@ -59,6 +59,11 @@ export const blockSchema = z.discriminatedUnion("type", [
     expr: z.string().describe("Rational expression in s, numbers and parameters. Example: K*(s+2)/(tau*s^2 + s)."),
   }),
   z.looseObject({ ...blockBase, type: z.literal("integrator") }),
+  z.looseObject({
+    ...blockBase,
+    type: z.literal("delay"),
+    expr: z.string().describe("Dead time T in seconds (the block is e^(-sT)): a number or parameter expression, no s. Example: 0.2 or Td."),
+  }),
   z.looseObject({ ...blockBase, type: z.literal("branch") }),
 ]);
 

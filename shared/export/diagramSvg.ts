@@ -1,7 +1,7 @@
 import type { DiagramDocument, Block } from "@shared/diagram/schema";
 import { hasExpression } from "@shared/diagram/blockKinds";
 import type { CheckedResult } from "@shared/api/versions";
-import { expressionLatex } from "@shared/expr/exprLatex";
+import { delayLatex, expressionLatex } from "@shared/expr/exprLatex";
 import { boundsOf, captionBox, estimatedSize, fallbackPosition, inPoint, outPoint } from "@shared/geometry/blockBox";
 import { BLOCK_SHAPES } from "@shared/geometry/blockShape";
 import { indexBoxes, obstaclesFor } from "@shared/geometry/boxIndex";
@@ -29,6 +29,8 @@ export const xmlEscape = (s: string) => s.replace(/[<>&"']/g, (c) => ({ "<": "&l
 interface Placed { block: Block; x: number; y: number; w: number; h: number; tex: Typeset | null }
 
 const r1 = (v: number) => Math.round(v * 10) / 10;
+/** How far a dead time's parallelogram leans, in px. */
+const SLANT = 10;
 
 function sizeOf(block: Block, tex: Typeset | null): { w: number; h: number } {
   const est = estimatedSize(block);
@@ -45,6 +47,7 @@ function shapeOf(p: Placed): string {
     case "dot": return `<circle class="pickoff" cx="${r1(x + w / 2)}" cy="${r1(y + h / 2)}" r="6" fill="${INK}"/>`;
     case "triangle": return `<polygon points="${r1(x)},${r1(y)} ${r1(x + w)},${r1(y + h / 2)} ${r1(x)},${r1(y + h)}" ${paint}/>`;
     case "pill": return `<rect x="${r1(x)}" y="${r1(y)}" width="${r1(w)}" height="${h}" rx="${h / 2}" ${paint}/>`;
+    case "slant": return `<polygon points="${r1(x + SLANT)},${r1(y)} ${r1(x + w)},${r1(y)} ${r1(x + w - SLANT)},${r1(y + h)} ${r1(x)},${r1(y + h)}" ${paint}/>`;
     default: return `<rect x="${r1(x)}" y="${r1(y)}" width="${r1(w)}" height="${r1(h)}" rx="2" ${paint}/>`;
   }
 }
@@ -74,7 +77,7 @@ export function diagramSvg({ document: doc, result, meta, pins = [], typeset }: 
   const layout = doc.layout ?? {};
   const placed = new Map<string, Placed>();
   doc.blocks.forEach((block, i) => {
-    const latex = block.type === "integrator" ? "\\frac{1}{s}" : hasExpression(block) ? expressionLatex(block.expr) : null;
+    const latex = block.type === "integrator" ? "\\frac{1}{s}" : block.type === "delay" ? delayLatex(block.expr) : hasExpression(block) ? expressionLatex(block.expr) : null;
     const tex = latex ? typeset(latex) : null;
     const at = layout[block.id] ?? fallbackPosition(i);
     placed.set(block.id, { block, x: at.x, y: at.y, ...sizeOf(block, tex), tex });

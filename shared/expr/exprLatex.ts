@@ -152,6 +152,18 @@ export function expressionLatex(expr: string): string | null {
 }
 
 /**
+ * LaTeX of a dead-time block e^(−sT) from its T as typed; null when T does not parse.
+ * Example: delayLatex("0.2") === "e^{-0.2\\,s}", delayLatex("T_d + 1") === "e^{-\\left(T_{d} + 1\\right)s}".
+ */
+export function delayLatex(expr: string): string | null {
+  const ast = blockExpression(expr);
+  if (!ast) return null;
+  const t = exprLatex(ast);
+  const atom = ast.kind === "num" || ast.kind === "param";
+  return atom ? `e^{-${t}\\,s}` : `e^{-\\left(${t}\\right)s}`;
+}
+
+/**
  * Numerator and denominator of an expression as plain text (denominator null when the top level is not a
  * division), for the far-zoom drawing; null when it does not parse. Example: "K/(s+2)" → { num: "K", den: "s + 2" }.
  */

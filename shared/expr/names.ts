@@ -18,6 +18,7 @@ const baseAndSub = (name: string): [string, string] => {
  * Example: nameLatex("omega_n") === "\\omega_{n}".
  */
 export function nameLatex(name: string): string {
+  if (isDelaySymbol(name)) return name.slice(name.indexOf(DELAY_MARK) + 1);
   const [base, sub] = baseAndSub(name);
   const head = isGreek(base) ? `\\${base}` : base.length > 1 ? `\\mathit{${base}}` : base;
   return sub ? `${head}_{${sub.replaceAll("_", "\\_")}}` : head;
@@ -29,6 +30,27 @@ export function nameLatex(name: string): string {
  * Example: readsAsWord("Kpos") === true, readsAsWord("K_p") === false.
  */
 export function readsAsWord(name: string): boolean {
+  if (isDelaySymbol(name)) return false;
   const [base] = baseAndSub(name);
   return base.length > 1 && !isGreek(base);
 }
+
+// A dead time e^(−sT) is not a rational function of s: the exact algebra carries it as a symbol of its own whose
+// name holds both its printed forms, so every printer shows it without a side table and no user name can clash.
+const DELAY_MARK = "\u241E";
+
+/**
+ * The symbol standing for e^(−sT), from T's expression text and LaTeX (T has no s).
+ * Example: nameText(delaySymbol("1/2", "\\frac{1}{2}")) === "exp(-1/2*s)".
+ */
+export function delaySymbol(tText: string, tLatex: string): string {
+  const simple = /^[\w.]+$/.test(tText) || /^\d+\/\d+$/.test(tText);
+  const latexSimple = /^[\w\\{}]+$/.test(tLatex) || tLatex.startsWith("\\frac");
+  return `exp(-${simple ? tText : `(${tText})`}*s)${DELAY_MARK}e^{-${latexSimple ? tLatex : `\\left(${tLatex}\\right)`}\\,s}`;
+}
+
+/** Whether a variable of the algebra is a dead-time symbol. Example: isDelaySymbol("K") === false. */
+export const isDelaySymbol = (name: string): boolean => name.includes(DELAY_MARK);
+
+/** A variable as expression syntax: its name, or a dead time's exp(−T*s). Example: nameText("K") === "K". */
+export const nameText = (name: string): string => (isDelaySymbol(name) ? name.slice(0, name.indexOf(DELAY_MARK)) : name);

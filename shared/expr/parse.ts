@@ -33,6 +33,8 @@ export type ParseErrorCode =
 export interface ParseOptions {
   /** False for a gain: its expression may not contain `s`. */
   allowS: boolean;
+  /** Where `s` is refused, as the message says it; default "a gain; use a transfer block for expressions in s". */
+  sRefusal?: string;
   /** Declared parameter names; any other name is an error. */
   parameters: Iterable<string>;
   /** Size limits; default LIMITS. Printed results are read back (in tests) with wider ones. */
@@ -76,7 +78,7 @@ export function parseExpression(text: string, options: ParseOptions): ParseResul
   const lexed = lexExpression(text);
   if ("error" in lexed) return fail(lexed.error.code, lexed.error.message, lexed.error.position);
   const parameters = new Set(options.parameters);
-  const alsoWrong = () => tokenRefusals(lexed.tokens, parameters, options.allowS);
+  const alsoWrong = () => tokenRefusals(lexed.tokens, parameters, options.allowS, options.sRefusal);
   let tree: MathNode;
   const masked = maskForMathjs(text, lexed.tokens);
   try {
@@ -85,7 +87,7 @@ export function parseExpression(text: string, options: ParseOptions): ParseResul
     return withOthers(mathjsSyntaxFailure(err, text, lexed.tokens, masked.original), alsoWrong());
   }
   try {
-    const walker = new TreeWalker(lexed.tokens, parameters, options.allowS, limits.exponent);
+    const walker = new TreeWalker(lexed.tokens, parameters, options.allowS, limits.exponent, options.sRefusal);
     return { ok: true, ast: walker.walkAll(tree) };
   } catch (err) {
     if (err instanceof Refusal) return withOthers(fail(err.code, err.message, err.position), alsoWrong());
@@ -101,20 +103,18 @@ function withOthers(first: ParseFailure, others: Refusal[]): ParseFailure {
 }
 
 /** What is wrong with single tokens whatever the syntax around them: names (unknown, `s` in a gain, calls) and numbers. */
-function tokenRefusals(tokens: Token[], parameters: Set<string>, allowS: boolean): Refusal[] {
+function tokenRefusals(tokens: Token[], parameters: Set<string>, allowS: boolean, sRefusal?: string): Refusal[] {
   return tokens.flatMap((token, i) => {
-    const refusal = token.kind === "name" ? nameRefusal(tokens, i, parameters, allowS) : token.kind === "num" ? numberRefusal(token) : null;
+    const refusal = token.kind === "name" ? nameRefusal(tokens, i, parameters, allowS, sRefusal) : token.kind === "num" ? numberRefusal(token) : null;
     return refusal ? [refusal] : [];
   });
 }
 
 /** The error of the name token `tokens[i]`, or null when it reads as `s` or a declared parameter. */
-function nameRefusal(tokens: Token[], i: number, parameters: Set<string>, allowS: boolean): Refusal | null {
+function nameRefusal(tokens: Token[], i: number, parameters: Set<string>, allowS: boolean, sRefusal = "a gain; use a transfer block for expressions in s"): Refusal | null {
   const token = tokens[i];
   if (token.text === "s") {
-    return allowS
-      ? null
-      : new Refusal("s-in-gain", `\`s\` at position ${token.position} is not allowed in a gain; use a transfer block for expressions in s`, token.position);
+    return allowS ? null : new Refusal("s-in-gain", `\`s\` at position ${token.position} is not allowed in ${sRefusal}`, token.position);
   }
   if (parameters.has(token.text)) return null;
   if (tokens[i + 1]?.implicit && tokens[i + 2]?.kind === "lparen") {
@@ -191,6 +191,7 @@ class TreeWalker {
     private readonly parameters: Set<string>,
     private readonly allowS: boolean,
     private readonly maxExponent: number,
+    private readonly sRefusal?: string,
   ) {}
 
   walkAll(tree: MathNode): ExprNode {
@@ -285,7 +286,7 @@ class TreeWalker {
   private name(token: Token): ExprNode {
     if (token.kind !== "name") return this.refuseAt(token);
     // `take` has moved past the name: it is the token before `at`.
-    const refusal = nameRefusal(this.tokens, this.at - 1, this.parameters, this.allowS);
+    const refusal = nameRefusal(this.tokens, this.at - 1, this.parameters, this.allowS, this.sRefusal);
     if (refusal) throw refusal;
     return token.text === "s" ? { kind: "s" } : { kind: "param", name: token.text };
   }

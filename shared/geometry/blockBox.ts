@@ -31,6 +31,8 @@ export function estimatedSize(block: Block): Size {
       return { width: Math.max(56, 52 + textWidth(block.label ?? block.id, 8, 240)), height: 36 };
     case "gain":
       return { width: Math.max(80, 36 + textWidth(block.expr, 16, 220)), height: 56 };
+    case "delay":
+      return { width: Math.max(88, 56 + textWidth(block.expr, 16, 200)), height: 48 };
     case "transfer": {
       const fraction = block.expr.includes("/");
       return { width: Math.max(80, 28 + textWidth(fraction ? block.expr.slice(0, Math.ceil(block.expr.length / 2)) : block.expr, 16, 260)), height: fraction ? 60 : 48 };

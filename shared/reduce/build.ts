@@ -4,12 +4,12 @@ import { wireLabel, type DiagramDocument } from "@shared/diagram/schema";
 import { SignalFlowGraph } from "@shared/reduce/graph";
 
 /** Roles whose node the reducer consumes when it eliminates it (the others live on as edge labels or ends). */
-const OWN_NODE: Record<SignalRole, boolean> = { source: false, sink: false, sum: true, branch: true, scale: false };
+const OWN_NODE: Record<SignalRole, boolean> = { source: false, sink: false, sum: true, branch: true, scale: false, delay: false };
 
 /**
  * The signal-flow graph of a validated document: one node per block (its output signal); each wire becomes an
- * edge by the role of the block it enters (see SignalRole): into a "scale" block, an edge labelled with that
- * block and carrying its gain; into a sum port, a bare edge of gain ±1 (the port's sign); into a branch or a
+ * edge by the role of the block it enters (see SignalRole): into a "scale" or "delay" block, an edge labelled
+ * with that block and carrying its gain (a dead time's is its symbol e^(−sT)); into a sum port, a bare edge of gain ±1 (the port's sign); into a branch or a
  * sink, a bare edge of gain 1; into a source, nothing. `gains` holds the gain of every "scale" block.
  * Example: wire c → p (p a transfer block) becomes the edge c → p labelled "p" with gain G_p.
  */
@@ -31,7 +31,8 @@ export function buildSignalGraph<T>(
     switch (role) {
       case "source":
         return;
-      case "scale": {
+      case "scale":
+      case "delay": {
         const gain = gains.get(target.id);
         if (gain === undefined) throw new Error(`No gain given for block "${target.id}"`);
         graph.addEdge({ from: w.from, to: w.to, gain, label: target.id, sign: 1, blocks: [], wires });

@@ -1,5 +1,5 @@
 import {
-  polyCoeffsS, polyConst, polyDegree, polyEvaluateAt, polyGcd, polyMonic, polyMul, type Poly,
+  polyCoeffsS, polyConst, polyDegree, polyEvaluateAt, polyGcd, polyMonic, polyMul, polyParams, type Poly,
 } from "@shared/algebra/poly";
 import { polyToText } from "@shared/algebra/polytext";
 import { qOne } from "@shared/algebra/rational";
@@ -7,6 +7,7 @@ import {
   ratDegrees, ratDenominator, ratField, ratIsZero, ratMul, ratNumerator, ratReduceTracked, type RatFn,
 } from "@shared/algebra/ratfn";
 import { polyRoots } from "@shared/algebra/roots";
+import { isDelaySymbol } from "@shared/expr/names";
 import type { LoopCheck } from "@shared/reduce/loops";
 import { fieldProduct } from "@shared/reduce/eliminate";
 import type { PairTransfer } from "@shared/reduce/reduce";
@@ -61,9 +62,14 @@ export function characteristicPolynomial(
   return withoutContent(parts.reduce(polyMul, ONE));
 }
 
-/** The polynomial divided by its content (the gcd of its coefficients in s), made monic. */
-const withoutContent = (p: Poly): Poly =>
-  polyMonic(ratNumerator(ratReduceTracked(p, polyCoeffsS(p).reduce(polyGcd)).value));
+/**
+ * The polynomial divided by its content (the gcd of its coefficients in s), made monic. A content holding a dead
+ * time's symbol stays: 1 + K·e^(−sT) is free of s only in the symbols, not in s, and its roots are modes.
+ */
+function withoutContent(p: Poly): Poly {
+  const content = polyCoeffsS(p).reduce(polyGcd);
+  return polyMonic(polyParams(content).some(isDelaySymbol) ? p : ratNumerator(ratReduceTracked(p, content).value));
+}
 
 /** Has a root with real part ≥ 0, allowing for rounding (1e-9 relative). */
 const unstableRoot = ([re, im]: [number, number]): boolean => re >= -1e-9 * Math.max(1, Math.hypot(re, im));
@@ -93,6 +99,8 @@ export function cancelledModes(
   const result = factors
     .filter((f) => polyDegree(f) > 0)
     .map((f) => {
+      // A hidden mode through a dead time has infinitely many roots: the analysis's Padé poles stand for them.
+      if (polyParams(f).some(isDelaySymbol)) return { factor: f, roots: [], unstable: false };
       const roots = polyRoots(polyEvaluateAt(f, nominal));
       return { factor: f, roots, unstable: roots.some(unstableRoot) };
     });

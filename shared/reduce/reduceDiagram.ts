@@ -4,7 +4,7 @@ import { ratField, type RatFn } from "@shared/algebra/ratfn";
 import { parseDiagram, type ParsedDiagram } from "@shared/diagram/parseDiagram";
 import type { Problem } from "@shared/diagram/problems";
 import { parameterValue, type DiagramDocument } from "@shared/diagram/schema";
-import { blockGains } from "@shared/reduce/blockGains";
+import { blockGains, type DelaySymbol } from "@shared/reduce/blockGains";
 import { cancelledModes, characteristicPolynomial, type ExactCancellation } from "@shared/reduce/modes";
 import { selectPairs } from "@shared/reduce/pairs";
 import { checkLoops } from "@shared/reduce/loops";
@@ -40,8 +40,10 @@ export interface ExactTransfer {
 /** What the reducer hands the next stages: exact values only; printing is printReduction's job. */
 export interface ExactReduction {
   diagram: ParsedDiagram;
-  /** The exact gain of every block that scales its input. */
+  /** The exact gain of every block that scales or delays its input. */
   gains: ReadonlyMap<string, RatFn>;
+  /** The dead times: each a symbol standing for e^(−sT) in the gains, transfers, χ and trace (none: []). */
+  delays: DelaySymbol[];
   /** The signal-flow graph of the whole diagram, untouched by the reduction (the analysis cuts it at a break). */
   graph: SignalFlowGraph<RatFn>;
   transfers: ExactTransfer[];
@@ -72,10 +74,10 @@ export function reduceDiagram(diagram: ParsedDiagram, opts: ReduceOptions = {}):
   const { doc } = diagram;
   const selection = selectPairs(doc, opts);
   const found = [...diagram.warnings, ...selection.problems];
-  const { gains, problems: gainProblems } = blockGains(doc, diagram.expressions);
+  const { gains, delays, problems: gainProblems } = blockGains(doc, diagram.expressions);
   if (found.some(isError) || gainProblems.length > 0) return refuse(doc, gains, [...found, ...gainProblems], opts);
   try {
-    return reduceChecked(diagram, gains, selection.pairs, found, opts);
+    return reduceChecked(diagram, gains, delays, selection.pairs, found, opts);
   } catch (err) {
     const problem = reductionProblem(err);
     if (!problem) throw err;
@@ -124,6 +126,7 @@ function refuse(doc: DiagramDocument, gains: ReadonlyMap<string, RatFn>, found: 
 function reduceChecked(
   diagram: ParsedDiagram,
   gains: Map<string, RatFn>,
+  delays: DelaySymbol[],
   pairs: [string, string][],
   found: Problem[],
   opts: ReduceOptions,
@@ -156,6 +159,7 @@ function reduceChecked(
     reduction: {
       diagram,
       gains,
+      delays,
       graph,
       transfers: transfers.map(({ input, output, gain }) => ({ input, output, gain, cancelled: cancelledModes(chi, gain, nominal, cache) })),
       characteristic: chi,

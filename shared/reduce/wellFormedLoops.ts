@@ -1,5 +1,5 @@
 import { ratField, type RatFn } from "@shared/algebra/ratfn";
-import { kindOf } from "@shared/diagram/blockKinds";
+import { carriesGain } from "@shared/diagram/blockKinds";
 import type { Problem } from "@shared/diagram/problems";
 import { wireLabel, type DiagramDocument } from "@shared/diagram/schema";
 import type { Budget } from "@shared/reduce/budget";
@@ -27,7 +27,7 @@ export function wellFormedLoopProblems(
   const counts = new Map<string, number>();
   for (const b of doc.blocks) counts.set(b.id, (counts.get(b.id) ?? 0) + 1);
   const usable = new Set(
-    doc.blocks.filter((b) => counts.get(b.id) === 1 && (kindOf(b).role !== "scale" || gains.has(b.id))).map((b) => b.id),
+    doc.blocks.filter((b) => counts.get(b.id) === 1 && (!carriesGain(b) || gains.has(b.id))).map((b) => b.id),
   );
   const wired = doc.wires.map((wire, i) => ({ wire, sound: !doubtfulWires.has(wireLabel(wire, i)) }));
   const judged = new Set<string>();

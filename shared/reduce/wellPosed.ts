@@ -5,6 +5,8 @@ import {
   ratDegrees, ratDenominator, ratDiv, ratField, ratIsZero, ratNumerator, ratReduceTracked, type RatFn,
 } from "@shared/algebra/ratfn";
 import { polyParamRoots } from "@shared/algebra/roots";
+import { ratAtZero } from "@shared/algebra/substitute";
+import { isDelaySymbol } from "@shared/expr/names";
 import type { Problem } from "@shared/diagram/problems";
 import { fieldProduct } from "@shared/reduce/eliminate";
 
@@ -33,6 +35,18 @@ function zeroSet(p: Poly): string | null {
 }
 
 const ONE = polyConst(qOne);
+
+const delaysIn = (f: RatFn): string[] => [...polyParams(ratNumerator(f)), ...polyParams(ratDenominator(f))].filter(isDelaySymbol);
+
+/**
+ * Δ's factors as s → ∞ along the real axis, where every e^(−sT) (T > 0) vanishes, so a loop through a dead time
+ * is never algebraic. The symbols are set to 0 in the product (a single factor may hold e^(−sT) in its denominator).
+ */
+function withoutDelays(factors: readonly RatFn[]): readonly RatFn[] {
+  if (!factors.some((f) => delaysIn(f).length)) return factors;
+  const delta = fieldProduct(ratField, factors);
+  return [[...new Set(delaysIn(delta))].reduce((g, v) => ratAtZero(g, v), delta)];
+}
 const ratio = (num: Poly, den: Poly): RatFn => ratReduceTracked(num, den).value;
 /** Content in the parameters (gcd of the coefficients in s); 1 without parameters, where it cannot vanish. */
 const content = (p: Poly): Poly => (polyParams(p).length === 0 ? ONE : polyCoeffsS(p).reduce(polyGcd));
@@ -77,7 +91,7 @@ export function loopProblems(loops: readonly FactoredLoop[], gains: ReadonlyMap<
       const g = gains.get(id);
       return !g || ratDegrees(g).num <= ratDegrees(g).den;
     });
-    const { order, params } = shape(factors);
+    const { order, params } = shape(withoutDelays(factors));
     if (order < 0) {
       say(proper ? "error" : "warning", "improper-loop", `The loop through ${names} has a return difference that vanishes as s → ∞, so the closed loop would be improper (an algebraic loop at high frequency). Change a gain in the loop or make one of its blocks strictly proper.`);
       continue;

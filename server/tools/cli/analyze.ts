@@ -1,5 +1,6 @@
 import type { Problem } from "@shared/diagram/problems";
 import { analyzeDocument } from "@shared/analysis/analyzeDiagram";
+import { PADE_MAX, PADE_MIN } from "@shared/analysis/pade";
 import type { AnalysisResult } from "@shared/analysis/schema";
 import { counted, plural } from "@shared/text/words";
 import { parseReduceArgs } from "@server/tools/cli/args";
@@ -7,10 +8,10 @@ import { CliExit, readJsonFile, runCommand, usageError as cliUsageError } from "
 import { formatProblem } from "@server/tools/cli/report";
 
 /**
- * `analyze FILE.json [--json] [--input ID] [--output ID] [--break WIRE]` — public contract, called from teams' CI.
+ * `analyze FILE.json [--json] [--input ID] [--output ID] [--break WIRE] [--pade N]` — public contract, called from teams' CI.
  * Exit 0 success, 1 bad file content, 2 bad command line (unknown --break too), 3 internal error; never a stack trace.
  */
-const USAGE = "usage: analyze FILE.json [--json] [--input ID] [--output ID] [--break WIRE]   (analyze --help for details)";
+const USAGE = "usage: analyze FILE.json [--json] [--input ID] [--output ID] [--break WIRE] [--pade N]   (analyze --help for details)";
 
 const HELP = `analyze — stability, Routh array, step response, margins and steady state of a Loopwright diagram
 
@@ -24,12 +25,14 @@ ${USAGE}
   --break WIRE  the wire where the loop gain L = −w/u is taken for margins and the Nyquist plot: a wire id
                 or its 0-based index in "wires" (default: the wire into the minus port of the first
                 summing junction with a minus sign that the input reaches)
+  --pade N      order (1–10, default 3) of the Padé approximant that stands for each dead-time block
+                e^(-sT) in the poles, Routh array, time responses and margins ("deadTime" in --json)
   -h, --help    this text
 
 Parameters take their nominal values. A quantity that does not exist (no overshoot, an infinite margin,
 an unstable system) is null, with the reason in "notes".
-These results describe the linear model as drawn; actuator limits, saturation, delays and nonlinearity are
-not in it. Validate on the plant and follow your functional-safety process and local codes.
+These results describe the linear model as drawn; dead times enter through their Padé approximant (see
+--pade); actuator limits, saturation and other nonlinearity are not in it. Validate on the plant and follow your functional-safety process and local codes.
 
 Exit status:
   0  analysed; the result is on stdout (warnings included)
@@ -42,22 +45,31 @@ Exit status:
 
 const usageError = (message: string) => cliUsageError("analyze", USAGE, message);
 
-/** Takes `--break WIRE` / `--break=WIRE` out of argv; the rest is the reduce command line. */
-function splitBreak(argv: readonly string[]): { rest: string[]; wire?: string } {
+/** Takes `--NAME VALUE` / `--NAME=VALUE` out of argv (not after "--"); the rest is the reduce command line. */
+function takeOption(argv: readonly string[], name: string, hint: string): { rest: string[]; value?: string } {
   const rest: string[] = [];
-  let wire: string | undefined;
+  let value: string | undefined;
+  const pattern = new RegExp(`^--${name}(?:=(.*))?$`);
   for (let i = 0; i < argv.length; i++) {
-    const m = /^--break(?:=(.*))?$/.exec(argv[i]);
+    const m = pattern.exec(argv[i]);
     if (!m || argv.slice(0, i).includes("--")) {
       rest.push(argv[i]);
       continue;
     }
-    const value = m[1] ?? argv[++i];
-    if (value === undefined || value === "" || (m[1] === undefined && value.startsWith("--"))) throw usageError("--break needs a wire id or index, e.g. --break w6");
-    if (wire !== undefined) throw usageError("--break is given twice");
-    wire = value;
+    const given = m[1] ?? argv[++i];
+    if (given === undefined || given === "" || (m[1] === undefined && given.startsWith("--"))) throw usageError(`--${name} needs ${hint}`);
+    if (value !== undefined) throw usageError(`--${name} is given twice`);
+    value = given;
   }
-  return { rest, wire };
+  return { rest, value };
+}
+
+/** `--pade N`: an integer from 1 to 10. */
+function padeOrderOf(text: string | undefined): number | undefined {
+  if (text === undefined) return undefined;
+  const n = Number(text);
+  if (!Number.isInteger(n) || n < PADE_MIN || n > PADE_MAX) throw usageError(`--pade must be an integer from ${PADE_MIN} to ${PADE_MAX}, not "${text}"`);
+  return n;
 }
 
 const USAGE_CODES = new Set(["unknown-pair-id", "unknown-break-wire"]);
@@ -86,13 +98,15 @@ function report(r: AnalysisResult, title: string | undefined): string {
 }
 
 function run(argv: readonly string[]): string {
-  const { rest, wire } = splitBreak(argv);
-  const parsed = parseReduceArgs(rest);
+  const brk = takeOption(argv, "break", "a wire id or index, e.g. --break w6");
+  const pade = takeOption(brk.rest, "pade", `an order from ${PADE_MIN} to ${PADE_MAX}, e.g. --pade 5`);
+  const padeOrder = padeOrderOf(pade.value);
+  const parsed = parseReduceArgs(pade.rest);
   if (parsed.kind === "help") return HELP;
   if (parsed.kind === "usage-error") throw usageError(parsed.message);
   const { file, json, input, output } = parsed.args;
   const raw = readJsonFile("analyze", USAGE, file);
-  const out = analyzeDocument(raw, { input, output, break: wire });
+  const out = analyzeDocument(raw, { input, output, break: brk.value, padeOrder });
   if (!out.ok) {
     const usage = out.problems.filter((p: Problem) => USAGE_CODES.has(p.code));
     if (usage.length) throw new CliExit(2, [...usage.map((p) => `analyze: ${p.message}`), USAGE]);

@@ -2,9 +2,9 @@ import type { NodeTypes } from "@xyflow/react";
 import { BLOCK_KINDS } from "@shared/diagram/blockKinds";
 import type { Block, BlockType } from "@shared/diagram/schema";
 import { capital } from "@shared/text/words";
-import { ArrowLeftToLine, ArrowRightFromLine, CircleDot, CirclePlus, Divide, Triangle } from "lucide-react";
+import { ArrowLeftToLine, ArrowRightFromLine, CircleDot, CirclePlus, Divide, Hourglass, Triangle } from "lucide-react";
 import type { ReactNode } from "react";
-import { GainNode, IntegratorNode, TransferNode } from "@/features/editor/components/nodes/ExpressionNodes";
+import { DelayNode, GainNode, IntegratorNode, TransferNode } from "@/features/editor/components/nodes/ExpressionNodes";
 import { SumNode } from "@/features/editor/components/nodes/SumNode";
 import { BranchNode, InputNode, OutputNode } from "@/features/editor/components/nodes/TerminalNodes";
 
@@ -61,6 +61,13 @@ export const BLOCK_VIEWS: Record<BlockType, BlockKindView> = {
     idPrefix: "int",
     create: (id) => ({ id, type: "integrator" }),
     node: IntegratorNode,
+  },
+  delay: {
+    name: nameOf("delay"),
+    rail: { short: "Dead time", key: "8", glyph: <Hourglass className="size-5" />, hint: "e^(−sT): delays its input by T seconds" },
+    idPrefix: "d",
+    create: (id) => ({ id, type: "delay", expr: "0.1" }),
+    node: DelayNode,
   },
   branch: {
     name: nameOf("branch"),

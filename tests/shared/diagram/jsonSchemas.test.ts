@@ -27,7 +27,7 @@ describe("published JSON Schemas", () => {
     expect(schema.required.sort()).toEqual(["blocks", "format", "version", "wires"]);
     expect(schema.properties.format.const).toBe("loopwright-diagram");
     expect(schema.properties.version.const).toBe(1);
-    expect(schema.properties.blocks.items?.oneOf).toHaveLength(7);
+    expect(schema.properties.blocks.items?.oneOf).toHaveLength(8); // input, output, sum, gain, transfer, integrator, dead time, pickoff point
     expect(schema.additionalProperties).toEqual({}); // unknown fields are allowed
   });
 

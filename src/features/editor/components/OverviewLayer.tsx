@@ -63,6 +63,7 @@ const OverviewBlock = memo(function OverviewBlock({ block, named, x, y, width: w
     triangle: () => <polygon points={`${x},${y} ${x + w},${y + h / 2} ${x},${y + h}`} {...paint} />,
     pill: () => <rect x={x} y={y} width={w} height={h} rx={h / 2} {...paint} />,
     box: () => <rect x={x} y={y} width={w} height={h} rx={2} {...paint} />,
+    slant: () => <polygon points={`${x + 10},${y} ${x + w},${y} ${x + w - 10},${y + h} ${x},${y + h}`} {...paint} />,
   }[look]();
   const pick = (additive: boolean) => onPick({ id: block.id, additive });
   const onKeyDown = (e: KeyboardEvent) => {

@@ -1,4 +1,6 @@
 import type { NodeProps } from "@xyflow/react";
+import { useMemo } from "react";
+import { delayLatex } from "@shared/expr/exprLatex";
 import { Caption } from "@/features/editor/components/nodes/Caption";
 import { blockMemo } from "@/features/editor/components/nodes/blockMemo";
 import { useFarView } from "@/features/editor/components/nodes/farView";
@@ -52,6 +54,38 @@ export const GainNode = blockMemo(function GainNode({ data, selected }: NodeProp
         />
       </svg>
       <Formula expr={data.block.expr} />
+      <InPort />
+      <OutPort />
+    </div>
+  );
+});
+
+/** A dead time e^(−sT): a parallelogram leaning the way time runs, T typeset in the exponent. */
+export const DelayNode = blockMemo(function DelayNode({ data, selected }: NodeProps<NodeOf<"delay">>) {
+  const far = useFarView();
+  const stroke = strokeColor(selected, data.highlighted, data.problem);
+  const fill = data.highlighted ? "#f8ecd6" : "#fcfbf8";
+  const latex = useMemo(() => delayLatex(data.block.expr), [data.block.expr]);
+  return (
+    <div className="relative flex h-12 min-w-22 items-center justify-center px-5">
+      <Caption block={data.block} />
+      <svg aria-hidden className="absolute inset-0 -z-10 size-full overflow-visible" preserveAspectRatio="none" viewBox="0 0 100 100">
+        <polygon
+          points="12,2 99,2 88,98 1,98"
+          fill={fill}
+          stroke={stroke}
+          strokeWidth={2}
+          strokeDasharray={data.problem === "error" && !selected && !data.highlighted ? "6 4" : undefined}
+          vectorEffect="non-scaling-stroke"
+        />
+      </svg>
+      {latex === null ? (
+        <span className="font-mono text-xs text-fault">{data.block.expr || "∅"}</span>
+      ) : far ? (
+        <span className="font-serif text-[15px] whitespace-nowrap italic">e^(−{data.block.expr}·s)</span>
+      ) : (
+        <Tex latex={latex} className="text-[15px]" />
+      )}
       <InPort />
       <OutPort />
     </div>
