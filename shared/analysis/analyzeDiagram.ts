@@ -11,11 +11,12 @@ import { prepareAnalysis, type Prepared, type PreparedAnalysis } from "@shared/a
 import type { AnalysisResult } from "@shared/analysis/schema";
 import { stableSet, type StableSet } from "@shared/analysis/stableSet";
 import { analysisSummary } from "@shared/analysis/summary";
-import { parameterRange, rootLocus, stepOverlay, sweepValues } from "@shared/analysis/sweep";
+import { parameterRange, stepOverlay, sweepValues } from "@shared/analysis/sweep";
+import { wholeLocus } from "@shared/analysis/wholeLocus";
 import type { Problem } from "@shared/diagram/problems";
 import { reduceDocumentExact, type ExactReduction } from "@shared/reduce/reduceDiagram";
 
-/** Points of the root locus and step responses in the overlay. */
+/** Points of the root locus (per sign of the gain, besides its landmarks) and step responses in the overlay. */
 export const LOCUS_POINTS = 200;
 export const OVERLAY_VALUES = 5;
 /** Entries kept per cache before it is emptied (a slider drag visits many values). */
@@ -106,7 +107,7 @@ export function createAnalyzer(): Analyzer {
         const stableSets = polyParams(den).map((name) => sets.get(`${name}|${othersKey(at, name)}`, () => stableSet(den, name, at)));
         analysis = { ...fast, stableSets, conditions };
       }
-      const sweep = q.withSweep ? sweepOf(p, q.sweepParameter, at, analysis.plotHorizon, sweeps, notes) : null;
+      const sweep = q.withSweep ? sweepOf(p, { wanted: q.sweepParameter, negative: q.negative ?? false }, at, analysis.plotHorizon, sweeps, notes) : null;
       const index = analysis.loop?.breakPoint.index;
       const wireId = index === undefined ? undefined : p.doc.wires[index]?.id;
       const breakWire: BreakWire | null = wireId && analysis.loop ? { id: wireId, chosen: analysis.loop.breakPoint.chosen } : null;
@@ -121,16 +122,16 @@ export function createAnalyzer(): Analyzer {
 }
 
 /** The sweep of the chosen (else the first) parameter, others at the slider values; null without parameters. */
-function sweepOf(p: PreparedAnalysis, wanted: string | null, at: Record<string, number>, tEnd: number, cache: Cache<Omit<SweepData, "current">>, notes: string[]): SweepData | null {
+function sweepOf(p: PreparedAnalysis, { wanted, negative }: { wanted: string | null; negative: boolean }, at: Record<string, number>, tEnd: number, cache: Cache<Omit<SweepData, "current">>, notes: string[]): SweepData | null {
   const parameter = wanted !== null && p.parameters.includes(wanted) ? wanted : p.parameters[0];
   if (parameter === undefined) return null;
   try {
-    const made = cache.get(`${parameter}|${othersKey(at, parameter)}`, () => {
+    const made = cache.get(`${parameter}|${negative}|${othersKey(at, parameter)}`, () => {
       const range = parameterRange(p.doc, parameter);
-      const locus = rootLocus(p, parameter, range, LOCUS_POINTS, at);
+      const whole = wholeLocus(p, parameter, range, { n: LOCUS_POINTS, base: at, negative });
       // stepOverlay holds the other parameters at `nominal`: hand it the slider values in that place.
       const overlay = stepOverlay({ ...p, nominal: at }, parameter, sweepValues(range, OVERLAY_VALUES), tEnd);
-      return { parameter, range, locus, overlay };
+      return { parameter, range, locus: whole.positive, negativeLocus: whole.negative, geometry: whole.geometry, locusNote: whole.note, overlay };
     });
     return { ...made, current: at[parameter] };
   } catch (err) {

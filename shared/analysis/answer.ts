@@ -1,13 +1,17 @@
 // The analysis stage's contract: what the editor and the CLI ask of it and what it answers.
 import type { Analysis } from "@shared/analysis/analyze";
+import type { LocusGeometry } from "@shared/analysis/locusGeometry";
 import type { RootLocus } from "@shared/analysis/sweep";
 import type { Problem } from "@shared/diagram/problems";
 
-/** What the sweep tab draws for one parameter: the root locus over its range and step responses across it. */
+/** What the sweep tab draws for one parameter: the root locus over all its gains and step responses across its range. */
 export interface SweepData {
   parameter: string;
-  range: [number, number];
-  locus: RootLocus;                                  // closed-loop poles over the range, others at the slider values
+  range: [number, number];                           // the slider range: a highlighted part of the locus
+  locus: RootLocus;                                  // closed-loop poles from 0 to far out, others at the slider values
+  negativeLocus: RootLocus | null;                   // from 0 down to far out, when asked (or the range reaches below 0)
+  geometry: LocusGeometry | null;                    // poles, zeros, asymptotes, breakaways, crossings (χ affine in it)
+  locusNote: string | null;                          // why there are no landmarks, else null
   overlay: { value: number; points: [number, number][] }[]; // step responses at 5 values across the range
   current: number;                                   // the slider value now
 }
@@ -29,6 +33,8 @@ export interface AnalysisQuery {
   withSweep: boolean;
   /** Order of the Padé approximant of each dead time (1–10); absent: 3. */
   padeOrder?: number;
+  /** Also sample the locus over negative gains (−∞ → 0). */
+  negative?: boolean;
 }
 
 /** One row of the slider table: the parameter table's nominal value, range, unit and description. */

@@ -1,6 +1,7 @@
 // Numbers of a closed-form response as they are printed: exact a + b·√r, or a float to 12 significant digits.
-import { q, qAdd, qIsZero, qNeg, qToNumber, qToString, type Q } from "@shared/algebra/rational";
-import { surdLatex, surdText } from "@shared/analysis/surd";
+import { q, qAdd, qIsZero, qMul, qNeg, qSub, qToNumber, qToString, type Q } from "@shared/algebra/rational";
+import { sqrtRational, surdLatex, surdText } from "@shared/analysis/surd";
+import { upDeg, type UPoly } from "@shared/analysis/upoly";
 
 /** a + b·√rad (rad a square-free integer ≥ 1; b = 0 for a rational), or a float. */
 export type Shown = { readonly a: Q; readonly b: Q; readonly rad: bigint } | number;
@@ -49,3 +50,24 @@ export function shownLatex(x: Shown): string {
 
 /** True for an exact or float zero. Example: shownIsZero(0) === true. */
 export const shownIsZero = (x: Shown): boolean => (typeof x === "number" ? x === 0 : isExactZero(x));
+
+/** The rational a Shown denotes, or null for a surd or a float. Example: shownRational(shownQ(q(2))) is 2. */
+export const shownRational = (x: Shown): Q | null =>
+  typeof x === "number" ? null : qIsZero(x.b) ? x.a : x.rad === 1n ? qAdd(x.a, x.b) : null;
+
+/**
+ * The real roots of a MONIC polynomial of degree ≤ 2, exact and ascending (rational or quadratic surd);
+ * null above degree 2. Example: shownRealRoots(s^2 + 2s − 2) prints ["-1 - sqrt(3)", "-1 + sqrt(3)"].
+ */
+export function shownRealRoots(f: UPoly): Shown[] | null {
+  if (upDeg(f) === 1) return [shownQ(qNeg(f[0]))];
+  if (upDeg(f) !== 2) return null;
+  const disc = qSub(qMul(f[1], f[1]), qMul(q(4), f[0]));
+  if (disc.n < 0n) return [];
+  const { coef, rad } = sqrtRational(disc);
+  const mid = qMul(qNeg(f[1]), q(1, 2));
+  return [-1, 1].map((sign) => {
+    const off = qMul(coef, q(sign, 2));
+    return rad === 1n ? shownQ(qAdd(mid, off)) : { a: mid, b: off, rad };
+  });
+}

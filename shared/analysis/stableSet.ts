@@ -2,14 +2,13 @@
 // Routh array change sign only where a root crosses the imaginary axis or the degree drops; those places are
 // found exactly (Orlando: Δ_{n−1} = 0 ⇔ two roots sum to zero), and each piece is decided exactly.
 import { polyCoeffsS, polyDegree, type Poly } from "@shared/algebra/poly";
-import { q, qAdd, qDiv, qMul, qNeg, qOne, qSub, type Q } from "@shared/algebra/rational";
+import { q, qDiv, qMul, qNeg, qOne, qSub, type Q } from "@shared/algebra/rational";
 import { zDeg, type ZPoly } from "@shared/algebra/zpoly";
 import { exactFactors } from "@shared/analysis/factors";
 import { exactValue, polySubstitute } from "@shared/analysis/nominal";
-import { shownLatex, shownQ, shownText, shownValue, type Shown } from "@shared/analysis/shown";
+import { shownLatex, shownRational, shownRealRoots, shownText, shownValue } from "@shared/analysis/shown";
 import { stabilityOf } from "@shared/analysis/stability";
 import { realRoots } from "@shared/analysis/sturm";
-import { sqrtRational } from "@shared/analysis/surd";
 import { upAdd, upDeg, upFrom, upFromPoly, upMul, upScale, upText, type UPoly } from "@shared/analysis/upoly";
 
 export interface Endpoint {
@@ -103,19 +102,9 @@ interface Boundary extends Endpoint {
 
 /** Real roots of one monic factor as endpoints: exact for degree ≤ 2 (rational or quadratic surd). */
 function endpointsOf(f: UPoly, name: string): Boundary[] {
-  const exact = (x: Shown, rational: Q | null): Boundary => ({
-    value: shownValue(x), text: shownText(x), latex: shownLatex(x), exact: true, polynomial: null, rational,
-  });
-  if (upDeg(f) === 1) return [exact(shownQ(qNeg(f[0])), qNeg(f[0]))];
-  if (upDeg(f) === 2) {
-    const disc = qSub(qMul(f[1], f[1]), qMul(q(4), f[0]));
-    if (disc.n < 0n) return [];
-    const { coef, rad } = sqrtRational(disc);
-    const mid = qMul(qNeg(f[1]), q(1, 2));
-    return [-1, 1].map((sign) => {
-      const off = qMul(coef, q(sign, 2));
-      return rad === 1n ? exact(shownQ(qAdd(mid, off)), qAdd(mid, off)) : exact({ a: mid, b: off, rad }, null);
-    });
+  const exact = shownRealRoots(f);
+  if (exact) {
+    return exact.map((x) => ({ value: shownValue(x), text: shownText(x), latex: shownLatex(x), exact: true, polynomial: null, rational: shownRational(x) }));
   }
   const polynomial = upText(f, name);
   return realRoots(f).map((x) => {

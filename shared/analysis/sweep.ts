@@ -43,9 +43,13 @@ export interface RootLocus {
  * Example: rootLocus(p, "K", [0.1, 100], 200).branches.length === degree of the denominator.
  */
 export function rootLocus(p: PreparedAnalysis, name: string, range: [number, number], n = 200, base: Record<string, number> = p.nominal): RootLocus {
+  return locusAt(p, name, sweepValues(range, n), base);
+}
+
+/** The locus at given values of the parameter (in the order given). Example: locusAt(p, "K", [0, 1, 2], p.nominal). */
+export function locusAt(p: PreparedAnalysis, name: string, values: number[], base: Record<string, number>): RootLocus {
   if (!p.parameters.includes(name)) throw new AnalysisError("unknown-parameter", `There is no parameter "${name}".`, name);
   const den = ratDenominator(p.transfer);
-  const values = sweepValues(range, n);
   const branches: ([number, number] | null)[][] = [];
   const last: [number, number][] = []; // last known position of each branch
   values.forEach((v, i) => {

@@ -104,7 +104,7 @@ export function EditorSession(props: Props) {
   // The pair the user chose; none: the first input and output, which is also the results panel's default.
   const [pair, setPair] = useState<{ input: string; output: string } | null>(null);
   // Slider values, band, swept parameter and break live here, not in the document: analysing never dirties it.
-  const [analysisSettings, setAnalysisSettings] = useState<AnalysisSettings>({ values: {}, band: 0.02, sweepParameter: null, sweepShown: false, break: null });
+  const [analysisSettings, setAnalysisSettings] = useState<AnalysisSettings>({ values: {}, band: 0.02, sweepParameter: null, sweepShown: false, sweepNegative: false, break: null });
   const changeAnalysis = useCallback((change: Partial<AnalysisSettings>) => setAnalysisSettings((s) => ({ ...s, ...change })), []);
   const { result: live, analysis } = useLiveDiagram(doc, { ...analysisSettings, input: pair?.input ?? null, output: pair?.output ?? null });
   const view = useMemo(() => resultView(live.outcome, pair && pairKey(pair)), [live.outcome, pair]);

@@ -19,6 +19,8 @@ export interface AnalysisSettings {
   sweepParameter: string | null;
   /** The sweep tab is open: only then are the root locus and step overlay computed. */
   sweepShown: boolean;
+  /** The locus is also drawn over negative gains. */
+  sweepNegative: boolean;
 }
 
 export type AnalysisOptions = AnalysisSettings & { input: string | null; output: string | null };
@@ -78,6 +80,7 @@ const queryOf = (o: AnalysisOptions): AnalysisQuery => ({
   settlingBand: o.band,
   sweepParameter: o.sweepParameter,
   withSweep: o.sweepShown,
+  negative: o.sweepNegative,
 });
 
 function analysisFrom(s: LiveAnalysis, answer: AnalysisAnswer, pending: boolean, ms: number): LiveAnalysis {
@@ -127,7 +130,7 @@ export function useLiveDiagram(doc: EditorDoc, opts: AnalysisOptions): { result:
     channel.current?.request({ document: d, analysis: queryOf(o) });
   };
 
-  const { input, output, break: brk, values, band, sweepParameter, sweepShown } = opts;
+  const { input, output, break: brk, values, band, sweepParameter, sweepShown, sweepNegative } = opts;
   const optionsSeen = useRef(false);
   useEffect(() => {
     // Option changes go straight through; the first run is the opening request's, which the document sends.
@@ -137,7 +140,7 @@ export function useLiveDiagram(doc: EditorDoc, opts: AnalysisOptions): { result:
     }
     setAnalysis((s) => (s.pending ? s : { ...s, pending: true }));
     send();
-  }, [input, output, brk, values, band, sweepParameter, sweepShown]);
+  }, [input, output, brk, values, band, sweepParameter, sweepShown, sweepNegative]);
 
   const opened = useRef(false);
   useLayoutEffect(() => {

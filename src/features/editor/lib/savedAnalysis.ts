@@ -12,4 +12,5 @@ export const SAVED_VERSION_ANALYSIS: AnalysisOptions = {
   band: 0.02,
   sweepParameter: null,
   sweepShown: false,
+  sweepNegative: false,
 };

@@ -99,7 +99,7 @@ function tabsFor(result: NonNullable<LiveAnalysis["result"]>, settings: Analysis
       key: "sweep",
       label: "Parameter sweep",
       // The sweep is computed only while this tab is open: the first answer after opening it brings it.
-      render: () => (sweep || !hasParameters ? <SweepView sweep={sweep} analysis={analysis} /> : <p className="text-sm text-ink-soft">Computing the root locus…</p>),
+      render: () => (sweep || !hasParameters ? <SweepView sweep={sweep} analysis={analysis} negative={settings.sweepNegative} onNegative={(sweepNegative) => onSettings({ sweepNegative })} /> : <p className="text-sm text-ink-soft">Computing the root locus…</p>),
     },
     { key: "help", label: "Definitions", render: () => <AnalysisHelp /> },
   ];

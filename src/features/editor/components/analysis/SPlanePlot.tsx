@@ -4,7 +4,7 @@ import { useId } from "react";
 import { niceStep } from "@shared/analysis/axisSteps";
 import { formatComplex, formatNumber } from "@/features/editor/lib/analysisFormat";
 
-export type MarkerKind = "pole" | "zero" | "start" | "end";
+export type MarkerKind = "pole" | "zero" | "start" | "end" | "breakaway" | "crossing";
 
 export interface SPlaneMarker {
   re: number;
@@ -14,10 +14,27 @@ export interface SPlaneMarker {
   label?: string;
   /** Drawn heavier with a ring (dominant poles, current closed-loop poles). */
   emphasis?: boolean;
+  /** What the marker's tooltip says, when the kind and position are not enough (e.g. the gain there). */
+  title?: string;
 }
 
 /** A curve through the plane; null entries break it (e.g. where a locus branch does not exist). */
 export type SPlanePath = ([number, number] | null)[];
+
+/** Lines drawn over the paths: asymptotes (dashed, not fitted into the frame), a highlighted part, negative-gain branches. */
+export type GuideKind = "asymptote" | "highlight" | "negative";
+export interface SPlaneGuide {
+  path: SPlanePath;
+  kind: GuideKind;
+}
+
+type LegendKind = MarkerKind | GuideKind | "ring" | "line";
+
+const GUIDE_STYLE: Record<GuideKind, { className: string; width: number; dash?: string }> = {
+  asymptote: { className: "stroke-ink-faint", width: 1.2, dash: "6 4" },
+  highlight: { className: "stroke-trace", width: 5 },
+  negative: { className: "stroke-ink-soft", width: 1.4, dash: "2 3" },
+};
 
 interface Props {
   /** Accessible name of the chart. */
@@ -26,8 +43,9 @@ interface Props {
   description: string;
   markers: SPlaneMarker[];
   paths?: SPlanePath[];
+  guides?: SPlaneGuide[];
   /** Legend entries for what the markers mean; the caller knows which kinds it drew. */
-  legend?: { symbol: MarkerKind | "ring" | "line"; text: string }[];
+  legend?: { symbol: LegendKind; text: string }[];
 }
 
 const W = 520;
@@ -61,7 +79,7 @@ const ticks = ([lo, hi]: readonly [number, number], step: number) =>
 
 function Marker({ m, x, y, decorative = false }: { m: SPlaneMarker; x: number; y: number; decorative?: boolean }) {
   const r = m.emphasis ? 6 : 5;
-  const title = `${m.kind} at ${formatComplex([m.re, m.im])}${m.label ? ` (multiplicity ${m.label})` : ""}`;
+  const title = m.title ?? `${m.kind} at ${formatComplex([m.re, m.im])}${m.label ? ` (multiplicity ${m.label})` : ""}`;
   return (
     <g>
       {!decorative && <title>{title}</title>}
@@ -72,6 +90,8 @@ function Marker({ m, x, y, decorative = false }: { m: SPlaneMarker; x: number; y
       {m.kind === "zero" && <circle cx={x} cy={y} r={r} className="fill-paper-raised stroke-signal" strokeWidth={2} />}
       {m.kind === "start" && <circle cx={x} cy={y} r={3} className="fill-ink-soft" />}
       {m.kind === "end" && <rect x={x - 3.5} y={y - 3.5} width={7} height={7} className="fill-paper-raised stroke-ink-soft" strokeWidth={1.5} />}
+      {m.kind === "breakaway" && <path d={`M${x} ${y - 5}L${x + 5} ${y}L${x} ${y + 5}L${x - 5} ${y}Z`} className="fill-steady stroke-ink" strokeWidth={1} />}
+      {m.kind === "crossing" && <path d={`M${x} ${y - 5.5}L${x + 5} ${y + 4}L${x - 5} ${y + 4}Z`} className="fill-fault stroke-ink" strokeWidth={1} />}
       {m.label && (
         <text x={x + r + 3} y={y - r - 1} className="fill-ink text-[11px] font-semibold">
           {m.label}
@@ -81,20 +101,25 @@ function Marker({ m, x, y, decorative = false }: { m: SPlaneMarker; x: number; y
   );
 }
 
-function LegendSymbol({ symbol }: { symbol: MarkerKind | "ring" | "line" }) {
-  const m = { re: 0, im: 0, kind: symbol === "ring" ? "pole" : symbol === "line" ? "start" : symbol, emphasis: symbol === "ring" } as SPlaneMarker;
+function LegendSymbol({ symbol }: { symbol: LegendKind }) {
+  const guide = symbol in GUIDE_STYLE ? GUIDE_STYLE[symbol as GuideKind] : null;
+  const m = { re: 0, im: 0, kind: symbol === "ring" ? "pole" : symbol, emphasis: symbol === "ring" } as SPlaneMarker;
   return (
     <svg width={24} height={24} viewBox="-12 -12 24 24" aria-hidden="true">
-      {symbol === "line" ? <path d="M-10 0H10" className="stroke-signal" strokeWidth={2} /> : <Marker m={m} x={0} y={0} decorative />}
+      {symbol === "line" && <path d="M-10 0H10" className="stroke-signal" strokeWidth={2} />}
+      {guide && <path d="M-10 0H10" className={guide.className} strokeWidth={Math.min(guide.width, 4)} strokeDasharray={guide.dash} />}
+      {symbol !== "line" && !guide && <Marker m={m} x={0} y={0} decorative />}
     </svg>
   );
 }
 
 /** The complex s-plane with equal axis scales, axes through the origin and the right half-plane shaded. */
-export function SPlanePlot({ label, description, markers, paths = [], legend = [] }: Props) {
+export function SPlanePlot({ label, description, markers, paths = [], guides = [], legend = [] }: Props) {
   const descId = useId();
   const clipId = `splane-clip${descId.replace(/\W/g, "")}`;
-  const points: [number, number][] = [...markers.map((m): [number, number] => [m.re, m.im]), ...paths.flatMap((p) => p.filter((q) => q !== null))];
+  // Asymptotes run off to infinity: they are clipped to the frame, never fitted into it.
+  const framed = [...paths, ...guides.filter((g) => g.kind !== "asymptote").map((g) => g.path)];
+  const points: [number, number][] = [...markers.map((m): [number, number] => [m.re, m.im]), ...framed.flatMap((p) => p.filter((q) => q !== null))];
   const f = frame(points);
   const [ox, oy] = [f.x(0), f.y(0)];
   const segments = (p: SPlanePath) => p.map((q, i) => (q ? `${i === 0 || !p[i - 1] ? "M" : "L"}${f.x(q[0]).toFixed(1)} ${f.y(q[1]).toFixed(1)}` : "")).join("");
@@ -124,6 +149,12 @@ export function SPlanePlot({ label, description, markers, paths = [], legend = [
         <text x={W - PAD.right - 2} y={oy - 5} textAnchor="end" className="fill-ink-soft text-[11px] italic">Re(s)</text>
         <text x={ox + 5} y={PAD.top + 11} className="fill-ink-soft text-[11px] italic">Im(s)</text>
         <g clipPath={`url(#${clipId})`}>
+          {guides.filter((g) => g.kind === "highlight").map((g, i) => (
+            <path key={`h${i}`} fill="none" d={segments(g.path)} className={GUIDE_STYLE.highlight.className} opacity={0.35} strokeWidth={GUIDE_STYLE.highlight.width} strokeLinecap="round" />
+          ))}
+          {guides.filter((g) => g.kind !== "highlight").map((g, i) => (
+            <path key={`g${i}`} fill="none" d={segments(g.path)} className={GUIDE_STYLE[g.kind].className} strokeWidth={GUIDE_STYLE[g.kind].width} strokeDasharray={GUIDE_STYLE[g.kind].dash} />
+          ))}
           {paths.map((p, i) => (
             <path key={i} d={segments(p)} fill="none" className={PATH_COLOURS[i % PATH_COLOURS.length]} strokeWidth={1.8} strokeLinejoin="round" />
           ))}

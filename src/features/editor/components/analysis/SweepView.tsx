@@ -2,22 +2,13 @@ import { useId, useMemo } from "react";
 import { CartesianGrid, Line, LineChart, XAxis, YAxis } from "recharts";
 import type { Analysis } from "@shared/analysis/analyze";
 import { sampleResponse } from "@shared/analysis/stepMetrics";
-import type { RootLocus } from "@shared/analysis/sweep";
-import { SPlanePlot, type SPlaneMarker } from "@/features/editor/components/analysis/SPlanePlot";
+import { RootLocusView } from "@/features/editor/components/analysis/RootLocusView";
 import { niceStep } from "@shared/analysis/axisSteps";
-import { formatComplex, formatNumber, rootRows } from "@/features/editor/lib/analysisFormat";
+import { formatNumber } from "@/features/editor/lib/analysisFormat";
 import type { SweepData } from "@shared/analysis/answer";
-import { counted } from "@shared/text/words";
 
 /** Series colours; the legend below the chart uses the same classes (recharts' legend cannot read currentColor). */
 const SERIES = ["text-signal", "text-trace", "text-steady", "text-fault", "text-ink-soft"];
-
-type Point = [number, number];
-
-const ends = (branch: (Point | null)[]) => {
-  const present = branch.filter((p): p is Point => p !== null);
-  return present.length ? { first: present[0], last: present[present.length - 1] } : null;
-};
 
 type Curve = { t: number; y: number }[];
 
@@ -37,74 +28,19 @@ function yAxis(curves: Curve[], stable: boolean): { domain: [number, number]; ti
   return { domain: [a * step, b * step], ticks: Array.from({ length: b - a + 1 }, (_, i) => (a + i) * step) };
 }
 
-/** Root locus of the closed-loop poles over one parameter's range and step responses across that range. */
-export function SweepView({ sweep, analysis }: { sweep: SweepData | null; analysis: Analysis }) {
+/** Root locus of the closed-loop poles over all gains of one parameter and step responses across its slider range. */
+export function SweepView({ sweep, analysis, negative, onNegative }: { sweep: SweepData | null; analysis: Analysis; negative: boolean; onNegative: (on: boolean) => void }) {
   if (!sweep) return <p className="text-sm text-ink-soft">No parameters to sweep: add one in the parameter table.</p>;
   const p = sweep.parameter;
   const [lo, hi] = sweep.range;
   return (
     <div className="flex flex-col gap-5">
-      <Locus locus={sweep.locus} analysis={analysis} current={sweep.current} range={sweep.range} />
+      <RootLocusView sweep={sweep} analysis={analysis} negative={negative} onNegative={onNegative} />
       <Overlay sweep={sweep} analysis={analysis} />
       <p className="text-xs text-ink-soft">
-        {p} runs from {formatNumber(lo)} to {formatNumber(hi)}; the other parameters stay at their current values.
+        The slider range of {p} is {formatNumber(lo)} to {formatNumber(hi)}; the other parameters stay at their current values.
       </p>
     </div>
-  );
-}
-
-function Locus({ locus, analysis, current, range }: { locus: RootLocus; analysis: Analysis; current: number; range: [number, number] }) {
-  const headingId = useId();
-  const p = locus.parameter;
-  const branchEnds = locus.branches.map(ends);
-  const markers: SPlaneMarker[] = [
-    ...branchEnds.flatMap((e): SPlaneMarker[] =>
-      e ? [{ re: e.first[0], im: e.first[1], kind: "start" }, { re: e.last[0], im: e.last[1], kind: "end" }] : [],
-    ),
-    ...analysis.poles.map((r): SPlaneMarker => ({ re: r.re, im: r.im, kind: "pole", emphasis: true, label: r.multiplicity > 1 ? String(r.multiplicity) : undefined })),
-  ];
-  const now = `${p} = ${formatNumber(current)}`;
-  return (
-    <section aria-labelledby={headingId} className="flex flex-col gap-2">
-      <h4 id={headingId} className="text-sm font-semibold">Root locus of the closed-loop poles</h4>
-      <SPlanePlot
-        label={`Root locus: closed-loop poles as ${p} varies from ${formatNumber(range[0])} to ${formatNumber(range[1])}`}
-        description={`${counted(locus.branches.length, "branch", "branches")}, one line each; the table below gives where each starts and ends.`}
-        markers={markers}
-        paths={locus.branches}
-        legend={[
-          { symbol: "line", text: "Branch" },
-          { symbol: "start", text: `${p} = ${formatNumber(range[0])}` },
-          { symbol: "end", text: `${p} = ${formatNumber(range[1])}` },
-          { symbol: "ring", text: `Closed-loop poles now (${now})` },
-        ]}
-      />
-      <p className="text-sm">
-        Closed-loop poles at {now}:{" "}
-        <span className="font-mono">{rootRows(analysis.poles).map((r) => r.value).join(", ") || "none"}</span>
-      </p>
-      <div className="overflow-x-auto">
-        <table className="border-collapse text-sm">
-          <caption className="pb-1 text-left font-semibold">Locus branches</caption>
-          <thead>
-            <tr>
-              {["Branch", `At ${p} = ${formatNumber(range[0])}`, `At ${p} = ${formatNumber(range[1])}`].map((h) => (
-                <th key={h} scope="col" className="border-b border-rule-strong px-2 py-1 text-left font-medium text-ink-soft">{h}</th>
-              ))}
-            </tr>
-          </thead>
-          <tbody>
-            {branchEnds.map((e, i) => (
-              <tr key={i}>
-                <th scope="row" className="border-b border-rule px-2 py-1 text-left font-normal">{i + 1}</th>
-                <td className="border-b border-rule px-2 py-1 font-mono">{e ? formatComplex(e.first) : "—"}</td>
-                <td className="border-b border-rule px-2 py-1 font-mono">{e ? formatComplex(e.last) : "—"}</td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
-    </section>
   );
 }
 

@@ -4,6 +4,7 @@ import { describe, expect, it } from "vitest";
 import { analyzeAt, type Analysis } from "@shared/analysis/analyze";
 import { prepared } from "../../../../support/reduced";
 import { rootLocus, stepOverlay } from "@shared/analysis/sweep";
+import { wholeLocus } from "@shared/analysis/wholeLocus";
 import { RouthView } from "@/features/editor/components/analysis/RouthView";
 import { StabilityView } from "@/features/editor/components/analysis/StabilityView";
 import { SteadyStateView } from "@/features/editor/components/analysis/SteadyStateView";
@@ -113,16 +114,32 @@ describe("AnalysisHelp", () => {
 
 describe("SweepView", () => {
   it("asks for a parameter when there is none", () => {
-    expect(text(renderToStaticMarkup(<SweepView sweep={null} analysis={niseAt100} />))).toContain("No parameters to sweep: add one in the parameter table.");
+    expect(text(renderToStaticMarkup(<SweepView sweep={null} analysis={niseAt100} negative={false} onNegative={() => {}} />))).toContain("No parameters to sweep: add one in the parameter table.");
   });
 
   it("draws three locus branches and one legend entry per overlay value (a third-order loop has three branches: common practice)", () => {
     const range: [number, number] = [10, 3000];
     const values = [10, 100, 1000, 3000];
-    const sweep = { parameter: "K", range, locus: rootLocus(nise, "K", range, 60), overlay: stepOverlay(nise, "K", values, 5), current: 100 };
-    const html = renderToStaticMarkup(<SweepView sweep={sweep} analysis={niseAt100} />);
+    const sweep = { parameter: "K", range, locus: rootLocus(nise, "K", range, 60), negativeLocus: null, geometry: null, locusNote: null, overlay: stepOverlay(nise, "K", values, 5), current: 100 };
+    const html = renderToStaticMarkup(<SweepView sweep={sweep} analysis={niseAt100} negative={false} onNegative={() => {}} />);
     expect(html.match(/<path d="M[^"]*" fill="none"/g)).toHaveLength(3);
     expect(text(html)).toMatch(/K = 10 .*K = 100 .*K = 1000 .*K = 3000 /);
     expect(html.match(/<th scope="row"[^>]*>\d<\/th>/g)).toHaveLength(3);
+  });
+
+  it("lists the landmarks of K/(s(s+1)(s+2)): centroid −1, ±60° and 180°, crossing ±√2 j at K = 6 (from memory: the textbook example)", () => {
+    const p = prepared(unityFeedback("K/(s*(s+1)*(s+2))", { K: { value: 1, min: 0.5, max: 3 } }));
+    const range: [number, number] = [0.5, 3];
+    const whole = wholeLocus(p, "K", range, { n: 40, base: p.nominal });
+    const sweep = { parameter: "K", range, locus: whole.positive, negativeLocus: whole.negative, geometry: whole.geometry, locusNote: whole.note, overlay: stepOverlay(p, "K", [0.5, 3], 5), current: 1 };
+    const t = text(renderToStaticMarkup(<SweepView sweep={sweep} analysis={analyzeAt(p)} negative={false} onNegative={() => {}} />));
+    expect(t).toContain("Include negative gains");
+    expect(t).toContain("Locus landmarks");
+    expect(t).toContain("Centroid of the asymptotes s = −1");
+    expect(t).toContain("Asymptote angles −60°, 60°, 180° K > 0");
+    expect(t).toContain("Imaginary-axis crossing ω = ±√2 ≈ 1.414 K = 6");
+    expect(t).toContain("Breakaway point s = −1 + √3/3 ≈ −0.4226");
+    // Negative gains are left out until asked for.
+    expect(t).not.toContain("K < 0");
   });
 });
