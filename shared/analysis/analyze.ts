@@ -5,6 +5,7 @@ import { polyToText } from "@shared/algebra/polytext";
 import { ratDenominator, ratNumerator, ratReduceTracked } from "@shared/algebra/ratfn";
 import { qDiv, qOne, qToNumber, qToString, qZero } from "@shared/algebra/rational";
 import { deadTimeAt, type DeadTimeReport } from "@shared/analysis/deadTime";
+import { analyzeDelayedLoop, delayedBandwidth, delayedBode } from "@shared/analysis/delayedLoop";
 import { exactFactors } from "@shared/analysis/factors";
 import { bode, frequencyRange, type BodeData } from "@shared/analysis/frequency";
 import { analyzeLoop, fractionText, zpkOf, type LoopAnalysis } from "@shared/analysis/loopAnalysis";
@@ -96,11 +97,17 @@ export function analyzeAt(p: PreparedAnalysis, opts: AnalyzeOptions = {}): Analy
   };
   if (!responses.step.exact) notes.push("Some poles are neither rational nor quadratic surds: their response terms are numeric (12 significant digits).");
   const step = metricsOrWhy(num, den, stability, dc?.value ?? null, responses.step, opts.settlingBand ?? 0.02, notes);
-  const loopAt = p.loop ? analyzeLoop(p.loop.breakPoint, p.loop.L, values) : (p.loopNote ?? "");
+  // Dead times: the frequency-domain figures come from the exact response with e^(−jωT), the rest from Padé.
+  const delays = p.delay && deadTime ? new Map(p.delay.delays.map((d, i) => [d.symbol, deadTime.report.delays[i].seconds])) : null;
+  const exactL = p.delay?.exactL;
+  const loopAt = p.loop
+    ? delays && exactL
+      ? analyzeDelayedLoop(p.loop.breakPoint, exactL, p.loop.L, values, delays)
+      : analyzeLoop(p.loop.breakPoint, p.loop.L, values)
+    : (p.loopNote ?? "");
   const loop = typeof loopAt === "string" ? null : loopAt;
   if (typeof loopAt === "string" && loopAt) notes.push(loopAt);
   const loopNumeric = p.loop && loop ? transferAt(p.loop.L, values) : null;
-  const zpk = zpkOf(num, den);
   const denSym = ratDenominator(p.transfer);
   const symbolic = polyParams(denSym);
   const wantSets = opts.stableSets ?? true;
@@ -123,13 +130,22 @@ export function analyzeAt(p: PreparedAnalysis, opts: AnalyzeOptions = {}): Analy
     responses,
     step,
     plotHorizon: plotHorizon(responses.step, stability, poles, dc?.value ?? 0),
-    bandwidth: bandwidth(num, den),
-    bode: bode(zpk, frequencyRange(zpk)),
+    ...closedLoopFrequency(p, values, delays, num, den),
     loop,
     steadyState: steadyState(num, den, stability.verdict, loopNumeric, inputRole(p.doc, p.input)),
     deadTime: deadTime?.report ?? null,
     notes: [...notes, ...(loop?.notes ?? [])],
   };
+}
+
+/** Bandwidth and Bode data of the pair's transfer: exact with e^(−jωT) when it has dead times. */
+function closedLoopFrequency(p: PreparedAnalysis, values: Record<string, number>, delays: ReadonlyMap<string, number> | null, num: UPoly, den: UPoly): { bandwidth: number | null; bode: BodeData } {
+  if (delays && p.delay) {
+    const { F, data } = delayedBode(p.delay.exactTransfer, p.transfer, values, delays);
+    return { bandwidth: delayedBandwidth(F, data), bode: { omega: data.omega, magDb: data.magDb, phaseDeg: data.phaseDeg } };
+  }
+  const zpk = zpkOf(num, den);
+  return { bandwidth: bandwidth(num, den), bode: bode(zpk, frequencyRange(zpk)) };
 }
 
 function characteristicAt(chi: UPoly, pair: Stability, notes: string[]): Analysis["characteristic"] {

@@ -27,6 +27,6 @@ export function deadTimeAt(info: DelayInfo, values: Readonly<Record<string, numb
     delays,
     exactTransfer: { numerator: polyToText(ratNumerator(info.exactTransfer)), denominator: polyToText(ratDenominator(info.exactTransfer)), latex },
   };
-  const note = `Padé order ${info.padeOrder}: each dead time e^(−sT) is replaced by its Padé approximant of order ${info.padeOrder} for the poles, zeros, Routh array, stable ranges, time responses, steady state and margins; the transfer function with e^(−sT) kept is in deadTime.exactTransfer.`;
+  const note = `Padé order ${info.padeOrder}: the poles, zeros, Routh array, stable ranges, time responses and steady state replace each dead time e^(−sT) by its Padé approximant of order ${info.padeOrder}; margins, crossovers, Ms, bandwidth, the Bode and Nyquist plots and the Nyquist verdict use the exact e^(−jωT).`;
   return { report, note };
 }

@@ -65,6 +65,20 @@ function contour(axisPoles: number[], R: number, delta: number): Path[] {
 }
 
 /**
+ * Clockwise encirclements of −1 by L along the Nyquist contour: the imaginary axis from −R to R with detours
+ * of radius δ right of the axis poles, closed by the arc of radius R through the right half-plane.
+ * Example: L = 2/(s − 1) → −1.
+ */
+export function clockwiseEncirclements(L: (s: Complex) => Complex, axisPoles: number[], R: number, delta: number, pieces = 64): number {
+  const f = (s: Complex): Complex => {
+    const [re, im] = L(s);
+    return [1 + re, im];
+  };
+  const turn = contour(axisPoles, R, delta).reduce((acc, path) => acc + argChange(f, path, pieces), 0);
+  return -Math.round(turn / (2 * Math.PI)) || 0; // no −0
+}
+
+/**
  * Nyquist verdict for the loop gain L = num/den (lowest terms): P open-loop RHP poles (exact), N clockwise
  * encirclements of −1 (from the curve), Z = N + P closed-loop RHP poles. Example: L = 2/(s − 1) encircles
  * −1 once counter-clockwise: N = −1, P = 1, Z = 0 — stable.
@@ -82,12 +96,7 @@ export function nyquist(num: UPoly, den: UPoly): Nyquist {
   const axis = open.axisFrequencies.flatMap((w) => (w === 0 ? [0] : [-w, w]));
   const gaps = all.flatMap(([re, im]) => axis.map((w) => Math.hypot(re, im - w))).filter((g) => g > 1e-9);
   const delta = 1e-3 * Math.min(1, ...gaps);
-  const f = (s: Complex): Complex => {
-    const [re, im] = ratEvalComplex(num, den, s);
-    return [1 + re, im];
-  };
-  const turn = contour(axis, R, delta).reduce((acc, path) => acc + argChange(f, path), 0);
-  const N = -Math.round(turn / (2 * Math.PI)) || 0; // no −0
+  const N = clockwiseEncirclements((s) => ratEvalComplex(num, den, s), axis, R, delta);
   const Z = N + P;
   const circles = N === 0 ? "does not encircle −1" : `encircles −1 ${counted(Math.abs(N), "time")} ${N < 0 ? "counter-clockwise" : "clockwise"}`;
   const reason =

@@ -26,7 +26,8 @@ ${USAGE}
                 or its 0-based index in "wires" (default: the wire into the minus port of the first
                 summing junction with a minus sign that the input reaches)
   --pade N      order (1–10, default 3) of the Padé approximant that stands for each dead-time block
-                e^(-sT) in the poles, Routh array, time responses and margins ("deadTime" in --json)
+                e^(-sT) in the poles, Routh array and time responses ("deadTime" in --json); margins,
+                Ms, bandwidth and the Nyquist verdict use the exact e^(-jωT)
   -h, --help    this text
 
 Parameters take their nominal values. A quantity that does not exist (no overshoot, an infinite margin,

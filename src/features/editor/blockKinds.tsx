@@ -20,6 +20,8 @@ export interface BlockKindView {
   create: (id: string) => Block;
   /** The canvas node that draws it. */
   node: NodeTypes[string];
+  /** The label of its expression field in the properties panel; null for a kind without an expression. */
+  exprLabel: string | null;
 }
 
 const nameOf = (type: BlockType) => capital(BLOCK_KINDS[type].name);
@@ -32,6 +34,7 @@ export const BLOCK_VIEWS: Record<BlockType, BlockKindView> = {
     idPrefix: "r",
     create: (id) => ({ id, type: "input" }),
     node: InputNode,
+    exprLabel: null,
   },
   sum: {
     name: nameOf("sum"),
@@ -40,6 +43,7 @@ export const BLOCK_VIEWS: Record<BlockType, BlockKindView> = {
     // A comparator: + reference, − feedback.
     create: (id) => ({ id, type: "sum", signs: ["+", "-"] }),
     node: SumNode,
+    exprLabel: null,
   },
   gain: {
     name: nameOf("gain"),
@@ -47,6 +51,7 @@ export const BLOCK_VIEWS: Record<BlockType, BlockKindView> = {
     idPrefix: "k",
     create: (id) => ({ id, type: "gain", expr: "1" }),
     node: GainNode,
+    exprLabel: "Gain (no s)",
   },
   transfer: {
     name: nameOf("transfer"),
@@ -54,6 +59,7 @@ export const BLOCK_VIEWS: Record<BlockType, BlockKindView> = {
     idPrefix: "G",
     create: (id) => ({ id, type: "transfer", expr: "1/(s + 1)" }),
     node: TransferNode,
+    exprLabel: "Transfer function of s",
   },
   integrator: {
     name: nameOf("integrator"),
@@ -61,6 +67,7 @@ export const BLOCK_VIEWS: Record<BlockType, BlockKindView> = {
     idPrefix: "int",
     create: (id) => ({ id, type: "integrator" }),
     node: IntegratorNode,
+    exprLabel: null,
   },
   delay: {
     name: nameOf("delay"),
@@ -68,6 +75,7 @@ export const BLOCK_VIEWS: Record<BlockType, BlockKindView> = {
     idPrefix: "d",
     create: (id) => ({ id, type: "delay", expr: "0.1" }),
     node: DelayNode,
+    exprLabel: "Dead time T in seconds (no s)",
   },
   branch: {
     name: nameOf("branch"),
@@ -75,6 +83,7 @@ export const BLOCK_VIEWS: Record<BlockType, BlockKindView> = {
     idPrefix: "p",
     create: (id) => ({ id, type: "branch" }),
     node: BranchNode,
+    exprLabel: null,
   },
   output: {
     name: nameOf("output"),
@@ -82,6 +91,7 @@ export const BLOCK_VIEWS: Record<BlockType, BlockKindView> = {
     idPrefix: "y",
     create: (id) => ({ id, type: "output" }),
     node: OutputNode,
+    exprLabel: null,
   },
 };
 

@@ -164,3 +164,48 @@ print(json.dumps(math.sqrt(1 + w * w)))
     expect(zero.ok && [zero.result.transfers[0].numerator, zero.result.transfers[0].denominator]).toEqual(["2", "s + 3"].map((x) => x.replace("2", "K").replace("s + 3", "s + K + 1")));
   });
 });
+
+describe("the frequency analysis of a delayed loop uses the exact e^(−jωT)", () => {
+  // Reference: scipy.optimize.brentq (Debian python3-scipy) on the exact conditions for L = K·e^(−sT)/(s + 1):
+  // |L(jω)| = 1 at ω = √(K² − 1); the phase −atan ω − Tω = −180° at the phase crossover.
+  const reference = (K: number, T: number) =>
+    python<{ wgc: number; pm: number; wpc: number; gm: number }>(
+      `
+import json, sys, math
+from scipy.optimize import brentq
+K, T = json.load(sys.stdin)
+wgc = math.sqrt(K * K - 1)
+pm = 180 - math.degrees(math.atan(wgc) + T * wgc)
+wpc = brentq(lambda w: math.atan(w) + T * w - math.pi, 1e-6, 100)
+gm = 20 * math.log10(math.sqrt(1 + wpc * wpc) / K)
+print(json.dumps({"wgc": wgc, "pm": pm, "wpc": wpc, "gm": gm}))
+`,
+      [K, T],
+    );
+
+  it("gives margins, crossovers and the delay margin independent of the Padé order", () => {
+    const ref = reference(2, 0.5);
+    for (const order of [1, 3, 8]) {
+      const out = analyzeDocument(delayedLoop("0.5"), { padeOrder: order });
+      if (!out.ok) throw new Error("not analysed");
+      const m = out.result.margins;
+      expect(m.gainCrossover).toBeCloseTo(ref.wgc, 8);
+      expect(m.phaseMarginDeg).toBeCloseTo(ref.pm, 6);
+      expect(m.phaseCrossover).toBeCloseTo(ref.wpc, 8);
+      expect(m.gainMarginDb).toBeCloseTo(ref.gm, 6);
+      // common practice: delay margin = PM (rad) / ω_gc.
+      expect(out.result.delayMargin).toBeCloseTo(((ref.pm * Math.PI) / 180) / ref.wgc, 8);
+      expect(out.result.nyquist?.verdict).toBe("stable");
+      expect(out.result.loopGain?.numerator).toBe("2*exp(-1/2*s)");
+    }
+  });
+
+  it("finds the delayed loop unstable above its exact critical gain from the Nyquist curve", () => {
+    // K = 5 > √(1 + ω_pc²) ≈ 3.807 (brentq above): the exact loop is unstable; the curve encircles −1 clockwise twice.
+    const out = analyzeDocument({ ...delayedLoop("0.5"), parameters: { K: 5 } });
+    if (!out.ok) throw new Error("not analysed");
+    expect(out.result.nyquist).toMatchObject({ verdict: "unstable", encirclements: 2, openLoopRhpPoles: 0, closedLoopRhpPoles: 2 });
+    expect(out.result.margins.gainMarginDb).toBeCloseTo(reference(5, 0.5).gm, 6);
+    expect(out.result.margins.gainMarginDb).toBeLessThan(0);
+  });
+});

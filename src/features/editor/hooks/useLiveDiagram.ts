@@ -21,6 +21,8 @@ export interface AnalysisSettings {
   sweepShown: boolean;
   /** The locus is also drawn over negative gains. */
   sweepNegative: boolean;
+  /** Padé order of each dead time; absent: the analysis's default (3). */
+  padeOrder?: number;
 }
 
 export type AnalysisOptions = AnalysisSettings & { input: string | null; output: string | null };
@@ -81,6 +83,7 @@ const queryOf = (o: AnalysisOptions): AnalysisQuery => ({
   sweepParameter: o.sweepParameter,
   withSweep: o.sweepShown,
   negative: o.sweepNegative,
+  padeOrder: o.padeOrder,
 });
 
 function analysisFrom(s: LiveAnalysis, answer: AnalysisAnswer, pending: boolean, ms: number): LiveAnalysis {
@@ -130,7 +133,7 @@ export function useLiveDiagram(doc: EditorDoc, opts: AnalysisOptions): { result:
     channel.current?.request({ document: d, analysis: queryOf(o) });
   };
 
-  const { input, output, break: brk, values, band, sweepParameter, sweepShown, sweepNegative } = opts;
+  const { input, output, break: brk, values, band, sweepParameter, sweepShown, sweepNegative, padeOrder } = opts;
   const optionsSeen = useRef(false);
   useEffect(() => {
     // Option changes go straight through; the first run is the opening request's, which the document sends.
@@ -140,7 +143,7 @@ export function useLiveDiagram(doc: EditorDoc, opts: AnalysisOptions): { result:
     }
     setAnalysis((s) => (s.pending ? s : { ...s, pending: true }));
     send();
-  }, [input, output, brk, values, band, sweepParameter, sweepShown, sweepNegative]);
+  }, [input, output, brk, values, band, sweepParameter, sweepShown, sweepNegative, padeOrder]);
 
   const opened = useRef(false);
   useLayoutEffect(() => {

@@ -4,6 +4,7 @@ import type { Problem } from "@shared/diagram/problems";
 import { AnalysisHelp } from "@/features/editor/components/analysis/AnalysisHelp";
 import { AnalysisTabs, type TabSpec } from "@/features/editor/components/analysis/AnalysisTabs";
 import { BreakInUse } from "@/features/editor/components/analysis/BreakPicker";
+import { DeadTimeBar } from "@/features/editor/components/analysis/DeadTimeBar";
 import { FrequencyView } from "@/features/editor/components/analysis/FrequencyView";
 import { ParameterSliders } from "@/features/editor/components/analysis/ParameterSliders";
 import { RouthView } from "@/features/editor/components/analysis/RouthView";
@@ -23,7 +24,7 @@ interface Props {
 }
 
 const CAUTION =
-  "These results describe the linear model as drawn; actuator limits, saturation, delays and nonlinearity are not in it. Validate on the plant and follow your functional-safety process and local codes.";
+  "These results describe the linear model as drawn; dead times enter the poles, Routh array and time responses through their Padé approximation; actuator limits, saturation and other nonlinearity are not in it. Validate on the plant and follow your functional-safety process and local codes.";
 
 const VERDICT_TONE = { stable: "border-steady bg-steady-tint", marginal: "border-trace bg-trace-tint", unstable: "border-fault bg-fault-tint" } as const;
 
@@ -60,6 +61,7 @@ export function AnalysisPanel({ live, settings, onSettings, onPickProblem }: Pro
           <BreakInUse used={result.breakWire} chosen={settings.break} onDefault={() => onSettings({ break: null })} />
         </Summary>
       )}
+      {result?.analysis.deadTime && <DeadTimeBar deadTime={result.analysis.deadTime} onOrder={(padeOrder) => onSettings({ padeOrder })} />}
       <div className="grid gap-4 lg:grid-cols-[18rem_minmax(0,1fr)]">
         <section aria-label="Parameter sliders" className="flex flex-col gap-2">
           <h3 className="text-sm font-semibold">Sliders</h3>

@@ -10,6 +10,9 @@ interface Props {
   blockId: string;
   expr: string;
   allowS: boolean;
+  /** How a refused `s` is explained (the kind's words). */
+  sRefusal?: string;
+  label: string;
   parameters: Record<string, unknown>;
   inputRef?: Ref<HTMLInputElement>;
 }
@@ -48,15 +51,15 @@ function DeclareButton({ expr, position }: { expr: string; position: number }) {
 }
 
 /** The expression of a gain or transfer block, parsed on every keystroke against the declared parameters. */
-export function ExpressionField({ blockId, expr, allowS, parameters, inputRef }: Props) {
+export function ExpressionField({ blockId, expr, allowS, sRefusal, label, parameters, inputRef }: Props) {
   const { act, readOnly } = useEditorActions();
   const id = useId();
-  const parsed = useMemo(() => parseExpression(expr, { allowS, parameters: Object.keys(parameters) }), [expr, allowS, parameters]);
+  const parsed = useMemo(() => parseExpression(expr, { allowS, sRefusal, parameters: Object.keys(parameters) }), [expr, allowS, sRefusal, parameters]);
   const latex = parsed.ok ? exprLatex(parsed.ast) : null;
   return (
     <div className="flex flex-col gap-1">
       <label htmlFor={id} className="text-sm font-medium">
-        {allowS ? "Transfer function of s" : "Gain (no s)"}
+        {label}
       </label>
       <input
         id={id}

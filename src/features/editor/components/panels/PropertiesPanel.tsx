@@ -86,6 +86,8 @@ export function PropertiesPanel({ doc, selection, firstFieldRef, analysisBreak }
           blockId={block.id}
           expr={block.expr}
           allowS={BLOCK_KINDS[block.type].expression.mayContainS}
+          sRefusal={BLOCK_KINDS[block.type].expression.sRefusal}
+          label={BLOCK_VIEWS[block.type].exprLabel ?? "Expression"}
           parameters={doc.parameters}
           inputRef={firstFieldRef}
         />
