@@ -34,9 +34,10 @@ test("the closed loop shows at its nominal values beside the symbolic one, and a
   await expect(problems).toContainText("Syntax error");
 });
 
-test("the wheel over the canvas scrolls the page; Ctrl + wheel zooms the canvas (common practice for a canvas inside a page)", async ({ page }) => {
+test("on a window narrower than 1024 px the page stacks: the wheel over the canvas scrolls the page; Ctrl + wheel zooms the canvas (common practice for a canvas inside a page)", async ({ page }) => {
   test.setTimeout(120_000);
-  await page.setViewportSize({ width: 1440, height: 900 });
+  // Where the editor fits the window (1024 px and wider) the wheel pans the canvas instead: e2e/pageLayout.spec.ts.
+  await page.setViewportSize({ width: 1000, height: 900 });
   await signUp(page, "Willa Wheel", uniqueEmail("wheel"));
   const teamId = await createTeam(page, `Winder ${Date.now()}`);
   const id = await seedDiagram(page, teamId, unityLoop("Winder tension loop", "2/(s + 1)"), "First");

@@ -1,11 +1,11 @@
 import { useId, type ReactNode } from "react";
 
-/** A titled section card; its heading names the region for screen-reader navigation. */
-export function Panel({ title, children }: { title: string; children: ReactNode }) {
+/** A titled section card; its heading names the region for screen-reader navigation. `dense`: less padding, for columns. */
+export function Panel({ title, dense = false, children }: { title: string; dense?: boolean; children: ReactNode }) {
   const id = useId();
   return (
-    <section aria-labelledby={id} className="rounded-md border border-rule bg-paper-raised p-5 shadow-xs">
-      <h2 id={id} className="mb-4 text-base font-semibold">
+    <section aria-labelledby={id} className={`rounded-md border border-rule bg-paper-raised shadow-xs ${dense ? "p-4" : "p-5"}`}>
+      <h2 id={id} className={`text-base font-semibold ${dense ? "mb-2" : "mb-4"}`}>
         {title}
       </h2>
       {children}

@@ -1,4 +1,4 @@
-import { ShellBody } from "@/app/layout/ShellBody";
+import { shellFrame, ShellBody } from "@/app/layout/ShellBody";
 import { Logo } from "@/components/Logo";
 
 /**
@@ -7,7 +7,7 @@ import { Logo } from "@/components/Logo";
  */
 export function SharedShell() {
   return (
-    <div className="flex min-h-screen flex-col">
+    <div className={shellFrame(true)}>
       <header className="border-b border-rule bg-paper-raised">
         <div className="flex items-center gap-2 px-4 py-3 text-lg font-semibold tracking-tight sm:px-6">
           <Logo className="size-7" />
@@ -15,7 +15,7 @@ export function SharedShell() {
           <span className="ml-2 text-xs font-medium tracking-wide text-ink-faint uppercase">Shared read-only view</span>
         </div>
       </header>
-      <ShellBody wide />
+      <ShellBody wide fill />
     </div>
   );
 }

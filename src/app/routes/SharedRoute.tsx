@@ -23,7 +23,7 @@ export function SharedRoute() {
   const { diagram, version } = shared.data;
   return (
     <>
-      <PageTitle title={diagram.title} kicker={`Version ${version.number} · shared read-only`}>
+      <PageTitle compact title={diagram.title} kicker={`Version ${version.number} · shared read-only`}>
         <SharedFigureDownloads token={token} />
       </PageTitle>
       <SharedDiagramView title={diagram.title} version={version} />

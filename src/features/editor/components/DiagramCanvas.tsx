@@ -34,6 +34,7 @@ import { useFitBox, WHOLE_DIAGRAM } from "@/features/editor/hooks/useFitBox";
 import { useLiveCanvas } from "@/features/editor/hooks/useLiveCanvas";
 import { useOverviewMap } from "@/features/editor/hooks/useOverviewMap";
 import { useOverviewPick } from "@/features/editor/hooks/useOverviewPick";
+import { useWideLayout } from "@/features/editor/hooks/useWideLayout";
 
 // Module-level so the canvas never sees new type tables (which would remount every node).
 const nodeTypes: NodeTypes = Object.fromEntries(BLOCK_TYPES.map((type) => [type, BLOCK_VIEWS[type].node]));
@@ -69,6 +70,7 @@ interface Props {
 /** The drawing surface: blocks, wires, grid, zoom and pan, overview map; it draws, the document decides. */
 export function DiagramCanvas({ nodes, edges, onNodesChange, onEdgesChange, readOnly, pointer, onConnectWire, onDropBlock, children }: Props) {
   const flow = useReactFlow();
+  const fits = useWideLayout();
   const fitBox = useFitBox();
   // Opens at about the fitted view (the window bounds the canvas from above), so a large diagram is drawn once
   // in its far form rather than typeset first and redrawn.
@@ -137,8 +139,10 @@ export function DiagramCanvas({ nodes, edges, onNodesChange, onEdgesChange, read
           fitViewOptions={WHOLE_DIAGRAM}
           onlyRenderVisibleElements={large}
           connectionRadius={24}
-          // The canvas sits in a longer page: the wheel scrolls the page, Ctrl + wheel (or a pinch) zooms the canvas.
-          preventScrolling={false}
+          // Where the page fits the window the wheel pans the canvas; where the page stacks and scrolls, the wheel
+          // scrolls the page. Ctrl/⌘ + wheel (or a pinch) zooms the canvas in both.
+          panOnScroll={fits}
+          preventScrolling={fits}
           aria-label="Diagram canvas"
           className="bg-paper"
         >

@@ -60,7 +60,7 @@ interface Review {
 
 function DiagramTitle({ diagram: d }: { diagram: DiagramDetail["diagram"] }) {
   return (
-    <PageTitle title={d.title} kicker={`Diagram in ${d.teamName}`}>
+    <PageTitle compact title={d.title} kicker={`Diagram in ${d.teamName}`}>
       <Link to={href.versions(d.id)} className="text-sm text-signal underline underline-offset-2">
         All versions
       </Link>

@@ -1,9 +1,8 @@
-import { lazy, Suspense, useCallback, useMemo, useRef, useState, type ReactNode } from "react";
+import { useCallback, useMemo, useRef, useState, type ReactNode } from "react";
 import type { CommentPin, PinnedThread } from "@shared/api/comments";
 import { counted } from "@shared/text/words";
 import type { DiagramDetail } from "@shared/api/diagrams";
 import type { Problem } from "@shared/diagram/problems";
-import { Panel } from "@/components/Panel";
 import type { EditorDoc, Point, Selection } from "@/features/editor/commands/types";
 import { done } from "@/features/editor/commands/types";
 import { moveBlocks } from "@/features/editor/commands/blocks";
@@ -20,12 +19,10 @@ import { SessionDialogs } from "@/features/editor/components/SessionDialogs";
 import { Dialog } from "@/features/editor/components/dialogs/Dialog";
 import { CompareWithLocal } from "@/features/editor/components/compare/CompareWithLocal";
 import { SidePanel } from "@/features/editor/components/SidePanel";
+import { EditorWorkspace } from "@/features/editor/components/EditorWorkspace";
+import { ResultsColumn } from "@/features/editor/components/ResultsColumn";
 import { StepBadge } from "@/features/editor/components/StepBadge";
-import { ParameterTable } from "@/features/editor/components/panels/ParameterTable";
-import { ProblemList } from "@/features/editor/components/panels/ProblemList";
 import { PropertiesPanel } from "@/features/editor/components/panels/PropertiesPanel";
-import { ResultsPanel } from "@/features/editor/components/panels/ResultsPanel";
-import { StepThrough } from "@/features/editor/components/panels/StepThrough";
 import { boundsOf } from "@shared/geometry/blockBox";
 import { nodeBox } from "@/features/editor/geometry/nodeBox";
 import { useCanvasCommands } from "@/features/editor/hooks/useCanvasCommands";
@@ -39,9 +36,6 @@ import { useSaveFlow } from "@/features/editor/hooks/useSaveFlow";
 import { useUnsavedGuard } from "@/features/editor/hooks/useUnsavedGuard";
 import { problemMarks, stepFootprint } from "@/features/editor/lib/marks";
 import { pairKey, resultView } from "@/features/editor/lib/resultView";
-
-// The analysis views carry the charting library: a chunk of their own, loaded after the canvas.
-const AnalysisPanel = lazy(() => import("@/features/editor/components/analysis/AnalysisPanel").then((m) => ({ default: m.AnalysisPanel })));
 
 /** The share dialog's body for a diagram and the version open; the app passes it in from the share-links feature. */
 export type ShareSlot = (target: { diagramId: string; openVersion: number }) => ReactNode;
@@ -276,96 +270,72 @@ export function EditorSession(props: Props) {
         onShare={share && !viewOnly ? () => setSharing(true) : undefined}
         status={status}
       />
-      <div className={`grid h-[64vh] min-h-[480px] overflow-hidden rounded-b-md border border-rule ${readOnly ? "grid-cols-[1fr_20rem]" : "grid-cols-[auto_1fr_20rem]"}`}>
-        {!readOnly && <BlockRail onAdd={commands.addFromRail} />}
-        <div ref={canvasBox} className="relative min-w-0">
-          <DiagramCanvas
-            nodes={canvasState.nodes}
-            edges={canvasState.edges}
-            onNodesChange={canvasState.onNodesChange}
-            onEdgesChange={canvasState.onEdgesChange}
-            readOnly={readOnly}
-            pointer={pointer}
-            onConnectWire={commands.connectWire}
-            onDropBlock={commands.dropBlock}
-          >
-            {step && footprint && <StepBadge step={step} blocks={footprint.blocks} nodes={canvasState.nodes} />}
-            {comments && <CommentPins pins={review.threads.pins} nodes={canvasState.nodes} doc={doc} onOpen={review.openThread} />}
-          </DiagramCanvas>
-          {doc.blocks.length === 0 && (
-            <p className="pointer-events-none absolute inset-x-0 top-1/3 mx-auto max-w-sm text-center text-sm text-ink-soft">
-              {readOnly
-                ? "This diagram is empty."
-                : "An empty sheet. Add an input, a summing junction, a transfer function and an output from the rail (keys 1, 2, 4, 7), then wire them."}
-            </p>
-          )}
-          <CanvasNotice notice={notice} onDone={clearNotice} />
-        </div>
-        <SidePanel
-          tab={review.tab}
-          onTab={review.setTab}
-          properties={
-            <PropertiesPanel
-              doc={doc}
-              selection={selection}
-              firstFieldRef={firstField}
-              analysisBreak={{ used: usedBreak, chosen: analysisSettings.break, onBreak: (id) => changeAnalysis({ break: id }) }}
-            />
-          }
-          comments={
-            comments && {
-              label: `Comments${review.threads.open ? ` (${review.threads.open} open)` : ""}`,
-              body: comments({
-                diagramId: diagram.id,
-                version: base,
-                doc: savedDoc,
-                selected: selectedPin(selection),
-                focus: review.focus,
-                onThreads: review.onThreads,
-                onShowPin: (pin) => showOnCanvas("blockId" in pin ? pin.blockId : undefined, "wireId" in pin ? pin.wireId : undefined),
-              }),
+      <EditorWorkspace
+        rail={readOnly ? undefined : <BlockRail onAdd={commands.addFromRail} />}
+        canvas={
+          <div ref={canvasBox} className="relative min-w-0">
+            <DiagramCanvas
+              nodes={canvasState.nodes}
+              edges={canvasState.edges}
+              onNodesChange={canvasState.onNodesChange}
+              onEdgesChange={canvasState.onEdgesChange}
+              readOnly={readOnly}
+              pointer={pointer}
+              onConnectWire={commands.connectWire}
+              onDropBlock={commands.dropBlock}
+            >
+              {step && footprint && <StepBadge step={step} blocks={footprint.blocks} nodes={canvasState.nodes} />}
+              {comments && <CommentPins pins={review.threads.pins} nodes={canvasState.nodes} doc={doc} onOpen={review.openThread} />}
+            </DiagramCanvas>
+            {doc.blocks.length === 0 && (
+              <p className="pointer-events-none absolute inset-x-0 top-1/3 mx-auto max-w-sm text-center text-sm text-ink-soft">
+                {readOnly
+                  ? "This diagram is empty."
+                  : "An empty sheet. Add an input, a summing junction, a transfer function and an output from the rail (keys 1, 2, 4, 7), then wire them."}
+              </p>
+            )}
+            <CanvasNotice notice={notice} onDone={clearNotice} />
+          </div>
+        }
+        side={
+          <SidePanel
+            tab={review.tab}
+            onTab={review.setTab}
+            properties={
+              <PropertiesPanel
+                doc={doc}
+                selection={selection}
+                firstFieldRef={firstField}
+                analysisBreak={{ used: usedBreak, chosen: analysisSettings.break, onBreak: (id) => changeAnalysis({ break: id }) }}
+              />
             }
-          }
-        />
-      </div>
-      <div className="mt-4 grid gap-4 lg:grid-cols-3">
-        <Panel title="Closed-loop result">
-          <ResultsPanel
-            live={live}
-            view={view}
-            stale={live.doc !== doc}
-            onPair={choosePair}
-            atValues={analysis.result && { analysis: analysis.result.analysis, moved: slidersMoved(analysis.result) }}
+            comments={
+              comments && {
+                label: `Comments${review.threads.open ? ` (${review.threads.open} open)` : ""}`,
+                body: comments({
+                  diagramId: diagram.id,
+                  version: base,
+                  doc: savedDoc,
+                  selected: selectedPin(selection),
+                  focus: review.focus,
+                  onThreads: review.onThreads,
+                  onShowPin: (pin) => showOnCanvas("blockId" in pin ? pin.blockId : undefined, "wireId" in pin ? pin.wireId : undefined),
+                }),
+              }
+            }
           />
-        </Panel>
-        <Panel title="Reduction steps">
-          <StepThrough steps={view.steps} current={step ? stepAt : null} onChange={setStepAt} />
-        </Panel>
-        <Panel title={`Problems${view.problems.length ? ` (${view.problems.length})` : ""}`}>
-          {live.outcome ? (
-            <ProblemList problems={view.problems} onPick={pickProblem} />
-          ) : (
-            <p className="text-sm text-ink-soft">Checking the diagram…</p>
-          )}
-        </Panel>
-      </div>
-      <div className="mt-4">
-        <Panel title="Analysis">
-          {/* Its code (charts included) is fetched once the first result is in, not while the canvas is first drawn. */}
-          {live.outcome ? (
-            <Suspense fallback={<p className="text-sm text-ink-soft">Loading the analysis…</p>}>
-              <AnalysisPanel live={analysis} settings={analysisSettings} onSettings={changeAnalysis} onPickProblem={pickProblem} />
-            </Suspense>
-          ) : (
-            <p className="text-sm text-ink-soft">The analysis starts once the closed loop is computed.</p>
-          )}
-        </Panel>
-      </div>
-      <div className="mt-4">
-        <Panel title="Parameters">
-          <ParameterTable doc={doc} />
-        </Panel>
-      </div>
+        }
+        results={
+          <ResultsColumn
+            doc={doc}
+            result={{ live, view, stale: live.doc !== doc, onPair: choosePair, atValues: analysis.result && { analysis: analysis.result.analysis, moved: slidersMoved(analysis.result) } }}
+            steps={{ steps: view.steps, current: step ? stepAt : null, onChange: setStepAt }}
+            problems={live.outcome ? view.problems : null}
+            onPickProblem={pickProblem}
+            analysis={{ live: analysis, settings: analysisSettings, onSettings: changeAnalysis }}
+          />
+        }
+      />
       <SessionDialogs
         diagram={diagram}
         base={base}

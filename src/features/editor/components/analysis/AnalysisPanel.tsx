@@ -45,6 +45,8 @@ export function AnalysisPanel({ live, settings, onSettings, onPickProblem }: Pro
     else next[name] = value;
     onSettings({ values: next });
   };
+  // In a narrow column (under 48rem) the result tabs come first, then the sliders, then the summary, so the plots
+  // start high in the column; wider, the summary leads and the sliders stand beside the tabs.
   return (
     <div className="flex flex-col gap-4">
       <p className="text-xs text-ink-faint" role="status">{status}</p>
@@ -57,13 +59,17 @@ export function AnalysisPanel({ live, settings, onSettings, onPickProblem }: Pro
       )}
       {!result && !failed && !live.crash && <p className="text-sm text-ink-soft">Working out the analysis…</p>}
       {result && (
-        <Summary analysis={result.analysis}>
+        <Summary analysis={result.analysis} className="order-2 @3xl:order-none">
           <BreakInUse used={result.breakWire} chosen={settings.break} onDefault={() => onSettings({ break: null })} />
         </Summary>
       )}
-      {result?.analysis.deadTime && <DeadTimeBar deadTime={result.analysis.deadTime} onOrder={(padeOrder) => onSettings({ padeOrder })} />}
-      <div className="grid gap-4 lg:grid-cols-[18rem_minmax(0,1fr)]">
-        <section aria-label="Parameter sliders" className="flex flex-col gap-2">
+      {result?.analysis.deadTime && (
+        <div className="order-1 @3xl:order-none">
+          <DeadTimeBar deadTime={result.analysis.deadTime} onOrder={(padeOrder) => onSettings({ padeOrder })} />
+        </div>
+      )}
+      <div className="order-1 grid grid-cols-[minmax(0,1fr)] gap-4 @3xl:order-none @3xl:grid-cols-[18rem_minmax(0,1fr)]">
+        <section aria-label="Parameter sliders" className="order-2 flex flex-col gap-2 @3xl:order-none">
           <h3 className="text-sm font-semibold">Sliders</h3>
           <ParameterSliders
             parameters={live.parameters}
@@ -81,7 +87,7 @@ export function AnalysisPanel({ live, settings, onSettings, onPickProblem }: Pro
           />
         )}
       </div>
-      <p className="border-t border-rule pt-2 text-xs text-ink-soft">
+      <p className="order-3 border-t border-rule pt-2 text-xs text-ink-soft @3xl:order-none">
         <strong className="font-semibold text-ink">Caution: </strong>
         {CAUTION}
       </p>
@@ -108,11 +114,11 @@ function tabsFor(result: NonNullable<LiveAnalysis["result"]>, settings: Analysis
 }
 
 /** One line per fact: the verdict, the values in use, the break, then the notes. */
-function Summary({ analysis, children }: { analysis: Analysis; children: ReactNode }) {
+function Summary({ analysis, className, children }: { analysis: Analysis; className: string; children: ReactNode }) {
   const { stability, values, input, output, notes } = analysis;
   const names = Object.keys(values);
   return (
-    <section aria-label="Analysis summary" className="flex flex-col gap-2">
+    <section aria-label="Analysis summary" className={`flex flex-col gap-2 ${className}`}>
       <p className={`rounded border-l-4 px-3 py-2 text-sm ${VERDICT_TONE[stability.verdict]}`}>
         <span className="font-mono">{input} → {output}</span>: <strong>{verdictWord(stability.verdict)}</strong>. {stability.reason}
       </p>

@@ -221,7 +221,7 @@ function LoopFigures({ analysis, loop }: { analysis: Analysis; loop: LoopAnalysi
           <Tex display latex={`L(s) = ${loop.L.latex}`} />
         </div>
       </div>
-      <div className="grid gap-4 lg:grid-cols-2">
+      <div className="grid gap-4 @3xl:grid-cols-2">
         <div className="flex flex-col gap-2">
           <h3 className="text-sm font-semibold">Margins</h3>
           <FigureTable rows={rows} />

@@ -27,7 +27,8 @@ export function HelpDialog({ readOnly, onClose }: { readOnly: boolean; onClose: 
       </table>
       <p className="mt-3 text-xs text-ink-soft">
         Mouse: drag from a block&apos;s right-hand port to another block&apos;s input to draw a wire; Shift-drag on empty canvas
-        selects an area; Ctrl-click adds to the selection; the wheel scrolls the page, Ctrl + wheel (or a pinch) zooms the canvas.
+        selects an area; Ctrl-click adds to the selection; the wheel pans the canvas (Shift + wheel sideways; on a window
+        narrower than 1024 px, where the page scrolls, the wheel scrolls it); Ctrl/⌘ + wheel (or a pinch) zooms the canvas.
       </p>
     </Dialog>
   );
