@@ -86,6 +86,19 @@ const TERMS: { term: string; body: ReactNode }[] = [
     ),
   },
   {
+    term: "Dead time and Padé order",
+    body: (
+      <>
+        A dead-time block delays its input by T seconds: <Tex latex="e^{-sT}" />, not a rational function of s. The closed loop is shown
+        exactly, with the exponential kept. Margins, crossovers, the delay margin, Ms, bandwidth and the Bode and Nyquist plots use the
+        exact <Tex latex="e^{-j\omega T}" />, and the Nyquist criterion applied to that exact L(jω) gives the true stability of the
+        delayed loop (P, the open-loop poles in the right half-plane, is unchanged by a delay in the loop). Poles, zeros, the Routh
+        array, stable ranges, the root locus and the time responses need a rational function: there each e^(−sT) is replaced by its
+        Padé approximant of the order shown (“Padé order N”), whose error grows with ωT — raise the order when a figure moves with it.
+      </>
+    ),
+  },
+  {
     term: "Routh array",
     body: (
       <>
