@@ -6,6 +6,7 @@ import { ratDenominator, ratNumerator, ratReduceTracked } from "@shared/algebra/
 import { qDiv, qOne, qToNumber, qToString, qZero } from "@shared/algebra/rational";
 import { deadTimeAt, type DeadTimeReport } from "@shared/analysis/deadTime";
 import { analyzeDelayedLoop, delayedBandwidth, delayedBode } from "@shared/analysis/delayedLoop";
+import { delayedResponses, type DelayedResponses } from "@shared/analysis/delayedResponse";
 import { exactFactors } from "@shared/analysis/factors";
 import { bode, frequencyRange, type BodeData } from "@shared/analysis/frequency";
 import { analyzeLoop, fractionText, zpkOf, type LoopAnalysis } from "@shared/analysis/loopAnalysis";
@@ -44,6 +45,8 @@ export interface Analysis {
   input: string;
   /** Dead times and the Padé order the figures rest on; null without dead times. */
   deadTime: DeadTimeReport | null;
+  /** Step and ramp responses with the dead times kept exactly (simulated); null without dead times in T. */
+  delayedResponses: DelayedResponses | null;
   output: string;
   values: Record<string, number>;
   transfer: { numerator: string; denominator: string; latex: string };
@@ -110,6 +113,16 @@ export function analyzeAt(p: PreparedAnalysis, opts: AnalyzeOptions = {}): Analy
   const loopNumeric = p.loop && loop ? transferAt(p.loop.L, values) : null;
   const denSym = ratDenominator(p.transfer);
   const symbolic = polyParams(denSym);
+  const horizonT = plotHorizon(responses.step, stability, poles, dc?.value ?? 0);
+  const delayed = delays && p.delay
+    ? delayedResponses(p.delay.exactTransfer, values, delays, horizonT, {
+        stable: stability.verdict === "stable" && (!loop || loop.nyquist.verdict === "stable"),
+        finalValue: dc?.value ?? null,
+        band: opts.settlingBand ?? 0.02,
+      })
+    : null;
+  if (typeof delayed === "string") notes.push(delayed);
+  if (typeof delayed !== "string" && delayed) notes.push(...delayed.notes);
   const wantSets = opts.stableSets ?? true;
   return {
     input: p.input,
@@ -129,11 +142,12 @@ export function analyzeAt(p: PreparedAnalysis, opts: AnalyzeOptions = {}): Analy
     conditions: wantSets && symbolic.length >= 2 && upDeg(den) <= CONDITIONS_DEGREE ? conditionsOf(routhArray(denSym)) : null,
     responses,
     step,
-    plotHorizon: plotHorizon(responses.step, stability, poles, dc?.value ?? 0),
+    plotHorizon: horizonT,
     ...closedLoopFrequency(p, values, delays, num, den),
     loop,
     steadyState: steadyState(num, den, stability.verdict, loopNumeric, inputRole(p.doc, p.input)),
     deadTime: deadTime?.report ?? null,
+    delayedResponses: typeof delayed === "string" ? null : delayed,
     notes: [...notes, ...(loop?.notes ?? [])],
   };
 }
