@@ -28,12 +28,24 @@ export function sampledStepMetrics(t: readonly number[], y: readonly number[], f
     const level = g[i] > 1 ? 1 + band : 1 - band;
     return t[i] + ((level - g[i]) / (g[i + 1] - g[i])) * (t[i + 1] - t[i]);
   };
+  const peak = overshoots ? vertex(t, g, iMax) : null;
   return {
     riseTime: t10 !== null && t90 !== null ? t90 - t10 : null,
-    peakTime: overshoots ? t[iMax] : null,
-    overshootPercent: overshoots ? 100 * (g[iMax] - 1) : 0,
+    peakTime: peak && peak.t,
+    overshootPercent: peak ? 100 * (peak.g - 1) : 0,
     settlingTime: last < 0 ? 0 : last === g.length - 1 ? null : exit(last),
     finalValue,
     settlingBand: band,
   };
+}
+
+/** The top of the parabola through the samples around a largest one (the sample itself at an end or a kink). */
+function vertex(t: readonly number[], g: readonly number[], i: number): { t: number; g: number } {
+  if (i === 0 || i === g.length - 1) return { t: t[i], g: g[i] };
+  const [a, b, c] = [g[i - 1], g[i], g[i + 1]];
+  const h = t[i + 1] - t[i];
+  const curve = a - 2 * b + c;
+  if (curve >= 0 || Math.abs(t[i] - t[i - 1] - h) > 1e-9 * h) return { t: t[i], g: b };
+  const shift = (0.5 * (a - c)) / curve; // in steps, within ±1/2
+  return { t: t[i] + shift * h, g: b - 0.25 * (a - c) * shift };
 }
