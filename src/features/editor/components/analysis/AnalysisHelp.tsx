@@ -95,6 +95,10 @@ const TERMS: { term: string; body: ReactNode }[] = [
         delayed loop (P, the open-loop poles in the right half-plane, is unchanged by a delay in the loop). Poles, zeros, the Routh
         array, stable ranges, the root locus and the time responses need a rational function: there each e^(−sT) is replaced by its
         Padé approximant of the order shown (“Padé order N”), whose error grows with ωT — raise the order when a figure moves with it.
+        The step and ramp responses are also drawn with the dead time kept exactly (“exact dead time”), with their step metrics: the
+        delay differential equation of the closed loop is simulated on a fixed grid of 8,000 steps, exact between steps for the
+        undelayed part and second-order accurate for the delayed terms; checked against a fine-step simulation of the block diagram
+        to better than 1 part in 10⁶ of the response.
       </>
     ),
   },

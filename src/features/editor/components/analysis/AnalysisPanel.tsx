@@ -24,7 +24,7 @@ interface Props {
 }
 
 const CAUTION =
-  "These results describe the linear model as drawn; dead times enter the poles, Routh array and time responses through their Padé approximation; actuator limits, saturation and other nonlinearity are not in it. Validate on the plant and follow your functional-safety process and local codes.";
+  "These results describe the linear model as drawn; dead times enter the poles, Routh array and closed-form responses through their Padé approximation (the simulated responses keep them exact); actuator limits, saturation and other nonlinearity are not in it. Validate on the plant and follow your functional-safety process and local codes.";
 
 const VERDICT_TONE = { stable: "border-steady bg-steady-tint", marginal: "border-trace bg-trace-tint", unstable: "border-fault bg-fault-tint" } as const;
 
