@@ -1,5 +1,6 @@
 import { readFile } from "node:fs/promises";
 import { expect, test } from "@playwright/test";
+import { DOMParser } from "@xmldom/xmldom";
 import { createTeam, seedDiagram, signUp, uniqueEmail } from "./helpers";
 
 /** Unity feedback around K·e^(−0.5 s)/(s + 1), K = 2: a conveyor's speed loop with transport delay (invented). */
@@ -71,6 +72,16 @@ test("a dead-time block is drawn as e^(−sT), kept exact in the closed loop, an
   expect(early.length).toBeGreaterThan(5);
   expect(early.every(([, , y]) => y === 0)).toBe(true);
   expect(early.some(([, y]) => y !== 0)).toBe(true); // the Padé model moves early (its all-pass zeros)
+
+  // The exported figure draws the dead-time block with its formula typeset as paths (no fonts, no foreignObject).
+  await page.getByRole("toolbar", { name: "Editor" }).getByRole("button", { name: "Export" }).click();
+  const item = page.getByRole("menu", { name: "Export version 1" }).getByRole("menuitem", { name: "Figure (SVG)" });
+  const [figure] = await Promise.all([page.waitForEvent("download"), item.click()]);
+  const svg = new DOMParser().parseFromString(await readFile(await figure.path(), "utf8"), "image/svg+xml");
+  expect(svg.getElementsByTagName("foreignObject").length).toBe(0);
+  const delayGroup = Array.from(svg.getElementsByTagName("g")).find((g) => g.getAttribute("data-block-id") === "d");
+  expect(delayGroup?.getElementsByTagName("svg").length).toBe(1);
+  expect(delayGroup?.getElementsByTagName("path").length ?? 0).toBeGreaterThan(3); // e, −, 1, 2, s as glyph paths
 
   // T with s in it is refused in words that name the kind.
   await block.click();
