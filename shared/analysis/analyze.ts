@@ -20,7 +20,7 @@ import { rootCounts, stabilityOf, type Stability } from "@shared/analysis/stabil
 import { stableSet, type StableSet } from "@shared/analysis/stableSet";
 import { inputRole } from "@shared/analysis/inputRole";
 import { steadyState, type SteadyState } from "@shared/analysis/steadyState";
-import { horizon, stepMetrics, type StepMetrics } from "@shared/analysis/stepMetrics";
+import { horizon, PLOT_SAMPLES, stepMetrics, type StepMetrics } from "@shared/analysis/stepMetrics";
 import { timeResponse, type TimeResponse } from "@shared/analysis/timeResponse";
 import { upDeg, upFromPoly, upText, upToPoly, type UPoly } from "@shared/analysis/upoly";
 
@@ -113,7 +113,7 @@ export function analyzeAt(p: PreparedAnalysis, opts: AnalyzeOptions = {}): Analy
   const loopNumeric = p.loop && loop ? transferAt(p.loop.L, values) : null;
   const denSym = ratDenominator(p.transfer);
   const symbolic = polyParams(denSym);
-  const horizonT = plotHorizon(responses.step, stability, poles, dc?.value ?? 0);
+  const horizonT = plotHorizon(responses.step, stability, poles, dc?.value ?? 0, notes);
   const delayed = delays && p.delay
     ? delayedResponses(p.delay.exactTransfer, values, delays, horizonT, {
         stable: stability.verdict === "stable" && (!loop || loop.nyquist.verdict === "stable"),
@@ -194,16 +194,34 @@ function metricsOrWhy(num: UPoly, den: UPoly, st: Stability, t0: number | null, 
     notes.push(why);
     return { ...empty, finalValue: st.verdict === "stable" ? t0 : null };
   }
-  const m = stepMetrics(r, t0 as number, band);
+  const m = stepMetrics(r, t0 as number, band, notes);
   if (m.peakTime === null) notes.push("No overshoot: the response never exceeds its final value, so there is no peak time.");
   return m;
 }
 
-/** How far in t the responses are plotted: until they settle (or ten time constants when unstable), to a round end. */
-function plotHorizon(r: TimeResponse, st: Stability, poles: RootInfo[], t0: number): number {
-  if (st.verdict === "stable") return roundAxisEnd(horizon(r, 1e-3 * Math.max(Math.abs(t0), 1e-12)) || 1);
-  const scale = Math.max(...poles.map((x) => Math.hypot(x.re, x.im)).filter((x) => x > 0), 1e-3);
-  return roundAxisEnd(10 / scale);
+/** Samples per period a plot needs to draw an oscillation: 400 samples hold 20 periods. */
+const SAMPLES_PER_PERIOD = 20;
+
+/**
+ * How far in t the responses are plotted: until they settle (or ten time constants when unstable), to a round end;
+ * never more periods of the fastest oscillation than the plot's samples can draw (a note says so).
+ */
+function plotHorizon(r: TimeResponse, st: Stability, poles: RootInfo[], t0: number, notes: string[]): number {
+  let end: number;
+  if (st.verdict === "stable") {
+    // Settled to 1e-3 of the response's own size (its final value, else its largest term), whatever its units.
+    const size = Math.abs(t0) || Math.max(0, ...r.terms.map((x) => Math.abs(x.coefficient)));
+    end = (size > 0 && horizon(r, 1e-3 * size)) || 1;
+  } else {
+    end = 10 / Math.max(...poles.map((x) => Math.hypot(x.re, x.im)).filter((x) => x > 0), 1e-3);
+  }
+  const omega = Math.max(0, ...r.terms.filter((x) => x.coefficient !== 0).map((x) => x.frequency));
+  const periods = (end * omega) / (2 * Math.PI);
+  if (periods > PLOT_SAMPLES / SAMPLES_PER_PERIOD) {
+    end = ((PLOT_SAMPLES / SAMPLES_PER_PERIOD) * 2 * Math.PI) / omega;
+    notes.push(`The plots show the first ${PLOT_SAMPLES / SAMPLES_PER_PERIOD} periods of the oscillation at ω = ${omega.toPrecision(4)} rad/s (${PLOT_SAMPLES} samples cannot draw more); the response goes on for about ${Math.round(periods)} periods.`);
+  }
+  return roundAxisEnd(end);
 }
 
 function conditionsOf(r: RouthArray): string[] {

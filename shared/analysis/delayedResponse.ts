@@ -8,7 +8,7 @@ import { simulateDelayed } from "@shared/analysis/delaySimulation";
 import { AnalysisError } from "@shared/analysis/errors";
 import { exactValues } from "@shared/analysis/nominal";
 import { sampledStepMetrics } from "@shared/analysis/sampledMetrics";
-import type { StepMetrics } from "@shared/analysis/stepMetrics";
+import { PLOT_SAMPLES, type StepMetrics } from "@shared/analysis/stepMetrics";
 
 export interface DelayedResponses {
   method: "simulation";
@@ -21,8 +21,6 @@ export interface DelayedResponses {
   stepMetrics: StepMetrics | null;
   notes: string[];
 }
-
-const SAMPLES = 400;
 
 /**
  * Step and ramp responses of the exact transfer (dead times as e^(−sT)) on [0, tEnd], the sentence saying why
@@ -44,7 +42,7 @@ export function delayedResponses(exact: RatFn, values: Readonly<Record<string, n
     else if (!finalValue) notes.push("No step metrics with the exact dead time: the final value is 0.");
     else stepMetrics = sampledStepMetrics(step.t, step.y, finalValue, band);
     const n = step.t.length - 1;
-    const picks = Array.from({ length: Math.min(SAMPLES, n) + 1 }, (_, i) => Math.round((i * n) / Math.min(SAMPLES, n)));
+    const picks = Array.from({ length: Math.min(PLOT_SAMPLES, n) + 1 }, (_, i) => Math.round((i * n) / Math.min(PLOT_SAMPLES, n)));
     return {
       method: "simulation",
       stepSize: step.stepSize,

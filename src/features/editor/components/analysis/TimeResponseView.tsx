@@ -1,7 +1,7 @@
 import { useId, useMemo, useState } from "react";
 import { CartesianGrid, Legend, Line, LineChart, ReferenceArea, ReferenceDot, ReferenceLine, Tooltip, XAxis, YAxis } from "recharts";
 import type { Analysis } from "@shared/analysis/analyze";
-import { sampleResponse } from "@shared/analysis/stepMetrics";
+import { PLOT_SAMPLES, sampleResponse } from "@shared/analysis/stepMetrics";
 import { responseAt, type InputKind, type TimeResponse } from "@shared/analysis/timeResponse";
 import { Button } from "@/components/Button";
 import { niceStep } from "@shared/analysis/axisSteps";
@@ -15,7 +15,6 @@ const KINDS: { kind: InputKind; label: string }[] = [
   { kind: "ramp", label: "Unit ramp" },
 ];
 const BANDS = [0.02, 0.05, 0.01];
-const SAMPLES = 400;
 
 type Samples = [number, number][];
 
@@ -35,7 +34,7 @@ export function TimeResponseView({ analysis, band, onBand }: { analysis: Analysi
   const exact = useMemo(() => exactSamplesOf(analysis, kind), [analysis, kind]);
   // With an exact response beside it, the Padé model is sampled at the same times so the CSV has one t column.
   const samples = useMemo(
-    () => (exact ? exact.map(([t]): [number, number] => [t, responseAt(response, t)]) : sampleResponse(response, analysis.plotHorizon, SAMPLES)),
+    () => (exact ? exact.map(([t]): [number, number] => [t, responseAt(response, t)]) : sampleResponse(response, analysis.plotHorizon, PLOT_SAMPLES)),
     [exact, response, analysis.plotHorizon],
   );
   const label = KINDS.find((k) => k.kind === kind)?.label ?? kind;
