@@ -7,7 +7,8 @@ export type AlgebraErrorCode =
   | "degree-limit" // a result would have degree > 1000 in s (or in a parameter)
   | "missing-parameter" // numeric evaluation without a value for a parameter
   | "not-univariate" // a one-parameter routine got s or several parameters
-  | "bad-number"; // a numeric literal that is not a finite decimal or p/q
+  | "bad-number" // a numeric literal that is not a finite decimal or p/q
+  | "size-limit"; // an expression whose exact numbers or terms would grow past the limits (sizeLimits.ts)
 
 export class AlgebraError extends Error {
   readonly code: AlgebraErrorCode;

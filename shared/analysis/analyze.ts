@@ -20,7 +20,7 @@ import { rootCounts, stabilityOf, type Stability } from "@shared/analysis/stabil
 import { stableSet, type StableSet } from "@shared/analysis/stableSet";
 import { inputRole } from "@shared/analysis/inputRole";
 import { steadyState, type SteadyState } from "@shared/analysis/steadyState";
-import { horizon, PLOT_SAMPLES, stepMetrics, type StepMetrics } from "@shared/analysis/stepMetrics";
+import { horizon, negligibleFrom, PLOT_SAMPLES, stepMetrics, type StepMetrics } from "@shared/analysis/stepMetrics";
 import { timeResponse, type TimeResponse } from "@shared/analysis/timeResponse";
 import { upDeg, upFromPoly, upText, upToPoly, type UPoly } from "@shared/analysis/upoly";
 
@@ -207,19 +207,27 @@ const SAMPLES_PER_PERIOD = 20;
  * never more periods of the fastest oscillation than the plot's samples can draw (a note says so).
  */
 function plotHorizon(r: TimeResponse, st: Stability, poles: RootInfo[], t0: number, notes: string[]): number {
+  // Settled to 1e-3 of the response's own size (its final value, else its largest term), whatever its units.
+  const size = Math.abs(t0) || Math.max(0, ...r.terms.map((x) => Math.abs(x.coefficient)));
   let end: number;
   if (st.verdict === "stable") {
-    // Settled to 1e-3 of the response's own size (its final value, else its largest term), whatever its units.
-    const size = Math.abs(t0) || Math.max(0, ...r.terms.map((x) => Math.abs(x.coefficient)));
     end = (size > 0 && horizon(r, 1e-3 * size)) || 1;
   } else {
     end = 10 / Math.max(...poles.map((x) => Math.hypot(x.re, x.im)).filter((x) => x > 0), 1e-3);
   }
-  const omega = Math.max(0, ...r.terms.filter((x) => x.coefficient !== 0).map((x) => x.frequency));
-  const periods = (end * omega) / (2 * Math.PI);
-  if (periods > PLOT_SAMPLES / SAMPLES_PER_PERIOD) {
-    end = ((PLOT_SAMPLES / SAMPLES_PER_PERIOD) * 2 * Math.PI) / omega;
-    notes.push(`The plots show the first ${PLOT_SAMPLES / SAMPLES_PER_PERIOD} periods of the oscillation at ω = ${omega.toPrecision(4)} rad/s (${PLOT_SAMPLES} samples cannot draw more); the response goes on for about ${Math.round(periods)} periods.`);
+  // An oscillation still visible after 20 of its periods cannot be drawn with the plot's samples: the plot stops there.
+  const periodsShown = PLOT_SAMPLES / SAMPLES_PER_PERIOD;
+  const aliased = r.terms.filter((x) => {
+    if (x.frequency === 0 || x.coefficient === 0) return false;
+    const shown = (periodsShown * 2 * Math.PI) / x.frequency;
+    const visibleUntil = x.decay > 0 ? negligibleFrom(x, 1e-3 * size) : Infinity;
+    return visibleUntil > shown && end > shown;
+  });
+  if (aliased.length) {
+    const omega = Math.max(...aliased.map((x) => x.frequency));
+    const periods = (end * omega) / (2 * Math.PI);
+    end = (periodsShown * 2 * Math.PI) / omega;
+    notes.push(`The plots show the first ${periodsShown} periods of the oscillation at ω = ${omega.toPrecision(4)} rad/s (${PLOT_SAMPLES} samples cannot draw more); the response goes on for about ${Math.round(periods)} periods.`);
   }
   return roundAxisEnd(end);
 }

@@ -41,7 +41,7 @@ const size = (x: TimeResponse["terms"][number], t: number): number => Math.abs(x
  * The time from which a decaying term's size stays below tol for good: past its peak (t + 1 = k/σ) the size only
  * falls, so one bisection replaces a test at every grid point. −Infinity when it never reaches tol.
  */
-function negligibleFrom(x: TimeResponse["terms"][number], tol: number): number {
+export function negligibleFrom(x: TimeResponse["terms"][number], tol: number): number {
   const peak = Math.max(0, x.power / x.decay - 1);
   if (size(x, peak) < tol) return -Infinity;
   let [a, b] = [peak, peak + 1 / x.decay];

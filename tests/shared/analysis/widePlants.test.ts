@@ -4,6 +4,8 @@ import { analyzeDocument } from "@shared/analysis/analyzeDiagram";
 import type { Analysis } from "@shared/analysis/analyze";
 import { q, qFromDouble, qToNumber } from "@shared/algebra/rational";
 import { qSqrtToNumber, surdToNumber } from "@shared/analysis/surd";
+import type { Complex } from "@shared/analysis/frequency";
+import { clockwiseEncirclements } from "@shared/analysis/nyquist";
 
 // Real plants, not tidy ones: time constants decades apart, gains near the ends of the double range, modes with
 // almost no damping. Each case used to fail (an array of billions of grid points, a hang in an integer square
@@ -103,6 +105,34 @@ print(json.dumps(sorted([[float(x.real), float(x.imag)] for x in r])))
     });
     expect(a.bode.omega.length).toBeLessThanOrEqual(2000);
     expect(a.step.settlingTime).not.toBeNull();
+  });
+});
+
+describe("the Nyquist curve near repeated poles on the axis", () => {
+  it("L = 1/((s + 1)(s² + 1))³ (a triple pole pair at ±j): the verdict agrees with numpy's roots of 1 + L", () => {
+    const a = analysed("1/(s^3+s^2+s+1)^3");
+    // Reference: numpy.roots of (s³ + s² + s + 1)³ + 1, counted in the right half-plane.
+    const rhp = python<number>(
+      `
+import json
+import numpy as np
+d = np.polymul(np.polymul([1, 1, 1, 1], [1, 1, 1, 1]), [1, 1, 1, 1])
+print(json.dumps(int(sum(1 for r in np.roots(np.polyadd(d, [1])) if r.real > 0))))
+`,
+      null,
+    );
+    expect(a.loop?.nyquist.closedLoopRhpPoles).toBe(rhp);
+    expect(a.loop?.nyquist.verdict).toBe(rhp === 0 ? "stable" : "unstable");
+  });
+
+  it("gives up on a curve whose phase is noise, within its evaluation budget, instead of halving forever", () => {
+    let seed = 1;
+    const noise = (): Complex => {
+      seed = (seed * 16807) % 2147483647;
+      const th = (2 * Math.PI * seed) / 2147483647;
+      return [Math.cos(th) - 1, Math.sin(th)];
+    };
+    expect(clockwiseEncirclements(noise, [], 10, 1e-3)).toBeNull();
   });
 });
 
