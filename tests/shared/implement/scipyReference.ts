@@ -66,3 +66,20 @@ export function relativeDifference(a0: readonly number[], b0: readonly number[])
   const scale = Math.max(...b.map(Math.abs), Number.MIN_VALUE);
   return Math.max(0, ...a.map((x, i) => Math.abs(x - b[i]))) / scale;
 }
+
+/** A case from float coefficients (DESCENDING) as a command prints them, each read as its shortest decimal. */
+export function floatCase(id: string, num: number[], den: number[], ts: number, prewarp?: number, realisations: Record<string, StateSpace> = {}): ScipyCase {
+  return {
+    id,
+    num,
+    den,
+    ts,
+    prewarp,
+    numExact: num.map(String),
+    denExact: den.map(String),
+    tsExact: String(ts),
+    prewarpC: prewarp === undefined ? undefined : prewarp / Math.tan((prewarp * ts) / 2),
+    realisations,
+    discrete: {},
+  };
+}
