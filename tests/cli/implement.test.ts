@@ -1,7 +1,7 @@
 import { join } from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
 import { implementResultSchema, type ImplementResult } from "@shared/implement/schema";
-import { makeDoc, unityFeedback } from "../support/docBuilder";
+import { delayedLoop, piLoop, unityFeedback } from "../support/docBuilder";
 import { runCli, tempFiles, SPAWN_TIMEOUT, STACK_TRACE } from "../support/cliRun";
 import { floatCase, relativeDifference, runScipyImplement, type ScipyAnswer } from "../shared/implement/scipyReference";
 
@@ -12,19 +12,7 @@ const implement = (...args: string[]) => runCli("implement", ...args);
 const { dir, file } = tempFiles("loopwright-implement-");
 
 // The felt-conveyor demo's loop: PI controller Kp(Ti s + 1)/(Ti s) around a first-order drive, unity feedback.
-const beltLoop = makeDoc(
-  [
-    { id: "w_ref", type: "input" },
-    { id: "err", type: "sum", signs: ["+", "-"] },
-    { id: "pi", type: "transfer", expr: "Kp*(Ti*s + 1)/(Ti*s)" },
-    { id: "drive", type: "transfer", expr: "8/(0.25*s + 1)" },
-    { id: "pick", type: "branch" },
-    { id: "w", type: "output" },
-  ],
-  ["w_ref->err:0", "err->pi", "pi->drive", "drive->pick", "pick->w", "pick->err:1"],
-  { Kp: 2, Ti: 0.4 },
-  "Belt speed loop",
-);
+const beltLoop = piLoop("8/(0.25*s + 1)", { Kp: 2, Ti: 0.4 }, "Belt speed loop");
 
 const json = (stdout: string): ImplementResult => implementResultSchema.strict().parse(JSON.parse(stdout));
 const close = (got: number[], want: number[], tol: number) => expect(relativeDifference(got, want), `${got} vs ${want}`).toBeLessThan(tol);
@@ -39,7 +27,7 @@ describe("implement CLI", { timeout: SPAWN_TIMEOUT }, () => {
   beforeAll(async () => {
     const [b, p] = await Promise.all([
       implement(belt, "--json", "--block", "pi", "--ts", "0.01", "--method", "tustin"),
-      implement(belt, "--json", "--input", "w_ref", "--output", "w", "--ts=0.002", "--method=zoh", "--form", "minimal"),
+      implement(belt, "--json", "--input", "r", "--output", "y", "--ts=0.002", "--method=zoh", "--form", "minimal"),
     ]);
     expect([b.code, b.stderr]).toEqual([0, ""]);
     expect(p.code).toBe(0);
@@ -122,11 +110,11 @@ describe("implement CLI", { timeout: SPAWN_TIMEOUT }, () => {
   it("exit 2: the command line is wrong, each said with the usage line", async () => {
     const cases: [string[], RegExp][] = [
       [[], /choose what to implement/],
-      [["--block", "pi", "--input", "w_ref"], /either --block ID or --input ID --output ID/],
-      [["--input", "w_ref"], /choose what to implement/],
+      [["--block", "pi", "--input", "r"], /either --block ID or --input ID --output ID/],
+      [["--input", "r"], /choose what to implement/],
       [["--block", "nope"], /no block "nope"/],
-      [["--block", "err"], /summing junction "err" has no transfer/],
-      [["--input", "zz", "--output", "w"], /input "zz"/],
+      [["--block", "e"], /summing junction "e" has no transfer/],
+      [["--input", "zz", "--output", "y"], /input "zz"/],
       [["--block", "pi", "--ts", "0.01"], /--ts needs a --method/],
       [["--block", "pi", "--ts", "-1", "--method", "zoh"], /--ts must be a positive number, not "-1"/],
       [["--block", "pi", "--ts", "0.01", "--method", "euler"], /--method must be one of tustin, prewarp, zoh, matched, not "euler"/],
@@ -146,19 +134,7 @@ describe("implement CLI", { timeout: SPAWN_TIMEOUT }, () => {
   });
 
   it("exit 1: a dead time in the transfer, an improper block and bad JSON, each named", async () => {
-    const delayed = file(
-      "delay.json",
-      makeDoc(
-        [
-          { id: "r", type: "input" },
-          { id: "e", type: "sum", signs: ["+", "-"] },
-          { id: "d", type: "delay", expr: "0.5" },
-          { id: "g", type: "transfer", expr: "1/(s + 1)" },
-          { id: "y", type: "output" },
-        ],
-        ["r->e:0", "e->d", "d->g", "g->y", "g->e:1"],
-      ),
-    );
+    const delayed = file("delay.json", delayedLoop("1", "0.5", "1/(s + 1)"));
     const [dead, deadBlock, improper, bad] = await Promise.all([
       implement(delayed, "--json", "--input", "r", "--output", "y"),
       implement(delayed, "--json", "--block", "d"),

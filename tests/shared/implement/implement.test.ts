@@ -5,22 +5,10 @@ import { implement } from "@shared/implement/implement";
 import { samplingAdvice } from "@shared/implement/sampling";
 import { implementResultSchema } from "@shared/implement/schema";
 import type { ImplementSelection } from "@shared/implement/selection";
-import { makeDoc, unityFeedback } from "../../support/docBuilder";
+import { delayedLoop, piLoop, unityFeedback } from "../../support/docBuilder";
 import { reduced } from "../../support/reduced";
 
-const piLoop = () =>
-  makeDoc(
-    [
-      { id: "r", type: "input" },
-      { id: "e", type: "sum", signs: ["+", "-"] },
-      { id: "pi", type: "transfer", expr: "Kp*(Ti*s + 1)/(Ti*s)" },
-      { id: "g", type: "transfer", expr: "8/(0.25*s + 1)" },
-      { id: "b", type: "branch" },
-      { id: "y", type: "output" },
-    ],
-    ["r->e:0", "e->pi", "pi->g", "g->b", "b->y", "b->e:1"],
-    { Kp: 0.5, Ti: 0.2 },
-  );
+const loop = () => piLoop("8/(0.25*s + 1)", { Kp: 0.5, Ti: 0.2 });
 
 const failure = (f: () => unknown): ImplementError => {
   try {
@@ -36,7 +24,7 @@ describe("implement: a block or a pair of a diagram", () => {
   it("a block's transfer at the nominal values, discretised and realised, in the published shape", () => {
     // Kp(Ti s + 1)/(Ti s) at Kp = 1/2, Ti = 1/5 is (s/2 + 5/2)/s; Tustin at Ts = 0.01 (from memory:
     // s → 200(z − 1)/(z + 1)): (0.5·200(z − 1) + 2.5(z + 1))/(200(z − 1)) = (0.5125z − 0.4875)/(z − 1).
-    const out = implement(reduced(piLoop()), { block: "pi" }, { discretise: { ts: 0.01, method: "tustin" } });
+    const out = implement(reduced(loop()), { block: "pi" }, { discretise: { ts: 0.01, method: "tustin" } });
     expect(implementResultSchema.parse(out.result)).toEqual(out.result);
     expect(out.result.continuous).toEqual({ numerator: [0.5, 2.5], denominator: [1, 0] });
     expect(out.result.discrete).toEqual({ ts: 0.01, method: "tustin", numerator: [0.5125, -0.4875], denominator: [1, -1] });
@@ -53,7 +41,7 @@ describe("implement: a block or a pair of a diagram", () => {
   });
 
   it("names what is wrong: an unknown block, a block without a transfer, an unknown pair", () => {
-    const r = reduced(piLoop());
+    const r = reduced(loop());
     const cases: [ImplementSelection, string, string, RegExp][] = [
       [{ block: "nope" }, "unknown-block", "nope", /no block "nope".*pi, g/],
       [{ block: "e" }, "no-transfer", "e", /summing junction "e" has no transfer of its own/],
@@ -68,17 +56,7 @@ describe("implement: a block or a pair of a diagram", () => {
   });
 
   it("refuses a transfer holding a dead time, naming the dead-time block; a block beside it still works", () => {
-    const doc = makeDoc(
-      [
-        { id: "r", type: "input" },
-        { id: "e", type: "sum", signs: ["+", "-"] },
-        { id: "c", type: "gain", expr: "2" },
-        { id: "d", type: "delay", expr: "0.5" },
-        { id: "g", type: "transfer", expr: "1/(s + 1)" },
-        { id: "y", type: "output" },
-      ],
-      ["r->e:0", "e->c", "c->d", "d->g", "g->y", "g->e:1"],
-    );
+    const doc = delayedLoop("2", "0.5", "1/(s + 1)");
     const r = reduced(doc);
     for (const selection of [{ block: "d" }, { input: "r", output: "y" }]) {
       const e = failure(() => implement(r, selection));

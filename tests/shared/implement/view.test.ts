@@ -1,20 +1,9 @@
 import { describe, expect, it } from "vitest";
 import { implementationView, prewarpFor, type ImplementRequest } from "@shared/implement/view";
-import { makeDoc } from "../../support/docBuilder";
+import { delayedLoop } from "../../support/docBuilder";
 import { reduced } from "../../support/reduced";
 
-const loop = makeDoc(
-  [
-    { id: "r", type: "input" },
-    { id: "e", type: "sum", signs: ["+", "-"] },
-    { id: "c", type: "transfer", expr: "Kd*(s + 1)" },
-    { id: "d", type: "delay", expr: "0.1" },
-    { id: "g", type: "transfer", expr: "2/(s + 2)" },
-    { id: "y", type: "output" },
-  ],
-  ["r->e:0", "e->c", "c->d", "d->g", "g->y", "g->e:1"],
-  { Kd: 3 },
-);
+const loop = delayedLoop("Kd*(s + 1)", "0.1", "2/(s + 2)", { Kd: 3 });
 const request = (over: Partial<ImplementRequest>): ImplementRequest => ({ block: "g", ts: 0.1, method: "zoh", prewarp: null, form: "controllable", ...over });
 const ctx = { input: "r", output: "y", bandwidth: 4, values: { Kd: 3 } };
 

@@ -2,12 +2,7 @@ import { useMemo } from "react";
 import { CartesianGrid, Legend, Line, LineChart, ReferenceLine, Tooltip, XAxis, YAxis } from "recharts";
 import type { DiscreteResponse } from "@shared/implement/discreteResponse";
 import { formatNumber } from "@/features/editor/lib/analysisFormat";
-
-const logTicks = (lo: number, hi: number): number[] => {
-  const out: number[] = [];
-  for (let k = Math.ceil(Math.log10(lo) - 1e-9); k <= Math.floor(Math.log10(hi) + 1e-9); k++) out.push(10 ** k);
-  return out;
-};
+import { frequencyAxisProps } from "@/features/editor/lib/logTicks";
 
 // The continuous curve in graphite and dashed, the discrete one in the action colour, as the compare page draws two versions.
 const CONTINUOUS = { stroke: "#4d5663", strokeDasharray: "6 4" };
@@ -23,8 +18,7 @@ export function DiscreteBode({ response, bandwidth }: { response: DiscreteRespon
   const plot = (keys: ["cMag", "dMag"] | ["cPhase", "dPhase"], unit: string, height: number) => (
     <LineChart responsive style={{ width: "100%", height }} data={rows} syncId="discrete-bode" margin={{ top: 8, right: 16, bottom: 8, left: 4 }}>
       <CartesianGrid className="text-rule" stroke="currentColor" strokeDasharray="2 4" />
-      <XAxis type="number" dataKey="w" scale="log" domain={domain} ticks={logTicks(...domain)} allowDataOverflow fontSize={11}
-        tickFormatter={(w: number) => formatNumber(w, 3)} label={{ value: "ω (rad/s)", position: "insideBottomRight", offset: -4, fontSize: 11 }} />
+      <XAxis {...frequencyAxisProps(domain)} />
       <YAxis type="number" domain={["auto", "auto"]} width={56} fontSize={11} tickFormatter={(v: number) => formatNumber(v, 3)}
         label={{ value: unit, angle: -90, position: "insideLeft", fontSize: 11 }} />
       <Tooltip labelFormatter={(w) => `ω = ${formatNumber(Number(w), 5)} rad/s`} formatter={(v) => `${formatNumber(Number(v), 5)} ${unit}`} />
