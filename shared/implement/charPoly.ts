@@ -1,3 +1,5 @@
+// Own characteristic polynomial (Householder Hessenberg form, then its leading minors): mathjs/number has no
+// matrices, and expanding det(sI − A) symbolically is neither stable nor needed at the orders realised here.
 import type { Matrix } from "@shared/implement/matrix";
 
 /**

@@ -1,7 +1,7 @@
-import { identity, matAdd, matMul, matScale, normInf, solve, type Matrix } from "@shared/implement/matrix";
-
 // Own matrix exponential (no package in reach of shared/ has one): diagonal [6/6] Padé approximant with
 // scaling and squaring, ‖A/2^j‖∞ ≤ 1/2, whose truncation error is below 4e-16 relative there.
+import { identity, matAdd, matMul, matScale, normInf, solve, type Matrix } from "@shared/implement/matrix";
+
 const Q = 6;
 
 /** Coefficients c_k of the [6/6] Padé numerator of e^x (the denominator is the same at −x). */
