@@ -8,8 +8,8 @@ export function responseCsv(samples: readonly (readonly number[])[], columns: re
   return [columns.join(","), ...samples.map((row) => row.join(","))].join("\n") + "\n";
 }
 
-/** Block ids may hold any character; a file name keeps the portable ones (letters, digits, ".", "_", "-"). */
-const safe = (id: string): string => id.replace(/[^A-Za-z0-9._-]+/g, "_") || "_";
+/** Block ids may hold any character; a file name keeps the portable ones (letters, digits, ".", "_", "-"). Example: safe("r → y") === "r_y". */
+export const safe = (id: string): string => id.replace(/[^A-Za-z0-9._-]+/g, "_") || "_";
 
 /** Download name of a response. Example: responseCsvName("step", "r", "y") === "step-response-r-to-y.csv". */
 export function responseCsvName(input: InputKind, from: string, to: string): string {

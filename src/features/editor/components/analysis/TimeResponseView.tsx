@@ -8,6 +8,7 @@ import { niceStep } from "@shared/analysis/axisSteps";
 import { Tex } from "@/features/editor/components/Tex";
 import { formatNumber, formatQuantity } from "@/features/editor/lib/analysisFormat";
 import { responseCsv, responseCsvName } from "@/features/editor/lib/responseCsv";
+import { saveText } from "@/features/editor/lib/saveText";
 
 const KINDS: { kind: InputKind; label: string }[] = [
   { kind: "step", label: "Unit step" },
@@ -234,17 +235,4 @@ function StepMetricsTable({ analysis, band, onBand, pade }: { analysis: Analysis
       )}
     </section>
   );
-}
-
-/** Hands text to the browser as a file download. */
-function saveText(text: string, fileName: string) {
-  const url = URL.createObjectURL(new Blob([text], { type: "text/csv;charset=utf-8" }));
-  const a = document.createElement("a");
-  a.href = url;
-  a.download = fileName;
-  document.body.append(a);
-  a.click();
-  a.remove();
-  // Revoked a little later: some browsers read the URL after click() returns.
-  setTimeout(() => URL.revokeObjectURL(url), 1000);
 }
