@@ -2,7 +2,8 @@
 // D(p, e^(−pτ))·z = u, y = N(p, e^(−pτ))·z on a fixed grid (p = d/dt). Between grid points the undelayed part
 // is integrated exactly (matrix exponential) and the delayed terms, known from the history, are taken as linear:
 // second-order accurate in the step, with no step-size limit from fast stable poles.
-import { expm, type Matrix } from "@shared/algebra/expm";
+import { expm } from "@shared/algebra/expm";
+import type { Matrix } from "@shared/algebra/matrix";
 import type { DelayTerm } from "@shared/analysis/delayTerms";
 import { AnalysisError } from "@shared/analysis/errors";
 

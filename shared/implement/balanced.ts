@@ -1,4 +1,4 @@
-import { matMul, solve, identity, transpose } from "@shared/implement/matrix";
+import { matMul, solve, identity, transpose } from "@shared/algebra/matrix";
 import type { StateSpace } from "@shared/implement/stateSpace";
 import { cholesky, lyapunov, symmetricEigen } from "@shared/implement/symmetric";
 

@@ -1,6 +1,6 @@
 // Own characteristic polynomial (Householder Hessenberg form, then its leading minors): mathjs/number has no
 // matrices, and expanding det(sI − A) symbolically is neither stable nor needed at the orders realised here.
-import type { Matrix } from "@shared/implement/matrix";
+import type { Matrix } from "@shared/algebra/matrix";
 
 /**
  * Orthogonal similarity to upper Hessenberg form by Householder reflections (same eigenvalues, and

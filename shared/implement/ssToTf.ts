@@ -1,5 +1,5 @@
 import { charPoly } from "@shared/implement/charPoly";
-import { matMul, type Matrix } from "@shared/implement/matrix";
+import { matMul, type Matrix } from "@shared/algebra/matrix";
 import type { StateSpace } from "@shared/implement/stateSpace";
 
 /** A float transfer: coefficients in DESCENDING powers (of s or of z), constant last. */

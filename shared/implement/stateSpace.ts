@@ -1,7 +1,7 @@
 import { qMul, qNeg, qSub, qToNumber, qZero } from "@shared/algebra/rational";
 import { upDeg, type UPoly } from "@shared/analysis/upoly";
 import { ImplementError, type Subject } from "@shared/implement/errors";
-import { transpose, type Matrix } from "@shared/implement/matrix";
+import { transpose, type Matrix } from "@shared/algebra/matrix";
 
 /** A transfer at fixed values: exact ascending coefficients, lowest terms, monic denominator (transferAt's). */
 export interface ExactTf {

@@ -1,4 +1,4 @@
-import { identity, solve, type Matrix } from "@shared/implement/matrix";
+import { identity, solve, type Matrix } from "@shared/algebra/matrix";
 
 // Own small symmetric solvers for the balanced realisation (Lyapunov, Cholesky, Jacobi eigenvalues): no package
 // shared/ may load has them, and at the orders realised here (≤ 20) the plain methods are accurate and quick.

@@ -1,5 +1,5 @@
-import { expm } from "@shared/implement/expm";
-import { zeros } from "@shared/implement/matrix";
+import { expm } from "@shared/algebra/expm";
+import { zeros } from "@shared/algebra/matrix";
 import { ssToTf, type FloatTf } from "@shared/implement/ssToTf";
 import { controllableForm, type ExactTf } from "@shared/implement/stateSpace";
 

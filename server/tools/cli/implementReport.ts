@@ -1,7 +1,7 @@
 import { differenceEquation, digits17, METHOD_NAMES } from "@shared/implement/differenceEquation";
 import type { DiscretiseOptions } from "@shared/implement/discretise";
 import type { Implementation } from "@shared/implement/implement";
-import type { Matrix } from "@shared/implement/matrix";
+import type { Matrix } from "@shared/algebra/matrix";
 import { upText } from "@shared/analysis/upoly";
 
 /** The readable report of `implement` (without --json): the transfers, the difference equation, C code, matrices. */
