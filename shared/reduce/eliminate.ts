@@ -5,7 +5,8 @@ import { Footprint } from "@shared/reduce/footprint";
 import type { SignalFlowGraph } from "@shared/reduce/graph";
 import { MinHeap } from "@shared/reduce/heap";
 import { comparePlans, planNode, type Plan } from "@shared/reduce/plan";
-import { applyPlan, solveTogether, type RuleContext } from "@shared/reduce/rules";
+import type { RuleContext } from "@shared/reduce/ruleEdits";
+import { applyPlan, solveTogether } from "@shared/reduce/rules";
 import type { StepLog } from "@shared/reduce/trace";
 
 type Entry = Plan & { id: string; order: number; size: number; stamp: number };

@@ -1,96 +1,15 @@
 import type { Field } from "@shared/algebra/field";
-import { spend, type Budget } from "@shared/reduce/budget";
 import { SingularLoopError, solveDense } from "@shared/reduce/dense";
-import type { Footprint } from "@shared/reduce/footprint";
-import { blockPart, type Part, type SfgEdge, type SfgNode, type SignalFlowGraph } from "@shared/reduce/graph";
-import { feedbackPair, type Action, type Blocked } from "@shared/reduce/plan";
-import type { ReductionRule } from "@shared/reduce/result";
-import { edgeName, times, type StepLog } from "@shared/reduce/trace";
+import type { Part, SfgEdge, SfgNode } from "@shared/reduce/graph";
+import { feedbackPair, type Action } from "@shared/reduce/plan";
+import { folded, freed, head, link, produce, removeNode, tail, unlink, type Outside, type RuleContext } from "@shared/reduce/ruleEdits";
+import { edgeName, times } from "@shared/reduce/trace";
 
-/**
- * The reduction rules on the signal-flow graph. Each is an exact elimination: a node goes away (or a
- * loop is closed) and the transfer between the remaining nodes is unchanged. `pivots` collects the pivots
- * (return differences) when asked: their product is det(I − A) of the graph reduced.
- * Example: applyPlan(ctx, node, "series") turns a → n → b into one edge a → b with the product gain.
+/*
+ * The reduction rules on the signal-flow graph. Each is an exact elimination: a node goes away (or a loop is
+ * closed) and the transfer between the remaining nodes is unchanged; each says which of the edges' parts stay
+ * outside its equivalent block. Example: applyPlan(ctx, node, "series") turns a → n → b into one edge a → b.
  */
-export interface RuleContext<T> {
-  readonly graph: SignalFlowGraph<T>;
-  readonly field: Field<T>;
-  /** Null in determinant-only runs: no trace, equivalent blocks are not named. */
-  readonly log: StepLog<T> | null;
-  /** What each step consumes; present exactly when `log` is. */
-  readonly footprint: Footprint<T> | null;
-  readonly budget: Budget;
-  readonly terminals: ReadonlySet<string>;
-  readonly blocked: Blocked;
-  /** Factors of det(I − A) collected so far, or null when the determinant is not wanted. */
-  readonly pivots: T[] | null;
-}
-
-type Draft<T> = Omit<SfgEdge<T>, "seq" | "from" | "to">;
-
-const ANONYMOUS = "~";
-
-function link<T>(ctx: RuleContext<T>, from: string, to: string, draft: Draft<T>): void {
-  spend(ctx.budget, 1);
-  const edge = ctx.graph.addEdge({ from, to, ...draft });
-  ctx.footprint?.carry(edge);
-}
-
-function unlink<T>(ctx: RuleContext<T>, edge: SfgEdge<T>): void {
-  ctx.graph.removeEdge(edge);
-  ctx.footprint?.drop(edge);
-}
-
-function removeNode<T>(ctx: RuleContext<T>, node: SfgNode<T>): void {
-  for (const e of [...node.ins, ...node.outs, ...node.loops]) ctx.footprint?.drop(e);
-  ctx.graph.removeNode(node.id);
-}
-
-/** What the new edge keeps of the old ones' parts: those outside the equivalent block. */
-interface Outside {
-  before: readonly Part[];
-  after: readonly Part[];
-}
-
-/**
- * Records the step (when tracing) and returns the new equivalent block's draft. `edges` and `nodes` are what the
- * step may consume: the footprint lists those of their blocks and wires that nothing else stands for any more.
- */
-function produce<T>(
-  ctx: RuleContext<T>,
-  rule: ReductionRule,
-  edges: readonly SfgEdge<T>[],
-  nodes: readonly SfgNode<T>[],
-  gain: T,
-  outside: Outside,
-  describe: (eq: string) => string,
-): Draft<T> {
-  let label = ANONYMOUS;
-  if (ctx.log) {
-    const step = ctx.log.record(rule, gain, describe);
-    ctx.footprint?.note(step, edges, nodes);
-    label = step.produced;
-  }
-  return { gain, label, sign: 1, ...outside };
-}
-
-/** Parts before an edge's label; a bare edge's are all there (taken as ending in its label). */
-const head = <T>(e: SfgEdge<T>): readonly Part[] => (e.label === null ? [...e.before, ...e.after] : e.before);
-/** Parts after an edge's label; a bare edge's are all there (taken as starting with its label). */
-const tail = <T>(e: SfgEdge<T>): readonly Part[] => (e.label === null ? [...e.before, ...e.after] : e.after);
-
-/** A junction node's own block as a part of the edges it folds into, unless a step consumed it already. */
-function folded<T>(ctx: RuleContext<T>, node: SfgNode<T>): Part[] {
-  return node.own && !ctx.footprint?.consumed(node.own.id) ? [blockPart(node.own.id)] : [];
-}
-
-/** True when the rule leaves a junction node with nothing to join or split (it is consumed by the step). */
-function freed<T>(ctx: RuleContext<T>, node: SfgNode<T>, added: { ins: number; outs: number }): boolean {
-  if (!node.own || ctx.footprint?.consumed(node.own.id)) return false;
-  const degree = node.own.joins ? node.ins.size + added.ins : node.outs.size + added.outs;
-  return degree + node.loops.size < 2;
-}
 
 const signed = <T>(field: Field<T>, sign: 1 | -1, gain: T): T => (sign > 0 ? gain : field.neg(gain));
 
