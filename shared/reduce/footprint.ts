@@ -7,7 +7,7 @@ interface Pending<T> {
   nodes: readonly SfgNode<T>[];
 }
 
-const labelKey = (label: string) => `b:${label}`;
+const blockKey = (label: string) => `b:${label}`;
 
 /**
  * What each step of one pair's reduction consumes: the blocks and wires that its equivalent block replaces, each
@@ -33,20 +33,20 @@ export class Footprint<T> {
   }
 
   carry(edge: SfgEdge<T>): void {
-    if (edge.label !== null) this.count(labelKey(edge.label), 1);
+    if (edge.label !== null) this.count(blockKey(edge.label), 1);
     for (const p of edge.before) this.count(p.key, 1, p);
     for (const p of edge.after) this.count(p.key, 1, p);
   }
 
   drop(edge: SfgEdge<T>): void {
-    if (edge.label !== null) this.count(labelKey(edge.label), -1);
+    if (edge.label !== null) this.count(blockKey(edge.label), -1);
     for (const p of edge.before) this.count(p.key, -1);
     for (const p of edge.after) this.count(p.key, -1);
   }
 
   /** True once a step has consumed the block (a tidied junction then folds into no edge). */
   consumed(block: string): boolean {
-    return this.spent.has(labelKey(block));
+    return this.spent.has(blockKey(block));
   }
 
   /** A step recorded by a rule that is still changing the graph: what it consumes is known at `settle`. */
@@ -60,15 +60,15 @@ export class Footprint<T> {
     for (const { step, edges, nodes } of this.pending) {
       for (const e of edges) {
         for (const p of e.before) if (this.free(p.key, p.kind === "block")) this.take(step, p);
-        if (e.label !== null && this.free(labelKey(e.label), false)) {
-          this.spent.add(labelKey(e.label));
+        if (e.label !== null && this.free(blockKey(e.label), false)) {
+          this.spent.add(blockKey(e.label));
           step.consumedBlocks.push(e.label);
         }
         for (const p of e.after) if (this.free(p.key, p.kind === "block")) this.take(step, p);
       }
       for (const n of nodes) {
-        if (!n.own || this.spent.has(labelKey(n.own.id)) || (graph.nodes.get(n.id) === n && busy(n))) continue;
-        this.spent.add(labelKey(n.own.id));
+        if (!n.own || this.spent.has(blockKey(n.own.id)) || (graph.nodes.get(n.id) === n && busy(n))) continue;
+        this.spent.add(blockKey(n.own.id));
         step.consumedBlocks.push(n.own.id);
       }
     }
