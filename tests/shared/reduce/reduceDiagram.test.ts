@@ -51,7 +51,7 @@ describe("the spindle speed loop example", () => {
   test("the trace is the textbook one: series c·p, then the feedback loop through h", () => {
     expect(result.steps.map((s) => s.rule)).toEqual(["series", "feedback"]);
     expect(result.steps[0].consumedBlocks).toEqual(["c", "p"]);
-    expect(result.steps[1].consumedBlocks).toEqual(["eq1", "h"]);
+    expect(result.steps[1].consumedBlocks).toEqual(["eq1", "h", "e"]); // the loop's summing junction too
     expect(sameValue(exact(result.steps[0].expr, ["K", "tau"]), exact("K*(s+2)/s/(tau*s^2+s)", ["K", "tau"]))).toBe(true);
     expect(traceViolations(spindle as never, result.steps)).toEqual([]);
     expect(result.warnings).toEqual([]);
