@@ -46,8 +46,9 @@ function apply(doc: Json, m: Mutation): Json {
     if (Array.isArray(parent)) parent.splice(Number(key), 1);
     else delete parent[key];
   } else if (m.op === "duplicate" && Array.isArray(parent)) parent.push(structuredClone(parent[Number(key)]));
-  else if (m.op === "hostile") parent[key] = HOSTILE_VALUES[m.pick % HOSTILE_VALUES.length];
-  else parent[key] = m.value;
+  // Copies, so that no edit reaches a value another case shares.
+  else if (m.op === "hostile") parent[key] = structuredClone(HOSTILE_VALUES[m.pick % HOSTILE_VALUES.length]);
+  else parent[key] = structuredClone(m.value);
   return doc;
 }
 

@@ -31,9 +31,9 @@ export function runCase<T>(target: FuzzTarget<T>, input: T): CaseOutcome {
   return { ms: performance.now() - started, failure };
 }
 
-/** The input as one short line. */
+/** The input as one short line (control characters escaped). */
 export const truncated = (text: string, max = 160): string => {
-  const line = JSON.stringify(text).slice(1, -1);
+  const line = text.replace(/[\u0000-\u001f]/g, (c) => JSON.stringify(c).slice(1, -1));
   return line.length > max ? `${line.slice(0, max)}… (${text.length} chars)` : line;
 };
 

@@ -11,7 +11,7 @@ export const FUZZ_TARGETS: { target: FuzzTarget<never>; quick: number; long: num
   { target: validatorTarget as FuzzTarget<never>, quick: 1200, long: 25_000 },
   { target: uploadTarget as FuzzTarget<never>, quick: 600, long: 12_000 },
   { target: argvTarget as FuzzTarget<never>, quick: 1000, long: 20_000 },
-  { target: pipelineTarget as FuzzTarget<never>, quick: 250, long: 4_000 },
+  { target: pipelineTarget as FuzzTarget<never>, quick: 600, long: 10_000 },
 ];
 
 /** The seed of both runs: a failure found once is found again. */
