@@ -1,7 +1,7 @@
 import type { ExprNode } from "@shared/expr/ast";
 import { BLOCK_KINDS, hasExpression } from "@shared/diagram/blockKinds";
 import { exprDegreeBound } from "@shared/expr/degree";
-import { decimalToRational, MAX_DECIMAL_EXPONENT } from "@shared/expr/decimal";
+import { inDecimalRange, MAX_DECIMAL_EXPONENT } from "@shared/expr/decimal";
 import { parseExpression } from "@shared/expr/parse";
 import type { Problem } from "@shared/diagram/problems";
 import { LIMITS, type DiagramDocument } from "@shared/diagram/schema";
@@ -45,9 +45,6 @@ export function expressionProblems(doc: DiagramDocument): { problems: Problem[];
   return { problems, expressions };
 }
 
-/** Whether a finite number's decimal exponent is within the exact-number range (what block expressions may write). */
-const exactRepresentable = (x: number): boolean => decimalToRational(String(Math.abs(x))) !== undefined;
-
 /**
  * Checks of parameter specs: a value, min or max beyond the exact-number range is an error (the analysis takes
  * values exactly, as expressions take numbers); a range that excludes the value is a warning.
@@ -58,7 +55,7 @@ export function parameterProblems(doc: DiagramDocument): Problem[] {
   for (const [name, spec] of Object.entries(doc.parameters ?? {})) {
     const { value, min, max } = typeof spec === "number" ? { value: spec, min: undefined, max: undefined } : spec;
     const field = `parameters.${name}`;
-    const outOfRange = Object.entries({ value, min, max }).find(([, x]) => x !== undefined && !exactRepresentable(x));
+    const outOfRange = Object.entries({ value, min, max }).find(([, x]) => x !== undefined && !inDecimalRange(x));
     if (outOfRange) {
       const message = `Parameter ${name} has ${outOfRange[0]} ${outOfRange[1]}, beyond the exact-number range (powers of ten up to ±${MAX_DECIMAL_EXPONENT}); use 0 or a value within it`;
       problems.push({ severity: "error", code: "parameter-number-range", message, field });
