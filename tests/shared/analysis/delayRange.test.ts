@@ -20,4 +20,12 @@ describe("dead times outside the analysable range", () => {
     const out = analyzeDocument(delayedLoop("1", T, "1/(s + 1)"));
     expect(out.ok && out.result.dcGain).toBeCloseTo(0.5, 12);
   });
+
+  // Found by the fuzzer: T = Kp with Kp = 0 read the empty numerator (TypeError). From memory: e^(−s·0) = 1, so the
+  // unity loop around 2/(s + 1) has DC gain 2/(1 + 2) = 2/3.
+  it("a dead time that is 0 at the values is analysed as none", () => {
+    const out = analyzeDocument(delayedLoop("2", "Kp", "1/(s + 1)", { Kp: 0 }));
+    expect(out.ok && out.result.dcGain).toBeCloseTo(2 / 3, 12);
+    expect(out.ok && out.analysis.deadTime?.delays[0].seconds).toBe(0);
+  });
 });
