@@ -6,6 +6,7 @@ import { polyParams } from "@shared/algebra/poly";
 import { ratDenominator } from "@shared/algebra/ratfn";
 import { analyzeAt, type Analysis } from "@shared/analysis/analyze";
 import type { AnalysisAnswer, AnalysisQuery, BreakWire, ParameterInfo, SweepData } from "@shared/analysis/answer";
+import { checkDelayRange } from "@shared/analysis/delayRange";
 import { AnalysisError } from "@shared/analysis/errors";
 import { prepareAnalysis, type Prepared, type PreparedAnalysis } from "@shared/analysis/prepare";
 import type { AnalysisResult } from "@shared/analysis/schema";
@@ -24,7 +25,12 @@ const CACHE_LIMIT = 64;
 
 /** A failed analysis as a Problem: a bad parameter value points at its row of the parameter table. */
 function problemOf(err: AnalysisError | AlgebraError): Problem {
-  const subject = err instanceof AnalysisError && err.code === "bad-value" && err.subject ? { field: `parameters.${err.subject}` } : {};
+  const subject =
+    err instanceof AnalysisError && err.subject && err.code === "bad-value"
+      ? { field: `parameters.${err.subject}` }
+      : err instanceof AnalysisError && err.subject && err.code === "delay-range"
+        ? { blockId: err.subject, field: "expr" }
+        : {};
   return { severity: "error", code: err.code, message: err.message, ...subject };
 }
 
@@ -94,6 +100,7 @@ export function createAnalyzer(): Analyzer {
     try {
       const parameters = parameterInfo(p);
       const at = { ...p.nominal, ...values };
+      if (p.delay) checkDelayRange(p.delay.delays, at);
       let analysis: Analysis;
       if (fresh) {
         // The first analysis of a preparation computes the symbolic Routh conditions; they depend on no value.

@@ -19,7 +19,9 @@ export interface DeadTimeReport {
 export function deadTimeAt(info: DelayInfo, values: Readonly<Record<string, number>>): { report: DeadTimeReport; note: string } {
   const delays = info.delays.map((d) => {
     const t = transferAt(d.T, values);
-    return { blocks: d.blocks, seconds: qToNumber(qDiv(t.num[0], t.den[0])), text: ratToTextAndLatex(d.T).text };
+    // T may vanish at the values (T = Kp with Kp = 0): its numerator is then the empty polynomial.
+    const seconds = t.num.length ? qToNumber(qDiv(t.num[0], t.den[0])) : 0;
+    return { blocks: d.blocks, seconds, text: ratToTextAndLatex(d.T).text };
   });
   const { latex } = ratToTextAndLatex(info.exactTransfer);
   const report = {

@@ -8,6 +8,7 @@ export type AnalysisErrorCode =
   | "unknown-break-wire" // --break names no wire
   | "unknown-parameter" // a sweep or stable-set parameter that does not occur
   | "bad-value" // a parameter value that is not a finite number
+  | "delay-range" // a dead time the numeric analysis cannot take (the subject is its block)
   | "delay-response"; // a transfer with dead times whose time response cannot be simulated (advanced, improper)
 
 export class AnalysisError extends Error {

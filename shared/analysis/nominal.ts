@@ -4,13 +4,20 @@ import { qFromString, q, qAdd, qMul, qDiv, qOne, qZero, type Q } from "@shared/a
 import type { RatFn } from "@shared/algebra/ratfn";
 import { S, type ZPoly } from "@shared/algebra/zpoly";
 import { polyAdd, polyConst, polyMul, polyParam, polyS, type Poly } from "@shared/algebra/poly";
+import { AlgebraError } from "@shared/algebra/errors";
 import { AnalysisError } from "@shared/analysis/errors";
+import { MAX_DECIMAL_EXPONENT } from "@shared/expr/decimal";
 import { upDeg, upDivMod, upFrom, upGcd, upLead, upScale, type UPoly } from "@shared/analysis/upoly";
 
 /** The exact rational a finite number's shortest decimal text denotes. Example: exactValue(0.1) is 1/10. */
 export function exactValue(x: number, name = "value"): Q {
   if (!Number.isFinite(x)) throw new AnalysisError("bad-value", `Parameter ${name} has no finite value (${x}).`, name);
-  return qFromString(String(x));
+  try {
+    return qFromString(String(x));
+  } catch (e) {
+    if (!(e instanceof AlgebraError)) throw e;
+    throw new AnalysisError("bad-value", `Parameter ${name} = ${x} is beyond the exact-number range (powers of ten up to ±${MAX_DECIMAL_EXPONENT}).`, name);
+  }
 }
 
 /** Exact values of a value table, keyed by parameter. Example: exactValues({ K: 0.5 }).get("K") is 1/2. */

@@ -1,6 +1,7 @@
 import type { ExprNode } from "@shared/expr/ast";
 import { BLOCK_KINDS, hasExpression } from "@shared/diagram/blockKinds";
 import { exprDegreeBound } from "@shared/expr/degree";
+import { inDecimalRange, MAX_DECIMAL_EXPONENT } from "@shared/expr/decimal";
 import { parseExpression } from "@shared/expr/parse";
 import type { Problem } from "@shared/diagram/problems";
 import { LIMITS, type DiagramDocument } from "@shared/diagram/schema";
@@ -44,14 +45,21 @@ export function expressionProblems(doc: DiagramDocument): { problems: Problem[];
   return { problems, expressions };
 }
 
-/** Range checks of parameter specs (warnings). Example: { value: 5, min: 0, max: 2 } → "parameter-out-of-range". */
+/**
+ * Checks of parameter specs: a value, min or max beyond the exact-number range is an error (the analysis takes
+ * values exactly, as expressions take numbers); a range that excludes the value is a warning.
+ * Example: { value: 5, min: 0, max: 2 } → "parameter-out-of-range"; 1e-320 → "parameter-number-range".
+ */
 export function parameterProblems(doc: DiagramDocument): Problem[] {
   const problems: Problem[] = [];
   for (const [name, spec] of Object.entries(doc.parameters ?? {})) {
-    if (typeof spec === "number") continue;
-    const { value, min, max } = spec;
+    const { value, min, max } = typeof spec === "number" ? { value: spec, min: undefined, max: undefined } : spec;
     const field = `parameters.${name}`;
-    if (min !== undefined && max !== undefined && min > max) {
+    const outOfRange = Object.entries({ value, min, max }).find(([, x]) => x !== undefined && !inDecimalRange(x));
+    if (outOfRange) {
+      const message = `Parameter ${name} has ${outOfRange[0]} ${outOfRange[1]}, beyond the exact-number range (powers of ten up to ±${MAX_DECIMAL_EXPONENT}); use 0 or a value within it`;
+      problems.push({ severity: "error", code: "parameter-number-range", message, field });
+    } else if (min !== undefined && max !== undefined && min > max) {
       const message = `Parameter ${name} has min ${min} above max ${max}; swap them`;
       problems.push({ severity: "warning", code: "parameter-min-above-max", message, field });
     } else if ((min !== undefined && value < min) || (max !== undefined && value > max)) {

@@ -39,3 +39,6 @@ export function decimalToRational(text: string): Rational | undefined {
   const scale = 10n ** BigInt(Math.abs(exponent));
   return exponent >= 0 ? rationalOf(digits * scale, 1n) : rationalOf(digits, scale);
 }
+
+/** Whether a finite number's shortest decimal text is within the exponent range. Example: inDecimalRange(1e-306) === false. */
+export const inDecimalRange = (x: number): boolean => Number.isFinite(x) && decimalToRational(String(Math.abs(x))) !== undefined;

@@ -1,5 +1,6 @@
 import { qDiv, qOne, qToNumber } from "@shared/algebra/rational";
 import { exactValue } from "@shared/analysis/nominal";
+import { inDecimalRange, MAX_DECIMAL_EXPONENT } from "@shared/expr/decimal";
 import { upDeg, upLead, upScale } from "@shared/analysis/upoly";
 import { bilinear } from "@shared/implement/bilinear";
 import { ImplementError, type Subject } from "@shared/implement/errors";
@@ -31,9 +32,13 @@ const monic = ({ numerator, denominator }: FloatTf): FloatTf => ({
   denominator: denominator.map((c) => c / denominator[0]),
 });
 
+/** The pre-warped bilinear constant ω/tan(ωTs/2). */
+const prewarpConstant = (w: number, ts: number): number => w / Math.tan((w * ts) / 2);
+
 /** Checks Ts, and for "prewarp" ω, throwing "bad-sample-time" / "bad-prewarp" with the allowed range. */
 export function checkSampling({ ts, method, prewarp }: DiscretiseOptions): void {
   if (!Number.isFinite(ts) || ts <= 0) throw new ImplementError("bad-sample-time", `The sample time must be a positive number of seconds, not ${ts}.`);
+  if (!inDecimalRange(ts)) throw new ImplementError("bad-sample-time", `The sample time ${ts} s is beyond the exact-number range (powers of ten up to ±${MAX_DECIMAL_EXPONENT}).`);
   if (method !== "prewarp") return;
   const nyquist = Math.PI / ts;
   if (prewarp === undefined || !Number.isFinite(prewarp) || prewarp <= 0 || prewarp >= nyquist) {
@@ -41,6 +46,10 @@ export function checkSampling({ ts, method, prewarp }: DiscretiseOptions): void 
       "bad-prewarp",
       `Pre-warping needs a frequency ω in rad/s with 0 < ω < π/Ts = ${Number(nyquist.toPrecision(6))} rad/s${prewarp === undefined ? "" : `, not ${prewarp}`}.`,
     );
+  }
+  // The substitution's constant ω/tan(ωTs/2) must be an exact number too; it overflows when ω·Ts underflows.
+  if (!inDecimalRange(prewarpConstant(prewarp, ts))) {
+    throw new ImplementError("bad-prewarp", `Pre-warping at ω = ${prewarp} rad/s with Ts = ${ts} s gives ω·Ts too small to compute with: choose a larger ω or Ts.`);
   }
 }
 
@@ -56,7 +65,7 @@ export function discretise(tf: ExactTf, opts: DiscretiseOptions, subject: Subjec
   if (!tf.num.length) return { numerator: [0], denominator: [1] };
   if (method === "tustin" || method === "prewarp") {
     const w = opts.prewarp ?? 0;
-    const c = method === "tustin" ? qDiv(exactValue(2), exactValue(ts, "Ts")) : exactValue(w / Math.tan((w * ts) / 2), "c");
+    const c = method === "tustin" ? qDiv(exactValue(2), exactValue(ts, "Ts")) : exactValue(prewarpConstant(w, ts), "c");
     const z = bilinear(tf, c);
     if (upDeg(z.den) < upDeg(z.num)) {
       throw new ImplementError("bad-sample-time", `A pole of ${subject.what} at s = ${qToNumber(c)} maps to z = ∞ under this substitution: choose another sample time.`, subject.id);

@@ -1,4 +1,4 @@
-// Entry point of the npm scripts start, test, dev and bench. Plain Node with built-in modules only, because it runs
+// Entry point of the npm scripts start, test, dev, bench and fuzz. Plain Node with built-in modules only, because it runs
 // before node_modules exist: it installs what is missing, brings up the private PostgreSQL cluster, then hands over
 // to the TypeScript code (compiled to JavaScript for `npm start`, through tsx for the others).
 import { spawn, spawnSync } from "node:child_process";
@@ -42,6 +42,11 @@ async function bench(only) {
   return r.status ?? 1;
 }
 
+/** The long fuzz run: in-process, so it needs the modules only (no database, no browser). */
+function fuzz(only) {
+  return spawnSync(bin("tsx"), ["tests/fuzz/runFuzz.ts", ...only], { cwd: ROOT, stdio: "inherit" }).status ?? 1;
+}
+
 async function test(started) {
   ensurePythonReferences();
   ensureChromium();
@@ -79,8 +84,9 @@ async function main() {
   ensureNodeModules();
   if (mode === "bench") process.exit(await bench(rest));
   if (mode === "test") process.exit(await test(started));
+  if (mode === "fuzz") process.exit(fuzz(rest));
   if (mode === "start" || mode === "dev") return serveApp(mode, started);
-  fail(`Unknown mode "${mode}". Use: start | test | dev | bench [name]`);
+  fail(`Unknown mode "${mode}". Use: start | test | dev | bench [name] | fuzz [name]`);
 }
 
 main().catch((e) => fail(e.stack ?? String(e)));

@@ -1,17 +1,16 @@
 import type { Problem } from "@shared/diagram/problems";
 import { analyzeDocument } from "@shared/analysis/analyzeDiagram";
-import { PADE_MAX, PADE_MIN } from "@shared/analysis/pade";
 import type { AnalysisResult } from "@shared/analysis/schema";
 import { counted, plural } from "@shared/text/words";
-import { parseReduceArgs } from "@server/tools/cli/args";
-import { CliExit, readJsonFile, runCommand, takeOption as cliTakeOption, usageError as cliUsageError } from "@server/tools/cli/command";
+import { ANALYZE_USAGE, parseAnalyzeArgs } from "@server/tools/cli/analyzeArgs";
+import { CliExit, readJsonFile, runCommand } from "@server/tools/cli/command";
 import { formatProblem } from "@server/tools/cli/report";
 
 /**
  * `analyze FILE.json [--json] [--input ID] [--output ID] [--break WIRE] [--pade N]` — public contract, called from teams' CI.
  * Exit 0 success, 1 bad file content, 2 bad command line (unknown --break too), 3 internal error; never a stack trace.
  */
-const USAGE = "usage: analyze FILE.json [--json] [--input ID] [--output ID] [--break WIRE] [--pade N]   (analyze --help for details)";
+const USAGE = ANALYZE_USAGE;
 
 const HELP = `analyze — stability, Routh array, step response, margins and steady state of a Loopwright diagram
 
@@ -44,17 +43,6 @@ Exit status:
   3  internal error (please report it with the diagram file)
 `;
 
-const usageError = (message: string) => cliUsageError("analyze", USAGE, message);
-const takeOption = (argv: readonly string[], name: string, hint: string) => cliTakeOption(argv, name, hint, usageError);
-
-/** `--pade N`: an integer from 1 to 10. */
-function padeOrderOf(text: string | undefined): number | undefined {
-  if (text === undefined) return undefined;
-  const n = Number(text);
-  if (!Number.isInteger(n) || n < PADE_MIN || n > PADE_MAX) throw usageError(`--pade must be an integer from ${PADE_MIN} to ${PADE_MAX}, not "${text}"`);
-  return n;
-}
-
 const USAGE_CODES = new Set(["unknown-pair-id", "unknown-break-wire"]);
 const fmt = (x: number | null) => (x === null ? "none" : String(Number(x.toPrecision(6))));
 
@@ -81,15 +69,11 @@ function report(r: AnalysisResult, title: string | undefined): string {
 }
 
 function run(argv: readonly string[]): string {
-  const brk = takeOption(argv, "break", "a wire id or index, e.g. --break w6");
-  const pade = takeOption(brk.rest, "pade", `an order from ${PADE_MIN} to ${PADE_MAX}, e.g. --pade 5`);
-  const padeOrder = padeOrderOf(pade.value);
-  const parsed = parseReduceArgs(pade.rest);
-  if (parsed.kind === "help") return HELP;
-  if (parsed.kind === "usage-error") throw usageError(parsed.message);
-  const { file, json, input, output } = parsed.args;
+  const parsed = parseAnalyzeArgs(argv);
+  if (parsed === "help") return HELP;
+  const { file, json, input, output, padeOrder } = parsed;
   const raw = readJsonFile("analyze", USAGE, file);
-  const out = analyzeDocument(raw, { input, output, break: brk.value, padeOrder });
+  const out = analyzeDocument(raw, { input, output, break: parsed.break, padeOrder });
   if (!out.ok) {
     const usage = out.problems.filter((p: Problem) => USAGE_CODES.has(p.code));
     if (usage.length) throw new CliExit(2, [...usage.map((p) => `analyze: ${p.message}`), USAGE]);
