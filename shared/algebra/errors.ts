@@ -7,7 +7,9 @@ export type AlgebraErrorCode =
   | "degree-limit" // a result would have degree > 1000 in s (or in a parameter)
   | "missing-parameter" // numeric evaluation without a value for a parameter
   | "not-univariate" // a one-parameter routine got s or several parameters
-  | "bad-number"; // a numeric literal that is not a finite decimal or p/q
+  | "bad-number" // a numeric literal that is not a finite decimal or p/q
+  | "too-complex" // the reduction's time limit passed inside the arithmetic (see timeGuard.ts)
+  | "gcd-time-limit"; // a gcd in several variables ran past the gcd fallback's own time budget
 
 export class AlgebraError extends Error {
   readonly code: AlgebraErrorCode;

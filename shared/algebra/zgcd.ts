@@ -1,9 +1,11 @@
 // Own exact gcd on BigInt: nerdamer/mathjs are too slow and not exact enough for the reduction hot path.
+import { AlgebraError } from "@shared/algebra/errors";
 import { heuristicGcd } from "@shared/algebra/heugcd";
 import { bigGcd } from "@shared/algebra/rational";
 import { bigMod, evalModP, gcdModP, invMod, modPrime, mulMod, type ModPoly } from "@shared/algebra/modp";
+import { checkClock, limitText, withDeadline } from "@shared/algebra/timeGuard";
 import {
-  allInt, zContentInt, zDivExact, zEquals, zLeadNum, zMake, zMul, zNormSign, zPow, zQuo, zSub, varOuter,
+  allInt, S, zContentInt, zDivExact, zEquals, zLeadNum, zMake, zMul, zNormSign, zPow, zQuo, zSub, zVars, varOuter,
   type ZPoly, type ZRec,
 } from "@shared/algebra/zpoly";
 
@@ -71,7 +73,48 @@ function gcdPrimitive(a: ZRec, b: ZRec, known: number): ZPoly {
   if (bound === 0) return 1n;
   if (bound === deg(b) && zDivExact(a, b) !== null) return b;
   if (allInt(a.c) && allInt(b.c)) return modularGcd(a.v, a.c, b.c);
-  return heuristicGcd(a, b, zGcd) ?? subresultantGcd(a, b);
+  return multivariateGcd(a, b);
+}
+
+/** The multivariate gcd fallback's own time budget, in ms (a reduction may give another: withGcdTimeLimit). */
+export const GCD_TIME_LIMIT_MS = 5_000;
+let gcdLimitMs = GCD_TIME_LIMIT_MS;
+let inFallback = false;
+
+/** Runs `work` with another time budget for each multivariate gcd. Example: withGcdTimeLimit(100, () => zGcd(a, b)). */
+export function withGcdTimeLimit<T>(ms: number, work: () => T): T {
+  const outer = gcdLimitMs;
+  gcdLimitMs = ms;
+  try {
+    return work();
+  } finally {
+    gcdLimitMs = outer;
+  }
+}
+
+/**
+ * Heuristic gcd, then the subresultant PRS, under a time budget of their own (the recursion through images shares
+ * the outermost one): their cost grows steeply with degrees and parameters, so one gcd could otherwise hang a
+ * reduction between two of its steps.
+ */
+function multivariateGcd(a: ZRec, b: ZRec): ZPoly {
+  const run = () => heuristicGcd(a, b, zGcd) ?? subresultantGcd(a, b);
+  if (inFallback) return run();
+  inFallback = true;
+  try {
+    return withDeadline(gcdLimitMs, () => gcdOverBudget(a, b), run);
+  } finally {
+    inFallback = false;
+  }
+}
+
+function gcdOverBudget(a: ZRec, b: ZRec): AlgebraError {
+  const names = [...zVars(b, zVars(a))].filter((v) => v !== S).sort();
+  return new AlgebraError(
+    "gcd-time-limit",
+    `Cancelling the common factors of two polynomials in ${names.join(", ")} took longer than the gcd time budget of ` +
+      `${limitText(gcdLimitMs)}. Simplify the expressions (lower powers, fewer symbolic parameters) or give parameters numeric values.`,
+  );
 }
 
 let seed = 0x2545f491;
@@ -113,6 +156,7 @@ function modularGcd(v: string, A: readonly bigint[], B: readonly bigint[]): ZPol
   let acc: bigint[] = [];
   let modulus = 1n;
   for (let i = 0; ; i++) {
+    checkClock();
     const p = modPrime(i);
     const P = BigInt(p);
     if (lcA % P === 0n || lcB % P === 0n) continue;
@@ -153,6 +197,7 @@ function prem(A: readonly ZPoly[], B: readonly ZPoly[]): ZPoly[] {
   let R = A.slice();
   let e = A.length - B.length + 1;
   while (R.length - 1 >= db) {
+    checkClock();
     const dr = R.length - 1;
     const lr = R[dr];
     const k = dr - db;
@@ -177,6 +222,7 @@ function subresultantGcd(a: ZRec, b: ZRec): ZPoly {
   let g: ZPoly = 1n;
   let h: ZPoly = 1n;
   for (;;) {
+    checkClock();
     const delta = A.length - B.length;
     const R = prem(A, B);
     if (R.length === 0) break;

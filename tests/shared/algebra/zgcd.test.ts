@@ -4,8 +4,10 @@ import { heuristicGcd } from "@shared/algebra/heugcd";
 import { gcdModP, modPrime, remModP } from "@shared/algebra/modp";
 import { polyIsZero, polyMul } from "@shared/algebra/poly";
 import { ratFromExpr, ratNumerator } from "@shared/algebra/ratfn";
-import { zContent, zGcd } from "@shared/algebra/zgcd";
-import { zDivExact, zQuo, type ZPoly, type ZRec } from "@shared/algebra/zpoly";
+import { withGcdTimeLimit, zContent, zGcd } from "@shared/algebra/zgcd";
+import { AlgebraError } from "@shared/algebra/errors";
+import { zDivExact, zEquals, zQuo, type ZPoly, type ZRec } from "@shared/algebra/zpoly";
+import { parseExpression } from "@shared/expr/parse";
 import { polyExpr } from "./support";
 
 const zOf = (e: Parameters<typeof ratFromExpr>[0]) => ratNumerator(ratFromExpr(e)).z;
@@ -39,5 +41,30 @@ describe("gcd building blocks", () => {
       { numRuns: 200 },
     );
     expect(found).toBeGreaterThan(150);
+  });
+});
+
+function parseExprTree(text: string) {
+  const r = parseExpression(text, { allowS: true, parameters: ["K", "a", "b", "c"] });
+  if (!r.ok) throw new Error(r.message);
+  return r.ast;
+}
+
+describe("the multivariate gcd's own time budget", () => {
+  it("a gcd whose fallback runs past its budget is an AlgebraError naming the budget, not a hang (common practice: bounded work)", () => {
+    const common = "(s + K + a + b + c + 1)^6";
+    const x = zOf(parseExprTree(`(K*s + a + 2*b + 3)^6*${common}`));
+    const y = zOf(parseExprTree(`(c*s + K + 3*a + 5)^6*${common}`));
+    let caught: unknown;
+    try {
+      withGcdTimeLimit(20, () => zGcd(x, y));
+    } catch (e) {
+      caught = e;
+    }
+    expect(caught).toBeInstanceOf(AlgebraError);
+    expect((caught as AlgebraError).code).toBe("gcd-time-limit");
+    expect((caught as AlgebraError).message).toContain("gcd time budget of 0.02 s");
+    // Under the default budget the same gcd finishes: the planted common factor, exactly.
+    expect(zEquals(zGcd(x, y), zOf(parseExprTree(common)))).toBe(true);
   });
 });

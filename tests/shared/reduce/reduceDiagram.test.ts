@@ -233,6 +233,33 @@ describe("refusals", () => {
     expect(out.ok).toBe(false);
     if (!out.ok) expect(out.problems.map((p) => p.code)).toEqual(["too-complex"]);
   });
+
+  // A loop around one expression whose expansion alone runs for minutes: the clock is watched inside the arithmetic.
+  const heavyLoop = (expr: string) =>
+    diagram(
+      [["r", "input"], ["e", "sum", ["+", "-"]], ["g", "transfer", expr], ["y", "output"]],
+      ["r>e:0", "e>g", "g>y", "g>e:1"],
+      { K: 1, a: 2, b: 3, c: 4 },
+    );
+
+  test("an expansion past the time limit (s + K + a + b + c)^50 ends with a problem naming the block and the limit", () => {
+    const out = reduceDocument(heavyLoop("(K + a + b + c + s)^50"), { limits: { timeLimitMs: 300 } });
+    expect(out.ok).toBe(false);
+    if (out.ok) return;
+    expect(out.problems.map((p) => [p.code, p.blockId])).toEqual([["too-complex", "g"]]);
+    expect(out.problems[0].message).toContain("time limit of 0.3 s");
+  });
+
+  test("a gcd in four parameters past its own budget ends with a problem naming the block, the budget and the parameters", () => {
+    const common = "(s + K + a + b + c + 1)^10";
+    const expr = `((K*s + a + 2*b + 3)^10*${common})/((c*s + K + 3*a + 5)^10*${common})`;
+    const out = reduceDocument(heavyLoop(expr), { limits: { gcdTimeLimitMs: 50 } });
+    expect(out.ok).toBe(false);
+    if (out.ok) return;
+    expect(out.problems.map((p) => [p.code, p.blockId])).toEqual([["gcd-time-limit", "g"]]);
+    expect(out.problems[0].message).toContain("gcd time budget of 0.05 s");
+    expect(out.problems[0].message).toContain("K, a, b, c");
+  });
 });
 
 describe("generated ladders and nested-loop chains", () => {
