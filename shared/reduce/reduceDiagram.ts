@@ -27,6 +27,8 @@ export interface ReduceOptions {
   output?: string;
   /** Work limits (defaults: 2,000,000 new edges, 30 s in all, 5 s for each gcd in several variables). */
   limits?: Partial<Limits>;
+  /** false: no steps are recorded (steps: []), for callers that need only the values. */
+  trace?: boolean;
 }
 
 /** One (input, output) pair's closed-loop transfer, exact. */
@@ -145,7 +147,7 @@ function reduceChecked(
   const budget = createBudget(opts.limits);
   let reduced: ReturnType<typeof reducePairs<RatFn>>;
   try {
-    reduced = reducePairs(graph, ratField, pairs, budget, { determinant: true, weigh: weighRat });
+    reduced = reducePairs(graph, ratField, pairs, budget, { determinant: true, weigh: weighRat, trace: opts.trace });
   } catch (err) {
     // A singular loop on a pair's paths: name it through the loop-by-loop check.
     const named = err instanceof SingularLoopError ? checkLoops(graph, gains, undefined, budget).problems : [];
