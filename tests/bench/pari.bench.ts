@@ -49,24 +49,26 @@ const caseName = (c: Case) => `${c.family}:${c.blocks}${c.symbolic ? ":sym" : ""
 const docOf = (c: Case) => benchDiagram(c.family, c.blocks, { symbolic: c.symbolic });
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 
-const WARM_ROUNDS = 5;
-const collectGarbage = (globalThis as { gc?: () => void }).gc ?? (() => {});
+/** Warm-up and measuring spans: small diagrams need many runs before the JIT has optimised the hot paths. */
+const WARM_MS = 1_000;
+const MEASURE_MS = 500;
 
 /**
- * Best time of each variant over rounds that take them in turn, after rounds that warm up the JIT (not counted). The
- * best, not the median: other work on a shared machine only ever adds time.
+ * Best time of each variant over runs of its own (at least `runs`, and for MEASURE_MS), after rounds that take every
+ * variant in turn for WARM_MS to warm up the JIT (not counted). The best, not the median: other work on a shared
+ * machine only ever adds time.
  */
-function timeInTurn(runs: number, variants: (() => void)[]): number[] {
-  const times = variants.map((): number[] => []);
-  for (let round = 0; round < WARM_ROUNDS + runs; round++) {
-    variants.forEach((work, i) => {
-      collectGarbage(); // each run starts on a clean heap, not paying for the garbage of the one before
+function timeEach(runs: number, variants: (() => void)[]): number[] {
+  for (const warmStart = performance.now(); performance.now() - warmStart < WARM_MS; ) for (const work of variants) work();
+  return variants.map((work) => {
+    let best = Infinity;
+    for (let i = 0, start = performance.now(); i < runs || performance.now() - start < MEASURE_MS; i++) {
       const t0 = performance.now();
       work();
-      if (round >= WARM_ROUNDS) times[i].push(performance.now() - t0);
-    });
-  }
-  return times.map((xs) => Math.min(...xs));
+      best = Math.min(best, performance.now() - t0);
+    }
+    return best;
+  });
 }
 
 /** Child-process side: time our three variants of one case and report them as JSON on stdout. */
@@ -78,8 +80,8 @@ function measureCase(name: string): void {
     process.stdout.write(JSON.stringify({ error: printed.problems.map((p) => p.code).join(", ") }));
     return;
   }
-  const runs = Number(blocks) >= 500 ? 5 : 11;
-  const [exactMs, tracedMs, printedMs] = timeInTurn(runs, [
+  const runs = 5;
+  const [exactMs, tracedMs, printedMs] = timeEach(runs, [
     () => reduceDocumentExact(doc, { trace: false }),
     () => reduceDocumentExact(doc),
     () => reduceDocument(doc),
@@ -98,7 +100,7 @@ function measureCase(name: string): void {
 
 function runOurs(c: Case): Promise<OursFigures | string> {
   return new Promise((resolve) => {
-    const child = spawn(process.execPath, ["--expose-gc", ...process.execArgv, SELF, "--case", caseName(c)], { stdio: ["ignore", "pipe", "pipe"] });
+    const child = spawn(process.execPath, [...process.execArgv, SELF, "--case", caseName(c)], { stdio: ["ignore", "pipe", "pipe"] });
     let out = "";
     let err = "";
     const timer = setTimeout(() => child.kill("SIGKILL"), LIMIT_MS);
