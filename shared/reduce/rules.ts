@@ -30,7 +30,7 @@ const ANONYMOUS = "~";
 
 function link<T>(ctx: RuleContext<T>, from: string, to: string, draft: Draft<T>): void {
   spend(ctx.budget, 1);
-  ctx.graph.addEdge({ from, to, ...draft });
+  ctx.graph.addEdge({ from, to, gain: draft.gain, label: draft.label, sign: draft.sign, blocks: draft.blocks, wires: draft.wires });
 }
 
 /** Records the step (when tracing) and returns the new equivalent block's draft. */
