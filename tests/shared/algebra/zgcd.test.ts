@@ -1,7 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { heuristicGcd } from "@shared/algebra/heugcd";
-import { gcdModP, modPrime, remModP } from "@shared/algebra/modp";
+import { bigMod, gcdModP, modPrime, mulMod, remModP } from "@shared/algebra/modp";
 import { polyIsZero, polyMul } from "@shared/algebra/poly";
 import { ratFromExpr, ratNumerator } from "@shared/algebra/ratfn";
 import { withGcdTimeLimit, zContent, zGcd } from "@shared/algebra/zgcd";
@@ -21,6 +21,23 @@ describe("gcd building blocks", () => {
     expect(gcdModP([1, 1], [2, 1], p)).toEqual([1]);
     expect(modPrime(0)).toBe(67108859);
     expect(modPrime(1) < modPrime(0)).toBe(true);
+  });
+
+  it("residue products and reductions agree with exact BigInt arithmetic, up to the largest prime (fast-check)", () => {
+    const p = modPrime(0);
+    fc.assert(
+      fc.property(fc.integer({ min: 0, max: p - 1 }), fc.integer({ min: 0, max: p - 1 }), (a, b) => {
+        expect(mulMod(a, b, p)).toBe(Number((BigInt(a) * BigInt(b)) % BigInt(p)));
+      }),
+      { numRuns: 2000 },
+    );
+    expect(mulMod(p - 1, p - 1, p)).toBe(1);
+    fc.assert(
+      fc.property(fc.bigInt({ min: -(1n << 70n), max: 1n << 70n }), (x) => {
+        expect(bigMod(x, p)).toBe(Number(((x % BigInt(p)) + BigInt(p)) % BigInt(p)));
+      }),
+      { numRuns: 2000 },
+    );
   });
 
   it("the heuristic gcd recovers planted factors with parameters on its own, without the fallback (fast-check)", () => {
