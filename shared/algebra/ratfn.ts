@@ -7,7 +7,7 @@ import { polyToLatex, polyToText, polyToTextAndLatex } from "@shared/algebra/pol
 import { q, qDiv, qEquals, qInv, qIsOne, qMul, qOne, qPow, qZero, type Q } from "@shared/algebra/rational";
 import { zGcd, zUnitContent } from "@shared/algebra/zgcd";
 import {
-  S, zAdd, zDeg, zEquals, zLeadNum, zMul, zPow, zQuo, zScale, zVarPoly, zVars, type ZPoly,
+  S, zAdd, zDeg, zEquals, zLeadNum, zMul, zOnlyS, zPow, zQuo, zScale, zVarPoly, zVars, type ZPoly,
 } from "@shared/algebra/zpoly";
 import type { ExprNode } from "@shared/expr/ast";
 
@@ -112,6 +112,8 @@ export function ratPow(a: RatFn, e: number): RatFn {
 }
 
 export const ratIsZero = (a: RatFn): boolean => a.k.n === 0n;
+/** True when no parameter occurs. Example: ratOnlyS(1/(s + 1)) === true, ratOnlyS(K/s) === false. */
+export const ratOnlyS = (a: RatFn): boolean => zOnlyS(a.n) && zOnlyS(a.d);
 export const ratIsOne = (a: RatFn): boolean => qIsOne(a.k) && a.n === 1n && a.d === 1n;
 /** Exact equality of values (the representation is canonical). Example: ratEquals(ratAdd(x, x), ratMul(2, x)). */
 export const ratEquals = (a: RatFn, b: RatFn): boolean => qEquals(a.k, b.k) && zEquals(a.n, b.n) && zEquals(a.d, b.d);

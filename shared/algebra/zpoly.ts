@@ -254,6 +254,9 @@ export function zDerivS(a: ZPoly): ZPoly {
   return zMake(S, c.slice(1).map((x, i) => zScale(x, BigInt(i + 1))));
 }
 
+/** True when no variable but s occurs (no parameter). Example: zOnlyS(2*s + 1) === true, zOnlyS(K*s) === false. */
+export const zOnlyS = (a: ZPoly): boolean => typeof a === "bigint" || (a.v === S && allInt(a.c));
+
 /** Names of the variables that occur. Example: zVars(K*s) is {"s", "K"}. */
 export function zVars(a: ZPoly, into: Set<string> = new Set()): Set<string> {
   if (typeof a !== "bigint") {
