@@ -258,7 +258,8 @@ describe("refusals", () => {
     if (out.ok) return;
     expect(out.problems.map((p) => [p.code, p.blockId])).toEqual([["gcd-time-limit", "g"]]);
     expect(out.problems[0].message).toContain("gcd time budget of 0.05 s");
-    expect(out.problems[0].message).toContain("K, a, b, c");
+    // Which gcd runs out (the whole one, or one of its contents) depends on the machine: it names its parameters.
+    expect(out.problems[0].message).toMatch(/polynomials in [Kabc](, [Kabc])* took longer/);
   });
 });
 
