@@ -4,9 +4,9 @@ import { heuristicGcd } from "@shared/algebra/heugcd";
 import { bigMod, gcdModP, modPrime, mulMod, remModP } from "@shared/algebra/modp";
 import { polyIsZero, polyMul } from "@shared/algebra/poly";
 import { ratFromExpr, ratNumerator } from "@shared/algebra/ratfn";
-import { withGcdTimeLimit, zContent, zGcd } from "@shared/algebra/zgcd";
+import { withGcdTimeLimit, zContent, zGcd, zGcdSplit } from "@shared/algebra/zgcd";
 import { AlgebraError } from "@shared/algebra/errors";
-import { zDivExact, zEquals, zQuo, type ZPoly, type ZRec } from "@shared/algebra/zpoly";
+import { zDivExact, zEquals, zMul, zQuo, type ZPoly, type ZRec } from "@shared/algebra/zpoly";
 import { parseExpression } from "@shared/expr/parse";
 import { polyExpr } from "./support";
 
@@ -66,6 +66,26 @@ function parseExprTree(text: string) {
   if (!r.ok) throw new Error(r.message);
   return r.ast;
 }
+
+describe("gcd with cofactors", () => {
+  it("zGcdSplit gives zGcd and exact cofactors: a = g·ca, b = g·cb, on planted common factors (fast-check; common practice)", () => {
+    for (const symbolic of [false, true]) {
+      fc.assert(
+        fc.property(polyExpr(symbolic), polyExpr(symbolic), polyExpr(symbolic, 2), (a, b, c) => {
+          const [x, y] = [a, b].map((e) => zMul(zOf(e), zOf(c)));
+          fc.pre(x !== 0n && y !== 0n);
+          for (const [u, v] of [[x, y], [primitive(x), primitive(y)], [y, x]]) {
+            const { g, ca, cb } = zGcdSplit(u, v);
+            expect(zEquals(g, zGcd(u, v))).toBe(true);
+            expect(zEquals(zMul(g, ca), u)).toBe(true);
+            expect(zEquals(zMul(g, cb), v)).toBe(true);
+          }
+        }),
+        { numRuns: 150 },
+      );
+    }
+  });
+});
 
 describe("the multivariate gcd's own time budget", () => {
   it("a gcd whose fallback runs past its budget is an AlgebraError naming the budget, not a hang (common practice: bounded work)", () => {
