@@ -1,6 +1,7 @@
 // Own exact rational functions on BigInt: nerdamer/mathjs are too slow and not exact enough for the reduction hot path.
 import { AlgebraError, DEGREE_LIMIT } from "@shared/algebra/errors";
 import type { Field } from "@shared/algebra/field";
+import { checkPowerSize, checkProductSize } from "@shared/algebra/sizeLimits";
 import { zSplitFactors } from "@shared/algebra/factor";
 import { polyFromZ, polyMonic, polyZero, type Poly } from "@shared/algebra/poly";
 import { polyToLatex, polyToText, polyToTextAndLatex } from "@shared/algebra/polytext";
@@ -130,7 +131,8 @@ export const ratField: Field<RatFn> = {
 
 /**
  * Exact value of a checked expression tree. Throws AlgebraError "division-by-zero" when a divisor is identically
- * zero and "degree-limit" when a power is too high. Example: ratFromExpr(tree of "1/(0.5*s + 1)") is 2/(s + 2).
+ * zero, "degree-limit" when a power is too high and "size-limit" when a product or power would grow past the
+ * limits of sizeLimits.ts. Example: ratFromExpr(tree of "1/(0.5*s + 1)") is 2/(s + 2).
  */
 export function ratFromExpr(ast: ExprNode): RatFn {
   switch (ast.kind) {
@@ -143,19 +145,27 @@ export function ratFromExpr(ast: ExprNode): RatFn {
       return ratAdd(ratFromExpr(ast.left), ratFromExpr(ast.right));
     case "sub":
       return ratSub(ratFromExpr(ast.left), ratFromExpr(ast.right));
-    case "mul":
-      return ratMul(ratFromExpr(ast.left), ratFromExpr(ast.right));
+    case "mul": {
+      const [a, b] = [ratFromExpr(ast.left), ratFromExpr(ast.right)];
+      checkProductSize(a, b);
+      return ratMul(a, b);
+    }
     case "div": {
       const divisor = ratFromExpr(ast.right);
       if (ratIsZero(divisor)) {
         throw new AlgebraError("division-by-zero", "Division by zero: a divisor in the expression is identically 0.");
       }
-      return ratDiv(ratFromExpr(ast.left), divisor);
+      const dividend = ratFromExpr(ast.left);
+      checkProductSize(dividend, ratInv(divisor));
+      return ratDiv(dividend, divisor);
     }
     case "neg":
       return ratNeg(ratFromExpr(ast.arg));
-    case "pow":
-      return ratPow(ratFromExpr(ast.base), ast.exp);
+    case "pow": {
+      const base = ratFromExpr(ast.base);
+      checkPowerSize(base, ast.exp);
+      return ratPow(base, ast.exp);
+    }
   }
 }
 

@@ -120,11 +120,30 @@ export function qToString(a: Q): string {
 
 const bitLength = (x: bigint): number => (x < 0n ? -x : x).toString(2).length;
 
+/** The exact rational value of a finite double (its binary mantissa times a power of 2). Example: qFromDouble(0.75) is 3/4. */
+export function qFromDouble(x: number): Q {
+  if (!Number.isFinite(x)) throw new RangeError(`qFromDouble of ${x}`);
+  if (x === 0) return { n: 0n, d: 1n };
+  const view = new DataView(new ArrayBuffer(8));
+  view.setFloat64(0, x);
+  const hi = view.getUint32(0);
+  const biased = (hi >>> 20) & 0x7ff;
+  const mantissa = (BigInt(hi & 0xfffff) << 32n) | BigInt(view.getUint32(4));
+  const m = biased === 0 ? mantissa : mantissa | (1n << 52n); // subnormals have no hidden bit
+  const e = (biased === 0 ? 1 : biased) - 1075;
+  const signed = x < 0 ? -m : m;
+  return e >= 0 ? q(signed << BigInt(e)) : q(signed, 1n << BigInt(-e));
+}
+
 /** Nearest double (huge num/den are scaled first so the ratio stays finite). Example: qToNumber(q(1,4)) === 0.25. */
 export function qToNumber(a: Q): number {
   const n = Number(a.n);
   const d = Number(a.d);
   if (Number.isFinite(n) && Number.isFinite(d)) return n / d;
-  const shift = BigInt(Math.max(bitLength(a.n), bitLength(a.d)) - 1000);
-  return Number(a.n >> shift) / Number(a.d >> shift);
+  // Each part cut to its top 64 bits on its own, so a ratio far from 1 keeps its digits; the scale 2^e is applied
+  // in two halves, so neither factor overflows or underflows before the product does.
+  const sn = Math.max(0, bitLength(a.n) - 64);
+  const sd = Math.max(0, bitLength(a.d) - 64);
+  const e = sn - sd;
+  return (Number(a.n >> BigInt(sn)) / Number(a.d >> BigInt(sd))) * 2 ** Math.trunc(e / 2) * 2 ** (e - Math.trunc(e / 2));
 }

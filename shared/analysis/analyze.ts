@@ -6,6 +6,7 @@ import { ratDenominator, ratNumerator, ratReduceTracked } from "@shared/algebra/
 import { qDiv, qOne, qToNumber, qToString, qZero } from "@shared/algebra/rational";
 import { deadTimeAt, type DeadTimeReport } from "@shared/analysis/deadTime";
 import { analyzeDelayedLoop, delayedBandwidth, delayedBode } from "@shared/analysis/delayedLoop";
+import { delayedResponses, type DelayedResponses } from "@shared/analysis/delayedResponse";
 import { exactFactors } from "@shared/analysis/factors";
 import { bode, frequencyRange, type BodeData } from "@shared/analysis/frequency";
 import { analyzeLoop, fractionText, zpkOf, type LoopAnalysis } from "@shared/analysis/loopAnalysis";
@@ -19,7 +20,7 @@ import { rootCounts, stabilityOf, type Stability } from "@shared/analysis/stabil
 import { stableSet, type StableSet } from "@shared/analysis/stableSet";
 import { inputRole } from "@shared/analysis/inputRole";
 import { steadyState, type SteadyState } from "@shared/analysis/steadyState";
-import { horizon, stepMetrics, type StepMetrics } from "@shared/analysis/stepMetrics";
+import { horizon, negligibleFrom, PLOT_SAMPLES, stepMetrics, type StepMetrics } from "@shared/analysis/stepMetrics";
 import { timeResponse, type TimeResponse } from "@shared/analysis/timeResponse";
 import { upDeg, upFromPoly, upText, upToPoly, type UPoly } from "@shared/analysis/upoly";
 
@@ -44,6 +45,8 @@ export interface Analysis {
   input: string;
   /** Dead times and the Padé order the figures rest on; null without dead times. */
   deadTime: DeadTimeReport | null;
+  /** Step and ramp responses with the dead times kept exactly (simulated); null without dead times in T. */
+  delayedResponses: DelayedResponses | null;
   output: string;
   values: Record<string, number>;
   transfer: { numerator: string; denominator: string; latex: string };
@@ -110,6 +113,16 @@ export function analyzeAt(p: PreparedAnalysis, opts: AnalyzeOptions = {}): Analy
   const loopNumeric = p.loop && loop ? transferAt(p.loop.L, values) : null;
   const denSym = ratDenominator(p.transfer);
   const symbolic = polyParams(denSym);
+  const horizonT = plotHorizon(responses.step, stability, poles, dc?.value ?? 0, notes);
+  const delayed = delays && p.delay
+    ? delayedResponses(p.delay.exactTransfer, values, delays, horizonT, {
+        stable: stability.verdict === "stable" && (!loop || loop.nyquist.verdict === "stable"),
+        finalValue: dc?.value ?? null,
+        band: opts.settlingBand ?? 0.02,
+      })
+    : null;
+  if (typeof delayed === "string") notes.push(delayed);
+  if (typeof delayed !== "string" && delayed) notes.push(...delayed.notes);
   const wantSets = opts.stableSets ?? true;
   return {
     input: p.input,
@@ -129,11 +142,12 @@ export function analyzeAt(p: PreparedAnalysis, opts: AnalyzeOptions = {}): Analy
     conditions: wantSets && symbolic.length >= 2 && upDeg(den) <= CONDITIONS_DEGREE ? conditionsOf(routhArray(denSym)) : null,
     responses,
     step,
-    plotHorizon: plotHorizon(responses.step, stability, poles, dc?.value ?? 0),
+    plotHorizon: horizonT,
     ...closedLoopFrequency(p, values, delays, num, den),
     loop,
     steadyState: steadyState(num, den, stability.verdict, loopNumeric, inputRole(p.doc, p.input)),
     deadTime: deadTime?.report ?? null,
+    delayedResponses: typeof delayed === "string" ? null : delayed,
     notes: [...notes, ...(loop?.notes ?? [])],
   };
 }
@@ -180,16 +194,42 @@ function metricsOrWhy(num: UPoly, den: UPoly, st: Stability, t0: number | null, 
     notes.push(why);
     return { ...empty, finalValue: st.verdict === "stable" ? t0 : null };
   }
-  const m = stepMetrics(r, t0 as number, band);
+  const m = stepMetrics(r, t0 as number, band, notes);
   if (m.peakTime === null) notes.push("No overshoot: the response never exceeds its final value, so there is no peak time.");
   return m;
 }
 
-/** How far in t the responses are plotted: until they settle (or ten time constants when unstable), to a round end. */
-function plotHorizon(r: TimeResponse, st: Stability, poles: RootInfo[], t0: number): number {
-  if (st.verdict === "stable") return roundAxisEnd(horizon(r, 1e-3 * Math.max(Math.abs(t0), 1e-12)) || 1);
-  const scale = Math.max(...poles.map((x) => Math.hypot(x.re, x.im)).filter((x) => x > 0), 1e-3);
-  return roundAxisEnd(10 / scale);
+/** Samples per period a plot needs to draw an oscillation: 400 samples hold 20 periods. */
+const SAMPLES_PER_PERIOD = 20;
+
+/**
+ * How far in t the responses are plotted: until they settle (or ten time constants when unstable), to a round end;
+ * never more periods of the fastest oscillation than the plot's samples can draw (a note says so).
+ */
+function plotHorizon(r: TimeResponse, st: Stability, poles: RootInfo[], t0: number, notes: string[]): number {
+  // Settled to 1e-3 of the response's own size (its final value, else its largest term), whatever its units.
+  const size = Math.abs(t0) || Math.max(0, ...r.terms.map((x) => Math.abs(x.coefficient)));
+  let end: number;
+  if (st.verdict === "stable") {
+    end = (size > 0 && horizon(r, 1e-3 * size)) || 1;
+  } else {
+    end = 10 / Math.max(...poles.map((x) => Math.hypot(x.re, x.im)).filter((x) => x > 0), 1e-3);
+  }
+  // An oscillation still visible after 20 of its periods cannot be drawn with the plot's samples: the plot stops there.
+  const periodsShown = PLOT_SAMPLES / SAMPLES_PER_PERIOD;
+  const aliased = r.terms.filter((x) => {
+    if (x.frequency === 0 || x.coefficient === 0) return false;
+    const shown = (periodsShown * 2 * Math.PI) / x.frequency;
+    const visibleUntil = x.decay > 0 ? negligibleFrom(x, 1e-3 * size) : Infinity;
+    return visibleUntil > shown && end > shown;
+  });
+  if (aliased.length) {
+    const omega = Math.max(...aliased.map((x) => x.frequency));
+    const periods = (end * omega) / (2 * Math.PI);
+    end = (periodsShown * 2 * Math.PI) / omega;
+    notes.push(`The plots show the first ${periodsShown} periods of the oscillation at ω = ${omega.toPrecision(4)} rad/s (${PLOT_SAMPLES} samples cannot draw more); the response goes on for about ${Math.round(periods)} periods.`);
+  }
+  return roundAxisEnd(end);
 }
 
 function conditionsOf(r: RouthArray): string[] {

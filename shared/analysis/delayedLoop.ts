@@ -138,6 +138,9 @@ function delayedNyquist(F: (s: Complex) => Complex, num: ReturnType<typeof trans
   const delta = 1e-3 * Math.min(1, ...gaps);
   // Enough pieces that no single one spans a whole turn of e^(−jωT).
   const N = clockwiseEncirclements(F, axis, R, delta, Math.min(20000, 64 + Math.ceil((8 * R * tMax) / Math.PI)));
+  if (N === null) {
+    return { encirclements: null, openLoopRhpPoles: P, closedLoopRhpPoles: null, verdict: "marginal", reason: "The Nyquist curve of the delayed loop could not be followed (its phase is lost to rounding near a pole on the axis): the criterion cannot be applied." };
+  }
   const Z = N + P;
   const circles = N === 0 ? "does not encircle −1" : `encircles −1 ${counted(Math.abs(N), "time")} ${N < 0 ? "counter-clockwise" : "clockwise"}`;
   const reason = `${counted(P, "open-loop pole")} in the right half-plane (P = ${P}); the exact L with e^(−sT) ${circles} (N = ${N}); Z = N + P = ${counted(Z, "closed-loop pole")} in the right half-plane.`;

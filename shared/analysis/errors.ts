@@ -7,7 +7,8 @@ export type AnalysisErrorCode =
   | "singular-at-values" // the transfer's denominator vanishes identically at the chosen parameter values
   | "unknown-break-wire" // --break names no wire
   | "unknown-parameter" // a sweep or stable-set parameter that does not occur
-  | "bad-value"; // a parameter value that is not a finite number
+  | "bad-value" // a parameter value that is not a finite number
+  | "delay-response"; // a transfer with dead times whose time response cannot be simulated (advanced, improper)
 
 export class AnalysisError extends Error {
   readonly code: AnalysisErrorCode;

@@ -6,7 +6,7 @@ import { outgoingWires, blocksById, reachable } from "@shared/diagram/graph";
 import type { Problem } from "@shared/diagram/problems";
 import { wireLabel, type DiagramDocument, type Wire } from "@shared/diagram/schema";
 import { createBudget } from "@shared/reduce/budget";
-import { SignalFlowGraph } from "@shared/reduce/graph";
+import { SignalFlowGraph, wirePart } from "@shared/reduce/graph";
 import { weighRat } from "@shared/reduce/ratView";
 import { reducePairs } from "@shared/reduce/reduce";
 import { reductionProblem, type ExactReduction } from "@shared/reduce/reduceDiagram";
@@ -83,10 +83,11 @@ export function cutGraph(graph: SignalFlowGraph<RatFn>, bp: BreakPoint): { graph
   cut.addNode(output, last + 2, null);
   for (const e of graph.edges()) {
     const { seq: _seq, ...draft } = e;
-    if (!e.wires.includes(label)) cut.addEdge(draft);
-    else cut.addEdge({ ...draft, from: input, wires: [`${input}-wire`] });
+    // An edge of the untouched graph is one wire, its first part.
+    if (e.before[0]?.id !== label) cut.addEdge(draft);
+    else cut.addEdge({ ...draft, from: input, before: [wirePart(`${input}-wire`)] });
   }
-  cut.addEdge({ from: bp.wire.from, to: output, gain: ratField.one, label: null, sign: 1, blocks: [], wires: [`${output}-wire`] });
+  cut.addEdge({ from: bp.wire.from, to: output, gain: ratField.one, label: null, sign: 1, before: [wirePart(`${output}-wire`)], after: [] });
   cut.touched.clear();
   return { graph: cut, input, output };
 }

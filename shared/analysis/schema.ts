@@ -104,6 +104,17 @@ export const analysisResultSchema = z.object({
       padeOrder: z.number().int().min(1).max(10).describe("Order of the Padé approximant of each e^(-sT) behind poles, Routh array, time responses and margins."),
       delays: z.array(z.object({ blocks: z.array(z.string()), seconds: z.number(), text: z.string() })),
       exactTransfer: z.object({ numerator: z.string(), denominator: z.string(), latex: z.string() }).describe("The pair's transfer with exp(-T*s) kept."),
+      exactStep: z
+        .object({
+          method: z.literal("simulation"),
+          stepSize: z.number().describe("Fixed step of the simulation, seconds."),
+          riseTime: maybe,
+          peakTime: maybe,
+          overshootPercent: maybe,
+          settlingTime: maybe,
+        })
+        .nullable()
+        .describe("Step metrics with every dead time kept exactly, from a simulation of the delay differential equation; null when the pair's transfer has no dead time or cannot be simulated (see notes)."),
     })
     .nullable()
     .describe("Dead-time blocks of the diagram; null when it has none."),

@@ -1,6 +1,6 @@
 // Numbers of a closed-form response as they are printed: exact a + b·√r, or a float to 12 significant digits.
-import { q, qAdd, qIsZero, qMul, qNeg, qSub, qToNumber, qToString, type Q } from "@shared/algebra/rational";
-import { sqrtRational, surdLatex, surdText } from "@shared/analysis/surd";
+import { q, qAdd, qIsZero, qMul, qNeg, qSub, qToString, type Q } from "@shared/algebra/rational";
+import { sqrtRational, surdLatex, surdText, surdToNumber } from "@shared/analysis/surd";
 import { upDeg, type UPoly } from "@shared/analysis/upoly";
 
 /** a + b·√rad (rad a square-free integer ≥ 1; b = 0 for a rational), or a float. */
@@ -11,7 +11,7 @@ export const shownQ = (a: Q): Shown => ({ a, b: q(0), rad: 1n });
 
 /** Value as a double. Example: shownValue({ a: 0, b: 1/2, rad: 3 }) ≈ 0.866. */
 export const shownValue = (x: Shown): number =>
-  typeof x === "number" ? x : qToNumber(x.a) + qToNumber(x.b) * Math.sqrt(Number(x.rad));
+  typeof x === "number" ? x : surdToNumber(x.a, x.b, x.rad);
 
 /** Negation. Example: shownNeg(shownQ(q(1))) prints "-1". */
 export const shownNeg = (x: Shown): Shown => (typeof x === "number" ? -x : { a: qNeg(x.a), b: qNeg(x.b), rad: x.rad });

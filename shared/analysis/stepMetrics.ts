@@ -41,7 +41,7 @@ const size = (x: TimeResponse["terms"][number], t: number): number => Math.abs(x
  * The time from which a decaying term's size stays below tol for good: past its peak (t + 1 = k/σ) the size only
  * falls, so one bisection replaces a test at every grid point. −Infinity when it never reaches tol.
  */
-function negligibleFrom(x: TimeResponse["terms"][number], tol: number): number {
+export function negligibleFrom(x: TimeResponse["terms"][number], tol: number): number {
   const peak = Math.max(0, x.power / x.decay - 1);
   if (size(x, peak) < tol) return -Infinity;
   let [a, b] = [peak, peak + 1 / x.decay];
@@ -54,8 +54,17 @@ function negligibleFrom(x: TimeResponse["terms"][number], tol: number): number {
   return b;
 }
 
-/** Grid from 0 to tEnd whose step follows the fastest term still alive (1/20 of its time scale). */
-function grid(r: TimeResponse, tEnd: number, scale: number): number[] {
+/** Most points a metrics grid may have: a lightly damped or widely spread response would otherwise need billions. */
+export const MAX_GRID = 100_000;
+
+/** The fastest rate (|σ + jω|) of the terms, which sets the grid step. */
+const fastestRate = (r: TimeResponse): number => Math.max(0, ...r.terms.map((x) => Math.hypot(x.decay, x.frequency)));
+
+/**
+ * Grid from 0 towards tEnd whose step follows the fastest term still alive (1/20 of its time scale), at most
+ * MAX_GRID points: `complete` says whether it reached tEnd.
+ */
+function grid(r: TimeResponse, tEnd: number, scale: number): { ts: number[]; complete: boolean } {
   const ts = [0];
   const maxStep = tEnd / 400;
   const tol = 1e-12 * scale;
@@ -66,7 +75,7 @@ function grid(r: TimeResponse, tEnd: number, scale: number): number[] {
     until: x.decay > 0 ? negligibleFrom(x, tol) : Infinity,
     x,
   }));
-  while (ts[ts.length - 1] < tEnd) {
+  while (ts[ts.length - 1] < tEnd && ts.length < MAX_GRID) {
     const t = ts[ts.length - 1];
     let rate = 0;
     for (const d of terms) {
@@ -75,7 +84,7 @@ function grid(r: TimeResponse, tEnd: number, scale: number): number[] {
     }
     ts.push(Math.min(tEnd, t + Math.min(maxStep, rate > 0 ? 1 / (20 * rate) : maxStep)));
   }
-  return ts;
+  return { ts, complete: ts[ts.length - 1] >= tEnd };
 }
 
 /** Root of f in [a, b] where f(a), f(b) differ in sign (bisection to full double precision). */
@@ -94,13 +103,15 @@ function bisect(f: (t: number) => number, a: number, b: number): number {
 /**
  * Rise time (10–90 %), peak time, percent overshoot, settling time (last exit from the ±band) and final
  * value of a step response whose final value is finalValue ≠ 0 (metrics on y/finalValue). Call only for
- * stable systems. Example: for 1/(s^2 + s + 1) the overshoot is 16.30 % (= 100·exp(−ζπ/√(1−ζ²)), ζ = 1/2).
+ * stable systems. When the response needs more than MAX_GRID points (time scales decades apart, a lightly damped
+ * mode), the early metrics come from the first MAX_GRID points, the settling time from the envelope, and `notes`
+ * says what could not be resolved. Example: for 1/(s^2 + s + 1) the overshoot is 16.30 % (= 100·exp(−ζπ/√(1−ζ²)), ζ = 1/2).
  */
-export function stepMetrics(r: TimeResponse, finalValue: number, band = 0.02): StepMetrics {
+export function stepMetrics(r: TimeResponse, finalValue: number, band = 0.02, notes: string[] = []): StepMetrics {
   const g = (t: number) => responseAt(r, t) / finalValue;
   const scale = Math.abs(finalValue);
   const tEnd = horizon(r, 1e-6 * scale);
-  const ts = grid(r, tEnd, scale);
+  const { ts, complete } = grid(r, tEnd, scale);
   const ys = ts.map(g);
   const firstReach = (level: number): number | null => {
     if (ys[0] >= level) return 0;
@@ -109,6 +120,8 @@ export function stepMetrics(r: TimeResponse, finalValue: number, band = 0.02): S
   };
   const t10 = firstReach(0.1);
   const t90 = firstReach(0.9);
+  const seen = ts[ts.length - 1];
+  if (!complete && (t10 === null || t90 === null)) notes.push(`The rise time is not resolved: the response does not reach 90 % of its final value within the first ${MAX_GRID} grid points (t ≤ ${seen.toPrecision(3)} s).`);
   let iMax = 0;
   for (let i = 1; i < ys.length; i++) if (ys[i] > ys[iMax]) iMax = i;
   let peakTime: number | null = null;
@@ -119,10 +132,15 @@ export function stepMetrics(r: TimeResponse, finalValue: number, band = 0.02): S
     peakTime = slope(a) > 0 && slope(b) < 0 ? bisect(slope, a, b) : ts[iMax];
     overshoot = 100 * (Math.max(g(peakTime), ys[iMax]) - 1);
   }
+  if (!complete && 1 + envelope(r, seen) / scale > ys[iMax]) notes.push(`The peak is the largest value within t ≤ ${seen.toPrecision(3)} s; a later one cannot be ruled out on a grid of ${MAX_GRID} points.`);
   const outside = (t: number) => Math.abs(g(t) - 1) - band;
-  let last = ys.length - 1;
-  while (last >= 0 && Math.abs(ys[last] - 1) <= band) last--;
-  const settlingTime = last < 0 ? 0 : last === ts.length - 1 ? tEnd : bisect(outside, ts[last], ts[last + 1]);
+  // The last exit among the grid's samples: 0 when always inside, null when still outside at the grid's end.
+  const onGrid = (): number | null => {
+    let last = ys.length - 1;
+    while (last >= 0 && Math.abs(ys[last] - 1) <= band) last--;
+    return last < 0 ? 0 : last === ts.length - 1 ? null : bisect(outside, ts[last], ts[last + 1]);
+  };
+  const settlingTime = complete ? (onGrid() ?? tEnd) : settlingFromEnvelope(r, outside, band * scale, seen, onGrid, notes);
   return {
     riseTime: t10 !== null && t90 !== null ? t90 - t10 : null,
     peakTime,
@@ -133,8 +151,46 @@ export function stepMetrics(r: TimeResponse, finalValue: number, band = 0.02): S
   };
 }
 
+/**
+ * The last exit from the band of a response too long for one grid: past tS, where the envelope (a bound on
+ * |y − y∞|) falls below the band for good, the response stays inside; the last exit is found by stepping back
+ * from tS at the fastest term's pace (and looking at each peak between samples), at most MAX_GRID steps. Null
+ * (with a note) when it lies further back.
+ */
+function settlingFromEnvelope(r: TimeResponse, outside: (t: number) => number, width: number, from: number, onGrid: () => number | null, notes: string[]): number | null {
+  let [a, b] = [from, from * 2];
+  while (envelope(r, b) >= width && b < Number.MAX_VALUE / 2) [a, b] = [b, b * 2];
+  for (let i = 0; i < 200 && b - a > 1e-15 * b; i++) {
+    const m = (a + b) / 2;
+    if (envelope(r, m) >= width) a = m;
+    else b = m;
+  }
+  const tS = b;
+  const step = 1 / (20 * fastestRate(r));
+  if (tS - step === tS) {
+    notes.push(`The settling time is the envelope's bound: the fastest oscillation's period is below the resolution of a double at t = ${tS.toPrecision(3)} s.`);
+    return tS;
+  }
+  // Stepping back, a peak of y between two samples inside the band still counts: its top is found on the slope.
+  const slope = (t: number) => responseSlopeAt(r, t);
+  for (let k = 0; k < MAX_GRID; k++) {
+    const [t0, t1] = [tS - (k + 1) * step, tS - k * step];
+    if (t1 <= from) return onGrid() ?? from; // back inside the first grid: its samples hold the last exit
+    if (outside(t1) > 0) return bisect(outside, t1, Math.min(tS, t1 + step));
+    if (slope(t0) > 0 !== slope(t1) > 0) {
+      const top = bisect(slope, t0, t1);
+      if (outside(top) > 0) return bisect(outside, top, t1);
+    }
+  }
+  notes.push(`The settling time is not resolved: the response is inside the band from ${(tS - MAX_GRID * step).toPrecision(3)} s to ${tS.toPrecision(3)} s, and its last exit lies earlier than a grid of ${MAX_GRID} points reaches.`);
+  return null;
+}
+
+/** Samples of a plotted response (and of its CSV). */
+export const PLOT_SAMPLES = 400;
+
 /** n + 1 evenly spaced samples [t, y(t)] on [0, tEnd] (y(0) as the limit t → 0+). Example: for plotting. */
-export function sampleResponse(r: TimeResponse, tEnd: number, n = 400): [number, number][] {
+export function sampleResponse(r: TimeResponse, tEnd: number, n = PLOT_SAMPLES): [number, number][] {
   return Array.from({ length: n + 1 }, (_, i) => {
     const t = (tEnd * i) / n;
     return [t, responseAt(r, t)];

@@ -69,8 +69,23 @@ export function analysisSummary(a: Analysis, warnings: Problem[]): AnalysisResul
     break: a.loop ? { wire: a.loop.breakPoint.label, index: a.loop.breakPoint.index, chosen: a.loop.breakPoint.chosen } : null,
     loopGain: a.loop ? { numerator: a.loop.L.numerator, denominator: a.loop.L.denominator } : null,
     responses: { step: response(a.responses.step), impulse: response(a.responses.impulse), ramp: response(a.responses.ramp) },
-    deadTime: a.deadTime,
+    deadTime: a.deadTime && { ...a.deadTime, exactStep: exactStep(a) },
     notes: a.notes,
     warnings,
+  };
+}
+
+/** The step metrics of the delayed loop with its dead times kept exactly (simulated), when there are any. */
+function exactStep(a: Analysis) {
+  const r = a.delayedResponses;
+  if (!r) return null;
+  const m = r.stepMetrics;
+  return {
+    method: r.method,
+    stepSize: r.stepSize,
+    riseTime: m?.riseTime ?? null,
+    peakTime: m?.peakTime ?? null,
+    overshootPercent: m?.overshootPercent ?? null,
+    settlingTime: m?.settlingTime ?? null,
   };
 }

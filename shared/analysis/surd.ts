@@ -2,7 +2,7 @@
 // responses stay exact for them (d < 0 gives the complex pairs).
 import type { Field } from "@shared/algebra/field";
 import {
-  q, qAdd, qDiv, qEquals, qIsZero, qMul, qNeg, qOne, qSub, qToNumber, qToString, qZero, type Q,
+  q, qAdd, qDiv, qEquals, qFromDouble, qIsZero, qMul, qNeg, qOne, qSub, qToNumber, qToString, qZero, type Q,
 } from "@shared/algebra/rational";
 
 /** a + b·√d in a field Q(√d) fixed by the surrounding code. Example: { a: 1/2, b: 1/2 } in Q(√−3). */
@@ -40,16 +40,42 @@ export function sqrtRational(r: Q): { coef: Q; rad: bigint } {
 /** Floor of the square root of a non-negative BigInt (Newton). Example: bigSqrt(17n) === 4n. */
 export function bigSqrt(n: bigint): bigint {
   if (n < 2n) return n;
-  let x = BigInt(Math.floor(Math.sqrt(Number(n))));
+  // Newton from above: 2^⌈bits/2⌉ ≥ √n, so the iterates fall monotonically to the floor (any size, no float).
+  let x = 1n << BigInt(Math.ceil(n.toString(2).length / 2));
   while (x * x > n) x = (x + n / x) / 2n;
   while ((x + 1n) * (x + 1n) <= n) x += 1n;
   return x;
 }
 
+const bits = (x: bigint): number => (x < 0n ? -x : x).toString(2).length;
+
+/** √x of a rational x ≥ 0 of any size as a double, from an integer square root of about 120 bits. Example: qSqrtToNumber(q(1, 4)) === 0.5. */
+export function qSqrtToNumber(x: Q): number {
+  if (x.n === 0n) return 0;
+  const k = Math.floor((120 - (bits(x.n) - bits(x.d))) / 2); // x·4^k has about 120 bits
+  const scaled = k >= 0 ? (x.n << BigInt(2 * k)) / x.d : x.n / (x.d << BigInt(-2 * k));
+  // 2^(−k) in two halves, so neither factor overflows or underflows before the product does.
+  const half = 2 ** (-k / 2);
+  return Number(bigSqrt(scaled)) * half * half;
+}
+
+/**
+ * a + b·√d as a double (d > 0), without the cancellation of adding two nearly opposite floats: then it is
+ * (a² − b²d)/(a − b·√d) with the numerator exact. Example: surdToNumber(q(1), q(-1, 2), 3n) ≈ 0.134 (1 − √3/2).
+ */
+export function surdToNumber(a: Q, b: Q, d: bigint): number {
+  if (qIsZero(b)) return qToNumber(a);
+  const b2d = qMul(qMul(b, b), q(d));
+  const bRoot = (b.n < 0n ? -1 : 1) * qSqrtToNumber(b2d);
+  const aValue = qToNumber(a);
+  if (qIsZero(a) || aValue > 0 === bRoot > 0) return aValue + bRoot;
+  // The quotient is taken exactly (the float denominator read back as a rational), so a tiny norm cannot underflow.
+  return qToNumber(qDiv(qSub(qMul(a, a), b2d), qFromDouble(aValue - bRoot)));
+}
+
 /** The field Q(√d) for a square-free integer d ≠ 1 (d = −1 gives the Gaussian rationals). Example: surdField(-3n). */
 export function surdField(d: bigint): NumberField<Surd> {
   const D = q(d);
-  const sqrtAbs = Math.sqrt(Math.abs(Number(d)));
   const make = (a: Q, b: Q): Surd => ({ a, b });
   return {
     zero: make(qZero, qZero),
@@ -67,8 +93,7 @@ export function surdField(d: bigint): NumberField<Surd> {
     },
     isZero: (x) => qIsZero(x.a) && qIsZero(x.b),
     isOne: (x) => qEquals(x.a, qOne) && qIsZero(x.b),
-    toComplex: (x) =>
-      d < 0n ? [qToNumber(x.a), qToNumber(x.b) * sqrtAbs] : [qToNumber(x.a) + qToNumber(x.b) * sqrtAbs, 0],
+    toComplex: (x) => (d < 0n ? [qToNumber(x.a), surdToNumber(qZero, x.b, -d)] : [surdToNumber(x.a, x.b, d), 0]),
   };
 }
 

@@ -2,10 +2,11 @@ import type { DiagramDocument, Block } from "@shared/diagram/schema";
 import { hasExpression } from "@shared/diagram/blockKinds";
 import type { CheckedResult } from "@shared/api/versions";
 import { delayLatex, expressionLatex } from "@shared/expr/exprLatex";
-import { boundsOf, captionBox, estimatedSize, fallbackPosition, inPoint, outPoint } from "@shared/geometry/blockBox";
+import { boundsOf, captionBox, estimatedSize, fallbackPosition, inPoint } from "@shared/geometry/blockBox";
 import { BLOCK_SHAPES } from "@shared/geometry/blockShape";
-import { indexBoxes, obstaclesFor } from "@shared/geometry/boxIndex";
-import { arrowHead, roundedPath, wireRoute, type Point } from "@shared/geometry/wireRoute";
+import { indexBoxes } from "@shared/geometry/boxIndex";
+import { routeOfWire } from "@shared/geometry/wirePath";
+import { arrowHead, roundedPath, type Point } from "@shared/geometry/wireRoute";
 import { counted } from "@shared/text/words";
 
 export interface Typeset { svg: string; width: number; height: number }
@@ -91,10 +92,7 @@ export function diagramSvg({ document: doc, result, meta, pins = [], typeset }: 
   const wires = doc.wires.flatMap((w, i) => {
     const s = placed.get(w.from), t = placed.get(w.to);
     if (!s || !t) return [];
-    const [sourceBox, targetBox] = [boxOfPlaced(s), boxOfPlaced(t)];
-    const entry = inPoint(t.block, targetBox, w.port);
-    const obstacles = obstaclesFor(index, w.from, w.to, sourceBox, targetBox);
-    const pts = wireRoute({ source: outPoint(sourceBox), target: entry.at, side: entry.side, sourceBox, targetBox, obstacles });
+    const pts = routeOfWire(w, t.block, boxOfPlaced(s), boxOfPlaced(t), index);
     const id = w.id ?? `wire-${i}`;
     return [{ id, pts, d: roundedPath(pts), head: arrowHead(pts) }];
   });

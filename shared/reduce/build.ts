@@ -1,10 +1,10 @@
 import type { Field } from "@shared/algebra/field";
 import { kindOf, type SignalRole } from "@shared/diagram/blockKinds";
 import { wireLabel, type DiagramDocument } from "@shared/diagram/schema";
-import { SignalFlowGraph } from "@shared/reduce/graph";
+import { SignalFlowGraph, wirePart } from "@shared/reduce/graph";
 
-/** Roles whose node the reducer consumes when it eliminates it (the others live on as edge labels or ends). */
-const OWN_NODE: Record<SignalRole, boolean> = { source: false, sink: false, sum: true, branch: true, scale: false, delay: false };
+/** Roles whose node is a junction block (true: it joins signals, false: it splits one); the others live on as edge labels or ends. */
+const JUNCTION: Record<SignalRole, boolean | null> = { source: null, sink: null, sum: true, branch: false, scale: null, delay: null };
 
 /**
  * The signal-flow graph of a validated document: one node per block (its output signal); each wire becomes an
@@ -20,13 +20,16 @@ export function buildSignalGraph<T>(
 ): SignalFlowGraph<T> {
   const graph = new SignalFlowGraph<T>();
   const blocks = new Map(doc.blocks.map((b) => [b.id, b]));
-  doc.blocks.forEach((b, i) => graph.addNode(b.id, i, OWN_NODE[kindOf(b).role] ? b.id : null));
+  doc.blocks.forEach((b, i) => {
+    const joins = JUNCTION[kindOf(b).role];
+    graph.addNode(b.id, i, joins === null ? null : { id: b.id, joins });
+  });
   doc.wires.forEach((w, i) => {
     const target = blocks.get(w.to);
     if (!target || !blocks.has(w.from)) return;
-    const wires = [wireLabel(w, i)];
+    const before = [wirePart(wireLabel(w, i))];
     const bare = (sign: 1 | -1) =>
-      graph.addEdge({ from: w.from, to: w.to, gain: sign > 0 ? field.one : field.neg(field.one), label: null, sign, blocks: [], wires });
+      graph.addEdge({ from: w.from, to: w.to, gain: sign > 0 ? field.one : field.neg(field.one), label: null, sign, before, after: [] });
     const role = kindOf(target).role;
     switch (role) {
       case "source":
@@ -35,7 +38,7 @@ export function buildSignalGraph<T>(
       case "delay": {
         const gain = gains.get(target.id);
         if (gain === undefined) throw new Error(`No gain given for block "${target.id}"`);
-        graph.addEdge({ from: w.from, to: w.to, gain, label: target.id, sign: 1, blocks: [], wires });
+        graph.addEdge({ from: w.from, to: w.to, gain, label: target.id, sign: 1, before, after: [] });
         return;
       }
       case "sum":

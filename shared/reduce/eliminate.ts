@@ -1,10 +1,12 @@
 import type { Field } from "@shared/algebra/field";
 import type { Budget } from "@shared/reduce/budget";
 import { solveDense } from "@shared/reduce/dense";
+import { Footprint } from "@shared/reduce/footprint";
 import type { SignalFlowGraph } from "@shared/reduce/graph";
 import { MinHeap } from "@shared/reduce/heap";
 import { comparePlans, planNode, type Plan } from "@shared/reduce/plan";
-import { applyPlan, solveTogether, type RuleContext } from "@shared/reduce/rules";
+import type { RuleContext } from "@shared/reduce/ruleEdits";
+import { applyPlan, solveTogether } from "@shared/reduce/rules";
 import type { StepLog } from "@shared/reduce/trace";
 
 type Entry = Plan & { id: string; order: number; size: number; stamp: number };
@@ -52,6 +54,7 @@ const context = <T>(
   graph,
   field,
   log,
+  footprint: log ? new Footprint(graph) : null,
   budget,
   terminals: new Set(terminals),
   blocked: { pivot: new Map(), pair: new Map() },
@@ -83,7 +86,7 @@ export function loopDeterminant<T>(graph: SignalFlowGraph<T>, field: Field<T>, b
 
 /**
  * Reduces a graph holding only the nodes on paths from `input` to `output` to one edge input → output,
- * recording every step in `log`. Returns the transfer, the label of the final edge (null for a bare
+ * recording every step in `log` with what it consumed (see Footprint). Returns the transfer, the label of the final edge (null for a bare
  * wire) and, with `determinant`, the pivots whose product is det(I − A) of the graph (multiplying
  * them out costs as much as the rules, so it is left to the caller). The graph is consumed. Throws
  * SingularLoopError when the remaining loops are singular (an algebraic loop).
@@ -102,6 +105,7 @@ export function reducePairGraph<T>(
   runRules(ctx, opts.weigh);
   if (graph.nodes.size > 2) solveTogether(ctx, input, output);
   const [edge] = graph.node(output).ins;
+  ctx.footprint?.finish(edge);
   const pivots = ctx.pivots;
   return edge ? { gain: edge.gain, final: edge.label, pivots } : { gain: field.zero, final: null, pivots };
 }

@@ -4,6 +4,23 @@
  * Edges are never mutated: a rule removes edges and adds new ones, so subgraphs can share them.
  * Example: r →(+1) e →(c) c →(p) p is the cascade "r into sum e, then c, then p".
  */
+/** A document wire or a folded junction (sum or pickoff block) that an edge passes through. Example: { kind: "wire", id: "w2", key: "w:w2" }. */
+export interface Part {
+  readonly kind: "wire" | "block";
+  readonly id: string;
+  /** kind and id in one string, for counting. */
+  readonly key: string;
+}
+
+export const wirePart = (id: string): Part => ({ kind: "wire", id, key: `w:${id}` });
+export const blockPart = (id: string): Part => ({ kind: "block", id, key: `b:${id}` });
+
+/** A sum or pickoff block, the node of its output signal; a sum's job is to join signals, a pickoff's to split one. */
+export interface Junction {
+  readonly id: string;
+  readonly joins: boolean;
+}
+
 export interface SfgEdge<T> {
   /** Creation order; the tie-breaker that keeps every run deterministic. */
   readonly seq: number;
@@ -14,17 +31,20 @@ export interface SfgEdge<T> {
   readonly label: string | null;
   /** gain = sign × (the label's own gain), so "−h" needs no new equivalent block. */
   readonly sign: 1 | -1;
-  /** Document blocks and wires merged into this edge, listed as consumed with it. */
-  readonly blocks: readonly string[];
-  readonly wires: readonly string[];
+  /**
+   * The wires and folded junctions the edge passes through, in signal order: from its start to its label and from
+   * its label to its end (a bare edge keeps them all in `before`). A step consumes those that end up inside it.
+   */
+  readonly before: readonly Part[];
+  readonly after: readonly Part[];
 }
 
 export interface SfgNode<T> {
   readonly id: string;
   /** Position in the document; orders ties between nodes. */
   readonly order: number;
-  /** Block consumed when the node is eliminated (sum and branch blocks; others live on as labels). */
-  readonly own: string | null;
+  /** The sum or pickoff block the node is (others live on as edge labels): consumed once it joins or splits nothing. */
+  readonly own: Junction | null;
   readonly ins: Set<SfgEdge<T>>;
   readonly outs: Set<SfgEdge<T>>;
   /** Edges from the node to itself. */
@@ -33,14 +53,14 @@ export interface SfgNode<T> {
 
 export type EdgeDraft<T> = Omit<SfgEdge<T>, "seq">;
 
-/** Mutable signal-flow graph. Example: g.addNode("e", 1, "e"); g.addEdge({ from: "r", to: "e", … }). */
+/** Mutable signal-flow graph. Example: g.addNode("e", 1, { id: "e", joins: true }); g.addEdge({ from: "r", to: "e", … }). */
 export class SignalFlowGraph<T> {
   readonly nodes = new Map<string, SfgNode<T>>();
   private nextSeq = 0;
   /** Nodes whose edges changed since the last drain (the reducer re-examines them). */
   readonly touched = new Set<string>();
 
-  addNode(id: string, order: number, own: string | null): SfgNode<T> {
+  addNode(id: string, order: number, own: Junction | null): SfgNode<T> {
     const node: SfgNode<T> = { id, order, own, ins: new Set(), outs: new Set(), loops: new Set() };
     this.nodes.set(id, node);
     return node;
@@ -53,8 +73,8 @@ export class SignalFlowGraph<T> {
   }
 
   addEdge(draft: EdgeDraft<T>): SfgEdge<T> {
-    const { from, to, gain, label, sign, blocks, wires } = draft; // written out: a spread is slow on this hot path
-    const edge: SfgEdge<T> = { seq: this.nextSeq++, from, to, gain, label, sign, blocks, wires };
+    const { from, to, gain, label, sign, before, after } = draft; // written out: a spread is slow on this hot path
+    const edge: SfgEdge<T> = { seq: this.nextSeq++, from, to, gain, label, sign, before, after };
     this.attach(edge);
     return edge;
   }

@@ -1,50 +1,15 @@
 import type { Field } from "@shared/algebra/field";
-import { spend, type Budget } from "@shared/reduce/budget";
 import { SingularLoopError, solveDense } from "@shared/reduce/dense";
-import type { SfgEdge, SfgNode, SignalFlowGraph } from "@shared/reduce/graph";
-import { feedbackPair, type Action, type Blocked } from "@shared/reduce/plan";
-import type { ReductionRule } from "@shared/reduce/result";
-import { edgeName, times, type StepLog } from "@shared/reduce/trace";
+import type { Part, SfgEdge, SfgNode } from "@shared/reduce/graph";
+import { feedbackPair, type Action } from "@shared/reduce/plan";
+import { folded, freed, head, link, produce, removeNode, tail, unlink, type Outside, type RuleContext } from "@shared/reduce/ruleEdits";
+import { edgeName, times } from "@shared/reduce/trace";
 
-/**
- * The reduction rules on the signal-flow graph. Each is an exact elimination: a node goes away (or a
- * loop is closed) and the transfer between the remaining nodes is unchanged. `pivots` collects the pivots
- * (return differences) when asked: their product is det(I − A) of the graph reduced.
- * Example: applyPlan(ctx, node, "series") turns a → n → b into one edge a → b with the product gain.
+/*
+ * The reduction rules on the signal-flow graph. Each is an exact elimination: a node goes away (or a loop is
+ * closed) and the transfer between the remaining nodes is unchanged; each says which of the edges' parts stay
+ * outside its equivalent block. Example: applyPlan(ctx, node, "series") turns a → n → b into one edge a → b.
  */
-export interface RuleContext<T> {
-  readonly graph: SignalFlowGraph<T>;
-  readonly field: Field<T>;
-  /** Null in determinant-only runs: no trace, equivalent blocks are not named. */
-  readonly log: StepLog<T> | null;
-  readonly budget: Budget;
-  readonly terminals: ReadonlySet<string>;
-  readonly blocked: Blocked;
-  /** Factors of det(I − A) collected so far, or null when the determinant is not wanted. */
-  readonly pivots: T[] | null;
-}
-
-type Draft<T> = Omit<SfgEdge<T>, "seq" | "from" | "to">;
-
-const ANONYMOUS = "~";
-
-function link<T>(ctx: RuleContext<T>, from: string, to: string, draft: Draft<T>): void {
-  spend(ctx.budget, 1);
-  ctx.graph.addEdge({ from, to, gain: draft.gain, label: draft.label, sign: draft.sign, blocks: draft.blocks, wires: draft.wires });
-}
-
-/** Records the step (when tracing) and returns the new equivalent block's draft. */
-function produce<T>(
-  ctx: RuleContext<T>,
-  rule: ReductionRule,
-  consumed: SfgEdge<T>[],
-  extra: (string | null)[],
-  gain: T,
-  describe: (eq: string) => string,
-): Draft<T> {
-  const label = ctx.log ? ctx.log.record(rule, consumed, extra, gain, describe) : ANONYMOUS;
-  return { gain, label, sign: 1, blocks: [], wires: [] };
-}
 
 const signed = <T>(field: Field<T>, sign: 1 | -1, gain: T): T => (sign > 0 ? gain : field.neg(gain));
 
@@ -69,10 +34,11 @@ function pivotOf<T>(ctx: RuleContext<T>, node: SfgNode<T>): { value: T; loop: Sf
 }
 
 function tidy<T>(ctx: RuleContext<T>, node: SfgNode<T>): void {
-  const { graph, field } = ctx;
+  const { field } = ctx;
   const ins = sorted(node.ins);
   const outs = sorted(node.outs);
-  graph.removeNode(node.id);
+  const own = folded(ctx, node);
+  removeNode(ctx, node);
   if (ins.length === 1 && outs.length === 1) {
     const [a, b] = [ins[0], outs[0]];
     const keep = a.label !== null ? a : b;
@@ -81,27 +47,30 @@ function tidy<T>(ctx: RuleContext<T>, node: SfgNode<T>): void {
       gain: signed(field, bare.sign, keep.gain),
       label: keep.label,
       sign: a.sign * b.sign > 0 ? 1 : -1,
-      blocks: [...a.blocks, ...b.blocks, ...(node.own ? [node.own] : [])],
-      wires: [...a.wires, ...b.wires],
+      ...(keep === a
+        ? { before: a.before, after: [...a.after, ...own, ...b.before, ...b.after] }
+        : { before: [...a.before, ...a.after, ...own, ...b.before], after: b.after }),
     });
     return;
   }
-  // A junction next to a bare wire: the edges on its other side slide across it unchanged; the first
-  // one carries the wire and the junction's block along.
+  // A junction next to a bare wire: the edges on its other side slide across it unchanged, each carrying the
+  // wire and the junction's block along (they share them until a step merges them).
   const upstream = ins.length === 1; // the wire feeds a pickoff point; otherwise it leaves a junction
   const wire = upstream ? ins[0] : outs[0];
-  (upstream ? outs : ins).forEach((e, k) => {
-    const carried = k === 0 ? { blocks: [...wire.blocks, ...(node.own ? [node.own] : [])], wires: wire.wires } : null;
-    const join = (mine: readonly string[], theirs: readonly string[] = []) =>
-      upstream ? [...theirs, ...mine] : [...mine, ...theirs];
+  const through = upstream ? [...wire.before, ...own] : [...own, ...wire.before];
+  for (const e of upstream ? outs : ins) {
+    const parts: Outside = upstream
+      ? { before: [...through, ...e.before], after: e.after }
+      : e.label === null
+        ? { before: [...e.before, ...through], after: [] }
+        : { before: e.before, after: [...e.after, ...through] };
     link(ctx, upstream ? wire.from : e.from, upstream ? e.to : wire.to, {
       gain: signed(field, wire.sign, e.gain),
       label: e.label,
       sign: e.sign * wire.sign > 0 ? 1 : -1,
-      blocks: join(e.blocks, carried?.blocks),
-      wires: join(e.wires, carried?.wires),
+      ...parts,
     });
-  });
+  }
 }
 
 function parallel<T>(ctx: RuleContext<T>, node: SfgNode<T>): void {
@@ -125,10 +94,21 @@ function parallel<T>(ctx: RuleContext<T>, node: SfgNode<T>): void {
   const gain = ctx.field.add(p.gain, q.gain);
   const [a, b] = [edgeName(p), edgeName(q)];
   const where = p.from === p.to ? `around ${p.from}` : `from ${p.from} to ${p.to}`;
-  const draft = produce(ctx, "parallel", [p, q], [], gain, (eq) => `Parallel: ${a} and ${b} ${where} combine into ${eq} = ${a} + ${b}.`);
-  ctx.graph.removeEdge(p);
-  ctx.graph.removeEdge(q);
+  // The two branches share the wires up to where they split and from where they join again.
+  const before = commonStart(head(p), head(q));
+  const after = commonStart([...tail(p)].reverse(), [...tail(q)].reverse()).reverse();
+  const ends = [...new Set([ctx.graph.node(p.from), ctx.graph.node(p.to)])];
+  const draft = produce(ctx, "parallel", [p, q], ends, gain, { before, after }, (eq) => `Parallel: ${a} and ${b} ${where} combine into ${eq} = ${a} + ${b}.`);
+  unlink(ctx, p);
+  unlink(ctx, q);
   link(ctx, p.from, p.to, draft);
+}
+
+/** The longest common beginning of two part lists. Example: [w0, p, w1] and [w0, p, w3] → [w0, p]. */
+function commonStart(a: readonly Part[], b: readonly Part[]): Part[] {
+  let n = 0;
+  while (n < a.length && n < b.length && a[n].key === b[n].key) n++;
+  return a.slice(0, n);
 }
 
 function series<T>(ctx: RuleContext<T>, node: SfgNode<T>): void {
@@ -136,8 +116,9 @@ function series<T>(ctx: RuleContext<T>, node: SfgNode<T>): void {
   const [b] = node.outs;
   const gain = ctx.field.mul(a.gain, b.gain);
   const [x, y] = [edgeName(a), edgeName(b)];
-  const draft = produce(ctx, "series", [a, b], [node.own], gain, (eq) => `Series: ${x} then ${y} become ${eq} = ${times(x, y)}.`);
-  ctx.graph.removeNode(node.id);
+  const outside = { before: a.before, after: b.after };
+  const draft = produce(ctx, "series", [a, b], [node], gain, outside, (eq) => `Series: ${x} then ${y} become ${eq} = ${times(x, y)}.`);
+  removeNode(ctx, node);
   link(ctx, a.from, b.to, draft);
 }
 
@@ -150,11 +131,16 @@ function feedbackSelf<T>(ctx: RuleContext<T>, node: SfgNode<T>): boolean {
   const gain = ctx.field.div(edge.gain, pivot.value);
   const [g, rd] = [edgeName(edge), returnDifference(null, loop)];
   const side = onInput ? `into ${node.id}` : `out of ${node.id}`;
-  const draft = produce(ctx, "feedback", [edge, loop], [], gain, (eq) =>
+  unlink(ctx, edge);
+  unlink(ctx, loop);
+  // The closed loop takes the node's junction when it is left with nothing to join or split, and the parts up to it.
+  const closes = freed(ctx, node, onInput ? { ins: 1, outs: 0 } : { ins: 0, outs: 1 });
+  const outside = onInput
+    ? { before: head(edge), after: closes || edge.label === null ? [] : edge.after }
+    : { before: closes && edge.label !== null ? [] : edge.before, after: edge.after };
+  const draft = produce(ctx, "feedback", [edge, loop], [node], gain, outside, (eq) =>
     `Feedback: the loop ${edgeName(loop)} around ${node.id} closes over ${g} (${side}): ${eq} = ${g}/(${rd}).`,
   );
-  ctx.graph.removeEdge(edge);
-  ctx.graph.removeEdge(loop);
   link(ctx, edge.from, edge.to, draft);
   ctx.pivots?.push(pivot.value);
   return true;
@@ -176,11 +162,17 @@ function feedbackOfPair<T>(ctx: RuleContext<T>, node: SfgNode<T>): boolean {
     back.label === null
       ? `with unity ${kind} feedback to ${forward.from}`
       : `with ${edgeName(back)} fed back to ${forward.from} (${kind} feedback)`;
-  const draft = produce(ctx, "feedback", [forward, back], [], gain, (eq) =>
+  const [sum, end] = [ctx.graph.node(forward.from), node];
+  unlink(ctx, forward);
+  unlink(ctx, back);
+  // The closed loop takes the summing junction (and a pickoff it leaves with one branch), with the parts next to them.
+  const outside = {
+    before: freed(ctx, sum, { ins: 0, outs: 1 }) ? [] : head(forward),
+    after: freed(ctx, end, { ins: 1, outs: 0 }) || forward.label === null ? [] : forward.after,
+  };
+  const draft = produce(ctx, "feedback", [forward, back], [sum, end], gain, outside, (eq) =>
     `Feedback: ${f} ${how} becomes ${eq} = ${f}/(${returnDifference(f, back)}).`,
   );
-  ctx.graph.removeEdge(forward);
-  ctx.graph.removeEdge(back);
   link(ctx, forward.from, forward.to, draft);
   if (inverse) ctx.pivots?.push(forward.gain, inverse);
   return true;
@@ -198,15 +190,14 @@ function move<T>(ctx: RuleContext<T>, node: SfgNode<T>, rule: "move-sum" | "move
   const copies = others.filter((e) => e !== heir);
   const ends = (e: SfgEdge<T>): [string, string] => (isSum ? [e.from, block.to] : [block.from, e.to]);
   const G = edgeName(block);
-  ctx.graph.removeNode(node.id);
+  removeNode(ctx, node);
   if (heir) {
     const [from, to] = ends(heir);
     link(ctx, from, to, {
       gain: signed(ctx.field, heir.sign, block.gain),
       label: block.label,
       sign: heir.sign * block.sign > 0 ? 1 : -1,
-      blocks: isSum ? [...heir.blocks, ...block.blocks] : [...block.blocks, ...heir.blocks],
-      wires: isSum ? [...heir.wires, ...block.wires] : [...block.wires, ...heir.wires],
+      ...(isSum ? { before: [...head(heir), ...block.before], after: block.after } : { before: block.before, after: [...block.after, ...tail(heir)] }),
     });
   }
   copies.forEach((e, k) => {
@@ -216,7 +207,8 @@ function move<T>(ctx: RuleContext<T>, node: SfgNode<T>, rule: "move-sum" | "move
     // A bare wire gets a copy of the block itself (with the wire's sign), not a product.
     const x = e.label === null ? `the wire ${isSum ? `from ${e.from}` : `to ${e.to}`}` : edgeName(e);
     const value = e.label === null ? times(e.sign < 0 ? "−" : "", G) : isSum ? times(x, G) : times(G, x);
-    const draft = produce(ctx, rule, consumed, last ? [node.own] : [], gain, (eq) =>
+    const outside = isSum ? { before: head(e), after: block.after } : { before: block.before, after: tail(e) };
+    const draft = produce(ctx, rule, consumed, last ? [node] : [], gain, outside, (eq) =>
       isSum
         ? `Move junction ${node.id} past ${G}: ${x} becomes ${eq} = ${value}.`
         : `Move pickoff point ${node.id} before ${G}: ${x} becomes ${eq} = ${value}.`,
@@ -235,8 +227,8 @@ function eliminate<T>(ctx: RuleContext<T>, node: SfgNode<T>): boolean {
   const outs = sorted(node.outs);
   const hasLoop = pivot.loop !== null;
   const scaled = ins.map((i) => (hasLoop ? field.div(i.gain, pivot.value) : i.gain));
-  const tail = hasLoop ? `/(${returnDifference(null, pivot.loop!)})` : "";
-  ctx.graph.removeNode(node.id);
+  const divided = hasLoop ? `/(${returnDifference(null, pivot.loop!)})` : "";
+  removeNode(ctx, node);
   ins.forEach((i, a) =>
     outs.forEach((o, b) => {
       const lastIn = b === outs.length - 1;
@@ -244,8 +236,9 @@ function eliminate<T>(ctx: RuleContext<T>, node: SfgNode<T>): boolean {
       const consumed = [...(lastIn ? [i] : []), ...(lastOut ? [o] : []), ...(lastIn && lastOut && pivot.loop ? [pivot.loop] : [])];
       const gain = field.mul(scaled[a], o.gain);
       const [x, y] = [edgeName(i), edgeName(o)];
-      const draft = produce(ctx, "eliminate-node", consumed, lastIn && lastOut ? [node.own] : [], gain, (eq) =>
-        `Eliminate ${node.id}: ${x} then ${y} become ${eq} = ${times(x, y)}${tail}.`,
+      const outside = { before: head(i), after: tail(o) };
+      const draft = produce(ctx, "eliminate-node", consumed, lastIn && lastOut ? [node] : [], gain, outside, (eq) =>
+        `Eliminate ${node.id}: ${x} then ${y} become ${eq} = ${times(x, y)}${divided}.`,
       );
       link(ctx, i.from, o.to, draft);
     }),
@@ -258,7 +251,7 @@ function eliminate<T>(ctx: RuleContext<T>, node: SfgNode<T>): boolean {
 function drop<T>(ctx: RuleContext<T>, node: SfgNode<T>): void {
   const loop = sorted(node.loops)[0];
   if (loop) ctx.pivots?.push(ctx.field.sub(ctx.field.one, loop.gain));
-  ctx.graph.removeNode(node.id);
+  removeNode(ctx, node);
 }
 
 /**
@@ -266,6 +259,12 @@ function drop<T>(ctx: RuleContext<T>, node: SfgNode<T>): void {
  * Example: applyPlan(ctx, n, "series").
  */
 export function applyPlan<T>(ctx: RuleContext<T>, node: SfgNode<T>, action: Action): boolean {
+  const applied = apply(ctx, node, action);
+  ctx.footprint?.settle(ctx.graph);
+  return applied;
+}
+
+function apply<T>(ctx: RuleContext<T>, node: SfgNode<T>, action: Action): boolean {
   switch (action) {
     case "tidy":
       tidy(ctx, node);
@@ -305,10 +304,11 @@ export function solveTogether<T>(ctx: RuleContext<T>, input: string, output: str
   ctx.pivots?.push(det);
   const gain = solution.get(output)!;
   const names = inner.map((n) => n.id).join(", ");
-  const draft = produce(ctx, "eliminate-node", graph.edges(), inner.map((n) => n.own), gain, (eq) =>
+  const draft = produce(ctx, "eliminate-node", graph.edges(), inner, gain, { before: [], after: [] }, (eq) =>
     `Eliminate ${names} together (a loop of gain exactly 1 around one of them leaves no single-node pivot): ${input} to ${output} becomes ${eq}.`,
   );
-  for (const n of inner) graph.removeNode(n.id);
-  for (const e of [...graph.node(output).ins]) graph.removeEdge(e);
+  for (const n of inner) removeNode(ctx, n);
+  for (const e of [...graph.node(output).ins]) unlink(ctx, e);
   link(ctx, input, output, draft);
+  ctx.footprint?.settle(graph);
 }

@@ -29,8 +29,9 @@ export function times(...names: string[]): string {
 }
 
 /**
- * The reduction trace: numbers equivalent blocks eq1, eq2, … across all pairs of one document and
- * records what each step consumed. Example: log.record("series", [ec, cp], [], g, (eq) => `… ${eq} …`) → "eq1".
+ * The reduction trace: numbers equivalent blocks eq1, eq2, … across all pairs of one document and tags each step
+ * with its pair; what a step consumed is filled in by the pair's Footprint once its rule is done.
+ * Example: log.record("series", g, (eq) => `Series: c then p become ${eq} = c·p.`).produced === "eq1".
  */
 export class StepLog<T> {
   readonly steps: TraceStep<T>[] = [];
@@ -42,32 +43,19 @@ export class StepLog<T> {
     this.pair = { input, output };
   }
 
-  record(
-    rule: ReductionRule,
-    consumed: readonly SfgEdge<T>[],
-    extraBlocks: readonly (string | null)[],
-    gain: T,
-    describe: (eq: string) => string,
-  ): string {
+  record(rule: ReductionRule, gain: T, describe: (eq: string) => string): TraceStep<T> {
     const produced = `eq${this.nextEq++}`;
-    const blocks = new Set<string>();
-    const wires = new Set<string>();
-    for (const e of consumed) {
-      if (e.label !== null) blocks.add(e.label);
-      for (const b of e.blocks) blocks.add(b);
-      for (const w of e.wires) wires.add(w);
-    }
-    for (const b of extraBlocks) if (b !== null) blocks.add(b);
-    this.steps.push({
+    const step: TraceStep<T> = {
       index: this.steps.length,
       rule,
       description: describe(produced),
-      consumedBlocks: [...blocks],
-      consumedWires: [...wires],
+      consumedBlocks: [],
+      consumedWires: [],
       produced,
       gain,
       ...(this.pair ?? {}),
-    });
-    return produced;
+    };
+    this.steps.push(step);
+    return step;
   }
 }

@@ -53,7 +53,7 @@ function wireShape(doc: DiagramDocument): SignalFlowGraph<null> {
     if (!shape.nodes.has(b.id)) shape.addNode(b.id, i, null);
   });
   for (const { from, to } of doc.wires) {
-    if (shape.nodes.has(from) && shape.nodes.has(to)) shape.addEdge({ from, to, gain: null, label: null, sign: 1, blocks: [], wires: [] });
+    if (shape.nodes.has(from) && shape.nodes.has(to)) shape.addEdge({ from, to, gain: null, label: null, sign: 1, before: [], after: [] });
   }
   return shape;
 }

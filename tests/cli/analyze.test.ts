@@ -40,6 +40,30 @@ describe("analyze CLI", { timeout: SPAWN_TIMEOUT }, () => {
     for (const code of ["0", "1", "2", "3"]) expect(help.stdout).toMatch(new RegExp(`^\\s+${code}\\s+\\S`, "m"));
   });
 
+  it("a dead time: --pade N sets the Padé model, while the exact-delay step metrics (simulated) do not depend on it", async () => {
+    const delayed = {
+      format: "loopwright-diagram", version: 1, parameters: {},
+      blocks: [
+        { id: "r", type: "input" }, { id: "e", type: "sum", signs: ["+", "-"] }, { id: "c", type: "gain", expr: "2" },
+        { id: "d", type: "delay", expr: "0.5" }, { id: "G", type: "transfer", expr: "1/(s+1)" }, { id: "y", type: "output" },
+      ],
+      wires: [{ from: "r", to: "e", port: 0 }, { from: "e", to: "c" }, { from: "c", to: "d" }, { from: "d", to: "G" }, { from: "G", to: "y" }, { from: "G", to: "e", port: 1 }],
+    };
+    const path = file("delayed.json", delayed);
+    const [low, high] = await Promise.all(["2", "8"].map(async (n) => analysisResultSchema.parse(JSON.parse((await analyze(path, "--json", "--pade", n)).stdout))));
+    expect(low.deadTime?.padeOrder).toBe(2);
+    expect(high.deadTime?.padeOrder).toBe(8);
+    expect(low.step.overshootPercent).not.toBeCloseTo(high.step.overshootPercent ?? 0, 3);
+    // The simulated horizon follows the Padé model's settling, so the grids differ slightly: agreement to 1e-5.
+    for (const key of ["riseTime", "peakTime", "overshootPercent", "settlingTime"] as const) {
+      const [a, b] = [high.deadTime?.exactStep?.[key] ?? Number.NaN, low.deadTime?.exactStep?.[key] ?? Number.NaN];
+      expect(Math.abs(a - b)).toBeLessThan(1e-5 * Math.abs(b));
+    }
+    expect(low.deadTime?.exactStep?.method).toBe("simulation");
+    // The Padé-8 model is close to the exact delay: its overshoot within 0.05 percentage points of the simulated one.
+    expect(Math.abs((high.step.overshootPercent ?? 0) - (high.deadTime?.exactStep?.overshootPercent ?? 99))).toBeLessThan(0.05);
+  });
+
   it("exit 2: unknown --break (named), unknown option, unknown --input, missing file", async () => {
     const path = file("loop3.json", loop);
     const cases = [["--break", "nope"], ["--frobnicate"], ["--input", "zz"], []];

@@ -61,6 +61,20 @@ describe("reduce CLI: success", { timeout: SPAWN_TIMEOUT }, () => {
     expect(run.stdout).toContain("Warnings: none");
   });
 
+  it("the report numbers each pair's steps from 1 and lists consumed blocks apart from wires", async () => {
+    const tc = TEXTBOOK_CASES.find((c) => c.name.startsWith("reference and disturbance"))!;
+    const run = await reduce(file("two-inputs-report.json", tc.doc));
+    expect(run.code).toBe(0);
+    const report = run.stdout.slice(run.stdout.indexOf("Reduction steps"));
+    const pairs = report.split("\n").filter((l) => /^ {2}\S+ → \S+:$/.test(l));
+    expect(pairs.length).toBeGreaterThan(1);
+    for (const section of report.split(/\n {2}\S+ → \S+:\n/).slice(1)) {
+      const numbers = [...section.matchAll(/^ {4}(\d+)\. /gm)].map((m) => Number(m[1]));
+      expect(numbers).toEqual(numbers.map((_, k) => k + 1));
+    }
+    expect(report).toMatch(/consumed blocks: [^;]+; wires: /);
+  });
+
   it("--input/--output keep only that pair and its steps (from memory: Nise, disturbance rejection T_d = G2/(1 + G1·G2))", async () => {
     const tc = TEXTBOOK_CASES.find((c) => c.name.startsWith("reference and disturbance"))!;
     const path = file("two-inputs.json", tc.doc);

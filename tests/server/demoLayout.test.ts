@@ -2,7 +2,8 @@ import { describe, expect, it } from "vitest";
 import { demoDiagrams } from "@server/db/demoDiagrams";
 import type { Block } from "@shared/diagram/schema";
 import { boxOf, captionBox, fallbackPosition, inPoint, outPoint } from "@shared/geometry/blockBox";
-import { indexBoxes, obstaclesFor } from "@shared/geometry/boxIndex";
+import { indexBoxes } from "@shared/geometry/boxIndex";
+import { routeOfWire } from "@shared/geometry/wirePath";
 import { wireRoute, type Box, type Point } from "@shared/geometry/wireRoute";
 
 // common practice: a readable block diagram has no overlapping blocks and no wire hidden under a block.
@@ -67,9 +68,7 @@ describe.each(demoDiagrams.map((d) => [d.title, d.document] as const))("the demo
     const hidden: string[] = [];
     for (const w of document.wires) {
       const [s, t] = [blocks.get(w.from)!, blocks.get(w.to)!];
-      const entry = inPoint(t.block, t.box, w.port);
-      const obstacles = obstaclesFor(index, w.from, w.to, s.box, t.box);
-      const pts = wireRoute({ source: outPoint(s.box), target: entry.at, side: entry.side, sourceBox: s.box, targetBox: t.box, obstacles });
+      const pts = routeOfWire(w, t.block, s.box, t.box, index);
       for (const other of blocks.values()) {
         if (other.block.id === w.from || other.block.id === w.to) continue;
         const areas = [other.box, other.caption].filter((x): x is Box => x !== null);

@@ -55,7 +55,7 @@ const coreArb = fc.record({
 });
 type CoreSpec = typeof coreArb extends fc.Arbitrary<infer T> ? T : never;
 
-const specArb = (maxCore: number) =>
+const specArb = (maxCore: number, minCore: number) =>
   fc.record({
     symbolic: fc.boolean(),
     objectForm: fc.boolean(),
@@ -63,9 +63,9 @@ const specArb = (maxCore: number) =>
     inputs: fc.integer({ min: 1, max: 3 }),
     outputs: fc.integer({ min: 1, max: 3 }),
     outSources: fc.array(fc.nat(1000), { minLength: 3, maxLength: 3 }),
-    core: fc.array(coreArb, { minLength: 2, maxLength: maxCore }),
+    core: fc.array(coreArb, { minLength: minCore, maxLength: maxCore }),
   });
-type DiagramSpec = typeof specArb extends (n: number) => fc.Arbitrary<infer T> ? T : never;
+type DiagramSpec = typeof specArb extends (n: number, m: number) => fc.Arbitrary<infer T> ? T : never;
 
 interface BuiltExpr {
   text: string;
@@ -116,8 +116,12 @@ function onCycle(id: string, wires: Wire[]): boolean {
   return false;
 }
 
-/** Deterministic assembly of a spec into a document: shrinking a spec shrinks the diagram. */
-function assembleDiagram(spec: DiagramSpec): GeneratedDiagram {
+/**
+ * Deterministic assembly of a spec into a document: shrinking a spec shrinks the diagram. With `chain`, each core
+ * block after the inputs' first takes its first port from the block before it, so the blocks form a forward path
+ * and every backward wire closes a loop on it.
+ */
+function assembleDiagram(spec: DiagramSpec, chain: boolean): GeneratedDiagram {
   const inputs = Array.from({ length: spec.inputs }, (_, i) => `u${i + 1}`);
   const outputs = Array.from({ length: spec.outputs }, (_, i) => `y${i + 1}`);
   const core = spec.core.map((c: CoreSpec, i) => {
@@ -134,6 +138,7 @@ function assembleDiagram(spec: DiagramSpec): GeneratedDiagram {
       const forward = [...inputs, ...core.slice(0, i).map((d) => d.id)];
       let from: string;
       if (i < inputs.length && p === 0) from = inputs[i];
+      else if (chain && p === 0) from = core[i - 1].id;
       else if (c.spec.back[p] && back.length) from = pick(back, c.spec.sources[p]).id;
       else from = pick(forward, c.spec.sources[p]);
       wires.push(c.spec.kind === "sum" ? `${from}->${c.id}:${p}` : `${from}->${c.id}`);
@@ -176,11 +181,12 @@ function assembleDiagram(spec: DiagramSpec): GeneratedDiagram {
 }
 
 /**
- * Random well-posed diagrams with at most `maxCore` blocks besides 1–3 inputs and 1–3 outputs.
- * Example: fc.sample(wellPosedDiagram({ maxCore: 9 }), 1)[0].doc.blocks.length <= 15.
+ * Random well-posed diagrams with at most `maxCore` blocks (at least `minCore`, default 2) besides 1–3 inputs and
+ * 1–3 outputs. `chain` strings the core blocks into one forward path (see assembleDiagram): most pairs then have
+ * loops on their paths, where otherwise few do. Example: fc.sample(wellPosedDiagram({ maxCore: 9 }), 1)[0].doc.blocks.length <= 15.
  */
-export const wellPosedDiagram = (opts: { maxCore: number }): fc.Arbitrary<GeneratedDiagram> =>
-  specArb(opts.maxCore).map(assembleDiagram);
+export const wellPosedDiagram = (opts: { maxCore: number; minCore?: number; chain?: boolean }): fc.Arbitrary<GeneratedDiagram> =>
+  specArb(opts.maxCore, opts.minCore ?? 2).map((spec) => assembleDiagram(spec, opts.chain ?? false));
 
 /** A random complex evaluation point away from the real axis (where poles of the pools lie). */
 export const complexPoint = fc

@@ -60,3 +60,40 @@ export const unityFeedback = (g: string, parameters: DiagramDocument["parameters
     parameters,
     title,
   );
+
+/**
+ * A PI speed loop in unity feedback: r → e(+, −) → pi = Kp(Ti·s + 1)/(Ti·s) → g → pickoff b → y, b fed back into e.
+ * Example: piLoop("8/(0.25*s + 1)", { Kp: 2, Ti: 0.4 }) closes to (64s + 160)/(s² + 68s + 160).
+ */
+export const piLoop = (g: string, parameters: DiagramDocument["parameters"], title?: string): DiagramDocument =>
+  makeDoc(
+    [
+      { id: "r", type: "input" },
+      { id: "e", type: "sum", signs: ["+", "-"] },
+      { id: "pi", type: "transfer", expr: "Kp*(Ti*s + 1)/(Ti*s)" },
+      { id: "g", type: "transfer", expr: g },
+      { id: "b", type: "branch" },
+      { id: "y", type: "output" },
+    ],
+    ["r->e:0", "e->pi", "pi->g", "g->b", "b->y", "b->e:1"],
+    parameters,
+    title,
+  );
+
+/**
+ * Unity feedback around a controller c, a dead time d of T seconds and a plant g: r → e(+, −) → c → d → g → y.
+ * Example: delayedLoop("2", "0.5", "1/(s + 1)") closes to 2e^(−0.5s)/(s + 1 + 2e^(−0.5s)).
+ */
+export const delayedLoop = (c: string, T: string, g: string, parameters: DiagramDocument["parameters"] = {}): DiagramDocument =>
+  makeDoc(
+    [
+      { id: "r", type: "input" },
+      { id: "e", type: "sum", signs: ["+", "-"] },
+      { id: "c", type: "transfer", expr: c },
+      { id: "d", type: "delay", expr: T },
+      { id: "g", type: "transfer", expr: g },
+      { id: "y", type: "output" },
+    ],
+    ["r->e:0", "e->c", "c->d", "d->g", "g->y", "g->e:1"],
+    parameters,
+  );

@@ -42,6 +42,7 @@ const ENTRIES = {
   ...Object.fromEntries(SERVER_WORKERS.map((w) => [`server/${basename(w.source, ".ts")}`, w.source])),
   "tools/cli/reduce": "server/tools/cli/reduce.ts",
   "tools/cli/analyze": "server/tools/cli/analyze.ts",
+  "tools/cli/implement": "server/tools/cli/implement.ts",
 };
 
 /**

@@ -1,4 +1,4 @@
-// Entry point of `npm run reduce` and `npm run analyze`: runs the compiled command-line tool in this same process
+// Entry point of `npm run reduce`, `npm run analyze` and `npm run implement`: runs the compiled command-line tool in this same process
 // (one node start-up, no tsx), compiling it first when a source is newer. Only the tool writes to stdout.
 import { existsSync } from "node:fs";
 import { pathToFileURL } from "node:url";
@@ -11,7 +11,7 @@ const name = process.argv[2];
 const tool = compiledPath(`tools/cli/${name}`);
 ensureNodeModules();
 await buildCompiled();
-if (!existsSync(tool)) fail(`Unknown command-line tool "${name}". Use: reduce | analyze`);
+if (!existsSync(tool)) fail(`Unknown command-line tool "${name}". Use: reduce | analyze | implement`);
 // The tool reads its arguments from process.argv, as when it is run directly: drop this script's own one.
 process.argv.splice(2, 1);
 await import(pathToFileURL(tool).href);

@@ -4,7 +4,7 @@ import { PADE_MAX, PADE_MIN } from "@shared/analysis/pade";
 import type { AnalysisResult } from "@shared/analysis/schema";
 import { counted, plural } from "@shared/text/words";
 import { parseReduceArgs } from "@server/tools/cli/args";
-import { CliExit, readJsonFile, runCommand, usageError as cliUsageError } from "@server/tools/cli/command";
+import { CliExit, readJsonFile, runCommand, takeOption as cliTakeOption, usageError as cliUsageError } from "@server/tools/cli/command";
 import { formatProblem } from "@server/tools/cli/report";
 
 /**
@@ -45,25 +45,7 @@ Exit status:
 `;
 
 const usageError = (message: string) => cliUsageError("analyze", USAGE, message);
-
-/** Takes `--NAME VALUE` / `--NAME=VALUE` out of argv (not after "--"); the rest is the reduce command line. */
-function takeOption(argv: readonly string[], name: string, hint: string): { rest: string[]; value?: string } {
-  const rest: string[] = [];
-  let value: string | undefined;
-  const pattern = new RegExp(`^--${name}(?:=(.*))?$`);
-  for (let i = 0; i < argv.length; i++) {
-    const m = pattern.exec(argv[i]);
-    if (!m || argv.slice(0, i).includes("--")) {
-      rest.push(argv[i]);
-      continue;
-    }
-    const given = m[1] ?? argv[++i];
-    if (given === undefined || given === "" || (m[1] === undefined && given.startsWith("--"))) throw usageError(`--${name} needs ${hint}`);
-    if (value !== undefined) throw usageError(`--${name} is given twice`);
-    value = given;
-  }
-  return { rest, value };
-}
+const takeOption = (argv: readonly string[], name: string, hint: string) => cliTakeOption(argv, name, hint, usageError);
 
 /** `--pade N`: an integer from 1 to 10. */
 function padeOrderOf(text: string | undefined): number | undefined {

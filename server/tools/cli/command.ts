@@ -20,6 +20,28 @@ export class CliExit extends Error {
 export const usageError = (command: string, usage: string, message: string): CliExit =>
   new CliExit(2, [`${command}: ${message}`, usage]);
 
+/**
+ * Takes `--NAME VALUE` / `--NAME=VALUE` out of argv (not after "--"); the rest goes on to the next parser.
+ * A missing value or a repeated option is a usage error. Example: takeOption(["f.json", "--ts", "0.1"], "ts", …).value === "0.1".
+ */
+export function takeOption(argv: readonly string[], name: string, hint: string, usageError: (message: string) => CliExit): { rest: string[]; value?: string } {
+  const rest: string[] = [];
+  let value: string | undefined;
+  const pattern = new RegExp(`^--${name}(?:=(.*))?$`);
+  for (let i = 0; i < argv.length; i++) {
+    const m = pattern.exec(argv[i]);
+    if (!m || argv.slice(0, i).includes("--")) {
+      rest.push(argv[i]);
+      continue;
+    }
+    const given = m[1] ?? argv[++i];
+    if (given === undefined || given === "" || (m[1] === undefined && given.startsWith("--"))) throw usageError(`--${name} needs ${hint}`);
+    if (value !== undefined) throw usageError(`--${name} is given twice`);
+    value = given;
+  }
+  return { rest, value };
+}
+
 /** Reads and JSON-parses a diagram file: a missing or unreadable file is a usage error, bad JSON says line and column. */
 export function readJsonFile(command: string, usage: string, file: string): unknown {
   let size: number;

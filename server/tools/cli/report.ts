@@ -1,5 +1,5 @@
 import type { Problem } from "@shared/diagram/problems";
-import type { ReductionResult, TransferResult } from "@shared/reduce/result";
+import type { ReductionResult, ReductionStep, TransferResult } from "@shared/reduce/result";
 
 /** Plain-text rendering of problems and results for the `reduce` command. */
 
@@ -37,7 +37,17 @@ function transferLines(t: TransferResult): string[] {
   return lines;
 }
 
-/** The readable report: each pair, the characteristic polynomial, the steps, the warnings. */
+/** The steps in order of their pairs ("r → y"; "" for steps recorded without a pair). */
+function stepsByPair(steps: readonly ReductionStep[]): Map<string, ReductionStep[]> {
+  const groups = new Map<string, ReductionStep[]>();
+  for (const s of steps) {
+    const key = s.input === undefined ? "" : `${s.input} → ${s.output}`;
+    groups.set(key, [...(groups.get(key) ?? []), s]);
+  }
+  return groups;
+}
+
+/** The readable report: each pair, the characteristic polynomial, the steps of each pair, the warnings. */
 export function formatReport(result: ReductionResult, title: string | undefined): string {
   const lines: string[] = [];
   if (title) lines.push(title, "");
@@ -45,12 +55,14 @@ export function formatReport(result: ReductionResult, title: string | undefined)
   for (const t of result.transfers) lines.push(...transferLines(t), "");
   lines.push(`Characteristic polynomial (all modes, nothing cancelled): ${result.characteristic}`, "");
   lines.push(`Reduction steps (${result.steps.length})`);
-  for (const step of result.steps) {
-    const pair = step.input !== undefined ? ` [${step.input} → ${step.output}]` : "";
-    lines.push(`  ${step.index}. ${step.rule}${pair}: ${step.description}`);
-    lines.push(`     ${step.produced} = ${step.expr}`);
-    const consumed = [...step.consumedBlocks, ...step.consumedWires];
-    if (consumed.length) lines.push(`     consumed: ${consumed.join(", ")}`);
+  for (const [pair, steps] of stepsByPair(result.steps)) {
+    if (pair) lines.push(`  ${pair}:`);
+    // Numbered from 1 within each pair, as the editor shows them.
+    steps.forEach((step, k) => {
+      lines.push(`    ${k + 1}. ${step.rule}: ${step.description}`);
+      lines.push(`       ${step.produced} = ${step.expr}`);
+      lines.push(`       consumed blocks: ${step.consumedBlocks.join(", ") || "none"}; wires: ${step.consumedWires.join(", ") || "none"}`);
+    });
   }
   lines.push("", result.warnings.length ? `Warnings (${result.warnings.length})` : "Warnings: none");
   for (const w of result.warnings) lines.push(`  ${formatProblem(w)}`);

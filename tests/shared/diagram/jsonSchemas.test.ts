@@ -9,7 +9,12 @@ const schemaFile = (name: string) => fileURLToPath(new URL(`../../../shared/sche
 describe("published JSON Schemas", () => {
   it("the committed files equal freshly generated ones (run npx tsx server/tools/genSchemas.ts)", () => {
     const fresh = publishedJsonSchemas();
-    expect(Object.keys(fresh).sort()).toEqual(["analysis-result.schema.json", "loopwright-diagram.v1.schema.json", "reduction-result.schema.json"]);
+    expect(Object.keys(fresh).sort()).toEqual([
+      "analysis-result.schema.json",
+      "implement-result.schema.json",
+      "loopwright-diagram.v1.schema.json",
+      "reduction-result.schema.json",
+    ]);
     for (const [name, schema] of Object.entries(fresh)) {
       expect(JSON.parse(readFileSync(schemaFile(name), "utf8")), name).toEqual(schema);
     }
@@ -41,6 +46,25 @@ describe("published JSON Schemas", () => {
     expect(schema.properties.steps.items.required).toEqual(
       expect.arrayContaining(["index", "rule", "description", "consumedBlocks", "consumedWires", "produced", "expr", "latex"]),
     );
+  });
+
+  it("describes the implementation result: continuous, discrete (or null) and state space, exactly those fields", () => {
+    const schema = publishedJsonSchemas()["implement-result.schema.json"] as {
+      required: string[];
+      additionalProperties: unknown;
+      properties: {
+        discrete: { anyOf: { type: string; required?: string[]; properties?: { method: { enum: string[] } } }[] };
+        stateSpace: { required: string[]; properties: { form: { enum: string[] } } };
+      };
+    };
+    expect(schema.required.sort()).toEqual(["continuous", "discrete", "stateSpace"]);
+    expect(schema.additionalProperties).toBe(false);
+    const discrete = schema.properties.discrete.anyOf.find((s) => s.type === "object");
+    expect(discrete?.required?.sort()).toEqual(["denominator", "method", "numerator", "ts"]);
+    expect(discrete?.properties?.method.enum).toEqual(["tustin", "prewarp", "zoh", "matched"]);
+    expect(schema.properties.discrete.anyOf.some((s) => s.type === "null")).toBe(true);
+    expect(schema.properties.stateSpace.required.sort()).toEqual(["A", "B", "C", "D", "form"]);
+    expect(schema.properties.stateSpace.properties.form.enum).toEqual(["controllable", "observable", "minimal"]);
   });
 });
 

@@ -50,4 +50,19 @@ describe("diagramSvg (common practice: SVG 1.1 as XML)", () => {
     const right = Number(caption.getAttribute("x")) + shift + (label.length + 3) * 11 * 0.55 / 2;
     expect(right).toBeLessThanOrEqual(width);
   });
+  it("draws a dead-time block with its typeset e^(−sT) inside its box", () => {
+    const seen: string[] = [];
+    const record = (tex: string) => (seen.push(tex), typeset(tex));
+    const delayed = diagramDocumentSchema.parse({
+      ...doc,
+      blocks: [...doc.blocks.filter((b) => b.id !== "y"), { id: "d", type: "delay", expr: "0.5" }, { id: "y", type: "output" }],
+      wires: [...doc.wires.filter((w) => w.to !== "y"), { from: "g", to: "d" }, { from: "d", to: "y" }],
+      layout: { ...doc.layout, d: { x: 340, y: 34 }, y: { x: 480, y: 40 } },
+    });
+    const xml = parse(diagramSvg({ document: delayed, result: null, meta: { title: "Servo", version: 3, savedAt: "2026-12-03T07:00:00.000Z" }, typeset: record }));
+    expect(seen).toContain("e^{-\\frac{1}{2}\\,s}");
+    const group = Array.from(xml.getElementsByTagName("g")).find((g) => g.getAttribute("data-block-id") === "d")!;
+    expect(group.getElementsByTagName("title")[0]!.textContent).toBe("d");
+    expect(group.getElementsByTagName("svg").length).toBe(1); // the typeset formula is placed inside the block
+  });
 });

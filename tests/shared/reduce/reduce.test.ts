@@ -56,7 +56,7 @@ function build(inner: number, extra: EdgeSpec[], ends: number[]) {
   });
   const graph = new SignalFlowGraph<Frac>();
   names.forEach((id, i) => graph.addNode(id, i, null));
-  for (const e of edges) graph.addEdge({ ...e, blocks: [], wires: [] });
+  for (const e of edges) graph.addEdge({ ...e, before: [], after: [] });
   const labels = edges.flatMap((e) => (e.label ? [e.label] : []));
   return { graph, names, edges, doc: diagram(labels.map((l) => [l, "gain"]), []) };
 }

@@ -29,7 +29,7 @@ describe("textbook rules on small graphs (plain rational gains)", () => {
     expect(steps[0]).toMatchObject({
       rule: "series",
       consumedBlocks: ["a", "b"],
-      consumedWires: ["w0", "w1", "w2"],
+      consumedWires: ["w1"], // the wire between them; r → a and b → y now connect eq1
       produced: "eq1",
       expr: "10/3",
       input: "r",
@@ -48,7 +48,8 @@ describe("textbook rules on small graphs (plain rational gains)", () => {
     const { t, steps } = reduce(doc, { a: frac(2), b: frac(3) });
     expect(fracText(t.gain)).toBe("-1");
     expect(steps.map((s) => s.rule)).toEqual(["parallel"]);
-    expect(steps[0].consumedBlocks).toEqual(["a", "p", "b"]);
+    expect(steps[0].consumedBlocks).toEqual(["p", "a", "b", "s"]); // the pickoff, both branches, the junction
+    expect(steps[0].consumedWires).toEqual(["w1", "w2", "w3", "w4"]); // r → p and s → y stay
     expect(steps[0].description).toContain("a and −b");
   });
 
@@ -61,7 +62,7 @@ describe("textbook rules on small graphs (plain rational gains)", () => {
     const { t, steps } = reduce(doc, { g: frac(3) });
     expect(fracText(t.gain)).toBe("3/4");
     expect(steps).toHaveLength(1);
-    expect(steps[0]).toMatchObject({ rule: "feedback", consumedBlocks: ["g"], produced: "eq1" });
+    expect(steps[0]).toMatchObject({ rule: "feedback", consumedBlocks: ["g", "e"], consumedWires: ["w1", "w3"], produced: "eq1" });
     expect(steps[0].description).toContain("negative feedback");
     expect(steps[0].description).toContain("g/(1 + g)");
   });
@@ -81,9 +82,9 @@ describe("textbook rules on small graphs (plain rational gains)", () => {
     // common practice: x = g·u + L·x gives x = g/(1 − L)·u
     const g = new SignalFlowGraph<Frac>();
     ["u", "n", "y"].forEach((id, i) => g.addNode(id, i, null));
-    g.addEdge({ from: "u", to: "n", gain: frac(2), label: "a", sign: 1, blocks: [], wires: [] });
-    g.addEdge({ from: "n", to: "n", gain: frac(1, 3), label: "l", sign: 1, blocks: [], wires: [] });
-    g.addEdge({ from: "n", to: "y", gain: frac(5), label: "b", sign: 1, blocks: [], wires: [] });
+    g.addEdge({ from: "u", to: "n", gain: frac(2), label: "a", sign: 1, before: [], after: [] });
+    g.addEdge({ from: "n", to: "n", gain: frac(1, 3), label: "l", sign: 1, before: [], after: [] });
+    g.addEdge({ from: "n", to: "y", gain: frac(5), label: "b", sign: 1, before: [], after: [] });
     const out = reducePairs(g, f, [["u", "y"]], createBudget(), { determinant: true });
     expect(fracText(out.transfers[0].gain)).toBe("15"); // 2/(1 − 1/3)·5
     expect(fracText(fieldProduct(f, out.transfers[0].pivots!))).toBe("2/3");
@@ -126,7 +127,7 @@ describe("general elimination", () => {
     const g = new SignalFlowGraph<Frac>();
     ["u", "a", "b", "c", "y"].forEach((id, i) => g.addNode(id, i, null));
     const edge = (from: string, to: string, gain: Frac, label: string) =>
-      g.addEdge({ from, to, gain, label, sign: 1, blocks: [], wires: [] });
+      g.addEdge({ from, to, gain, label, sign: 1, before: [], after: [] });
     edge("u", "b", frac(1), "p");
     edge("a", "b", frac(1, 2), "q");
     edge("b", "c", frac(2), "r");
@@ -148,7 +149,7 @@ describe("general elimination", () => {
     const g = new SignalFlowGraph<Frac>();
     ["u", "a", "b", "y"].forEach((id, i) => g.addNode(id, i, null));
     const edge = (from: string, to: string, gain: Frac, label: string) =>
-      g.addEdge({ from, to, gain, label, sign: 1, blocks: [], wires: [] });
+      g.addEdge({ from, to, gain, label, sign: 1, before: [], after: [] });
     edge("u", "a", frac(1), "p");
     edge("a", "a", frac(1), "la");
     edge("b", "b", frac(1), "lb");

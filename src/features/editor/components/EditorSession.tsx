@@ -284,7 +284,7 @@ export function EditorSession(props: Props) {
               onConnectWire={commands.connectWire}
               onDropBlock={commands.dropBlock}
             >
-              {step && footprint && <StepBadge step={step} blocks={footprint.blocks} nodes={canvasState.nodes} />}
+              {step && footprint && <StepBadge step={step} number={(stepAt ?? 0) + 1} footprint={footprint} nodes={canvasState.nodes} doc={doc} />}
               {comments && <CommentPins pins={review.threads.pins} nodes={canvasState.nodes} doc={doc} onOpen={review.openThread} />}
             </DiagramCanvas>
             {doc.blocks.length === 0 && (

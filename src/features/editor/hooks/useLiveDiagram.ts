@@ -1,6 +1,7 @@
 import { useEffect, useLayoutEffect, useRef, useState } from "react";
 import type { AnalysisAnswer, AnalysisQuery, ParameterInfo } from "@shared/analysis/answer";
 import type { Problem } from "@shared/diagram/problems";
+import { DEFAULT_IMPLEMENT_REQUEST, type ImplementationView, type ImplementRequest } from "@shared/implement/view";
 import type { EditorDoc } from "@/features/editor/commands/types";
 import { LiveChannel, type LiveChannelResult } from "@/features/editor/worker/liveChannel";
 import type { LiveOutcome } from "@/features/editor/worker/liveProtocol";
@@ -23,6 +24,9 @@ export interface AnalysisSettings {
   sweepNegative: boolean;
   /** Padé order of each dead time; absent: the analysis's default (3). */
   padeOrder?: number;
+  /** The Implementation tab's choices (absent: DEFAULT_IMPLEMENT_REQUEST); computed only while it is open. */
+  implementation?: ImplementRequest;
+  implementationShown?: boolean;
 }
 
 export type AnalysisOptions = AnalysisSettings & { input: string | null; output: string | null };
@@ -45,6 +49,8 @@ export interface LiveAnalysis {
   problems: Problem[];
   /** The parameter table as the worker read it last (kept when an answer fails, so sliders stay usable). */
   parameters: ParameterInfo[];
+  /** The Implementation tab's results with the latest answer; null while the tab is closed. */
+  implementation: ImplementationView | null;
   crash: string | null;
   /** True from a change until the answer for the newest request arrives. */
   pending: boolean;
@@ -52,7 +58,7 @@ export interface LiveAnalysis {
 }
 
 const NO_RESULT: LiveResult = { outcome: null, crash: null, pending: true, ms: null, doc: null };
-const NO_ANALYSIS: LiveAnalysis = { result: null, problems: [], parameters: [], crash: null, pending: true, ms: null };
+const NO_ANALYSIS: LiveAnalysis = { result: null, problems: [], parameters: [], implementation: null, crash: null, pending: true, ms: null };
 
 /** A worker started ahead of the session (it spends a second or more loading the algebra), once it has not failed. */
 let spare: { worker: Worker; failed: boolean } | null = null;
@@ -86,9 +92,9 @@ const queryOf = (o: AnalysisOptions): AnalysisQuery => ({
   padeOrder: o.padeOrder,
 });
 
-function analysisFrom(s: LiveAnalysis, answer: AnalysisAnswer, pending: boolean, ms: number): LiveAnalysis {
-  if (!answer.ok) return { ...s, problems: answer.problems, parameters: answer.parameters.length ? answer.parameters : s.parameters, crash: null, pending, ms };
-  return { result: answer, problems: [], parameters: answer.parameters, crash: null, pending, ms };
+function analysisFrom(s: LiveAnalysis, answer: AnalysisAnswer, implementation: ImplementationView | null, pending: boolean, ms: number): LiveAnalysis {
+  if (!answer.ok) return { ...s, problems: answer.problems, parameters: answer.parameters.length ? answer.parameters : s.parameters, implementation, crash: null, pending, ms };
+  return { result: answer, problems: [], parameters: answer.parameters, implementation, crash: null, pending, ms };
 }
 
 /**
@@ -114,7 +120,7 @@ export function useLiveDiagram(doc: EditorDoc, opts: AnalysisOptions): { result:
     const older = payload.document !== latest.current.doc;
     const analysisPending = waiting || debouncing.current || !reply.final;
     if (reply.stage === "result") setResult({ outcome: reply.outcome, crash: null, pending: older, ms: reply.ms, doc: payload.document });
-    else if (reply.stage === "analysis") setAnalysis((s) => analysisFrom(s, reply.answer, analysisPending, reply.ms));
+    else if (reply.stage === "analysis") setAnalysis((s) => analysisFrom(s, reply.answer, reply.implementation, analysisPending, reply.ms));
     else if (reply.during === "result") setResult({ outcome: null, crash: reply.crash, pending: older, ms: reply.ms, doc: payload.document });
     else setAnalysis((s) => ({ ...s, crash: reply.crash, pending: analysisPending, ms: reply.ms }));
   };
@@ -130,10 +136,10 @@ export function useLiveDiagram(doc: EditorDoc, opts: AnalysisOptions): { result:
 
   const send = () => {
     const { doc: d, opts: o } = latest.current;
-    channel.current?.request({ document: d, analysis: queryOf(o) });
+    channel.current?.request({ document: d, analysis: queryOf(o), implementation: o.implementationShown ? (o.implementation ?? DEFAULT_IMPLEMENT_REQUEST) : null });
   };
 
-  const { input, output, break: brk, values, band, sweepParameter, sweepShown, sweepNegative, padeOrder } = opts;
+  const { input, output, break: brk, values, band, sweepParameter, sweepShown, sweepNegative, padeOrder, implementation, implementationShown } = opts;
   const optionsSeen = useRef(false);
   useEffect(() => {
     // Option changes go straight through; the first run is the opening request's, which the document sends.
@@ -143,7 +149,7 @@ export function useLiveDiagram(doc: EditorDoc, opts: AnalysisOptions): { result:
     }
     setAnalysis((s) => (s.pending ? s : { ...s, pending: true }));
     send();
-  }, [input, output, brk, values, band, sweepParameter, sweepShown, sweepNegative, padeOrder]);
+  }, [input, output, brk, values, band, sweepParameter, sweepShown, sweepNegative, padeOrder, implementation, implementationShown]);
 
   const opened = useRef(false);
   useLayoutEffect(() => {

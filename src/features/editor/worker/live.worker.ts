@@ -7,7 +7,7 @@ const post = (reply: LiveReply) => (self as unknown as Worker).postMessage(reply
 const session = createLiveSession();
 
 self.onmessage = (event: MessageEvent<LiveRequest>) => {
-  const { seq, document, analysis } = event.data;
+  const { seq, document, analysis, implementation = null } = event.data;
   let started = performance.now();
   const crash = (during: "result" | "analysis", err: unknown) =>
     post({ seq, final: true, stage: "crash", ms: performance.now() - started, during, crash: err instanceof Error ? err.message : String(err) });
@@ -21,7 +21,8 @@ self.onmessage = (event: MessageEvent<LiveRequest>) => {
   started = performance.now();
   try {
     const answer = session.analyze(analysis);
-    post({ seq, final: true, stage: "analysis", ms: performance.now() - started, answer });
+    const implemented = implementation && session.implement(implementation, answer);
+    post({ seq, final: true, stage: "analysis", ms: performance.now() - started, answer, implementation: implemented });
   } catch (err) {
     crash("analysis", err);
   }

@@ -2,6 +2,7 @@
 // what the result depends on, and the analysis of that same reduction.
 import { createAnalyzer } from "@shared/analysis/analyzeDiagram";
 import type { AnalysisAnswer, AnalysisQuery } from "@shared/analysis/answer";
+import { implementationView, type ImplementationView, type ImplementRequest } from "@shared/implement/view";
 import { printReduction } from "@shared/reduce/printReduction";
 import { reduceDocumentExact, type ExactOutcome } from "@shared/reduce/reduceDiagram";
 import { LIVE_LIMITS, type LiveOutcome } from "@/features/editor/worker/liveProtocol";
@@ -20,6 +21,8 @@ export interface LiveSession {
   reduce(document: unknown): { outcome: LiveOutcome; reduced: boolean };
   /** The analysis of the last reduced document; its problems when that document did not reduce. */
   analyze(query: AnalysisQuery): AnalysisAnswer;
+  /** The Implementation tab's results for the last reduced document, beside the analysed pair `answer`. */
+  implement(request: ImplementRequest, answer: AnalysisAnswer): ImplementationView | null;
 }
 
 export function createLiveSession(): LiveSession {
@@ -49,6 +52,11 @@ export function createLiveSession(): LiveSession {
       const answer = analyzer(reduction, { ...query, break: null });
       const note = `The chosen break wire ${brk} is no longer in the diagram: the loop is broken at the default wire instead.`;
       return answer.ok ? { ...answer, analysis: { ...answer.analysis, notes: [note, ...answer.analysis.notes] } } : answer;
+    },
+    implement(request, answer) {
+      if (!last?.exact.ok || !answer.ok) return null;
+      const { input, output, bandwidth, values } = answer.analysis;
+      return implementationView(last.exact.reduction, request, { input, output, bandwidth, values });
     },
   };
 }

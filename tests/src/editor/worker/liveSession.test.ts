@@ -181,4 +181,16 @@ describe("one reduction per change of what the result depends on", () => {
     const variants = [reductionKey(unityLoop("K/(s*(s+3))")), reductionKey({ ...doc, wires: doc.wires.slice(1) }), reductionKey({ ...doc, parameters: { K: 5 } })];
     for (const v of variants) expect(v).not.toBe(base);
   });
+  it("implements the analysed pair at the slider values beside the analysis, only when asked", () => {
+    const session = createLiveSession();
+    session.reduce(doc);
+    const answer = session.analyze(query(doc, { values: { K: 9 } }));
+    const view = session.implement({ block: null, ts: 0.01, method: "tustin", prewarp: null, form: "controllable" }, answer);
+    if (!view?.ok) throw new Error("no implementation");
+    // T = K/(s² + 2s + K) at the slider value K = 9 (from memory: unity feedback around K/(s(s + 2))).
+    expect(view.subject.what).toBe("the pair r → y");
+    expect(view.continuous).toMatchObject({ numerator: [9], denominator: [1, 2, 9] });
+    expect(view.advice.bandwidth).toBe(ok(answer).analysis.bandwidth);
+    expect(session.implement({ block: null, ts: 0.01, method: "tustin", prewarp: null, form: "controllable" }, { ok: false, problems: [], parameters: [] })).toBeNull();
+  });
 });

@@ -1,11 +1,13 @@
 import type { ReactNode } from "react";
 import type { Analysis } from "@shared/analysis/analyze";
 import type { Problem } from "@shared/diagram/problems";
+import { DEFAULT_IMPLEMENT_REQUEST } from "@shared/implement/view";
 import { AnalysisHelp } from "@/features/editor/components/analysis/AnalysisHelp";
 import { AnalysisTabs, type TabSpec } from "@/features/editor/components/analysis/AnalysisTabs";
 import { BreakInUse } from "@/features/editor/components/analysis/BreakPicker";
 import { DeadTimeBar } from "@/features/editor/components/analysis/DeadTimeBar";
 import { FrequencyView } from "@/features/editor/components/analysis/FrequencyView";
+import { ImplementationView } from "@/features/editor/components/analysis/ImplementationView";
 import { ParameterSliders } from "@/features/editor/components/analysis/ParameterSliders";
 import { RouthView } from "@/features/editor/components/analysis/RouthView";
 import { StabilityView } from "@/features/editor/components/analysis/StabilityView";
@@ -24,7 +26,7 @@ interface Props {
 }
 
 const CAUTION =
-  "These results describe the linear model as drawn; dead times enter the poles, Routh array and time responses through their Padé approximation; actuator limits, saturation and other nonlinearity are not in it. Validate on the plant and follow your functional-safety process and local codes.";
+  "These results describe the linear model as drawn; dead times enter the poles, Routh array and closed-form responses through their Padé approximation (the simulated responses keep them exact); actuator limits, saturation and other nonlinearity are not in it. Validate on the plant and follow your functional-safety process and local codes.";
 
 const VERDICT_TONE = { stable: "border-steady bg-steady-tint", marginal: "border-trace bg-trace-tint", unstable: "border-fault bg-fault-tint" } as const;
 
@@ -82,8 +84,8 @@ export function AnalysisPanel({ live, settings, onSettings, onPickProblem }: Pro
         {result && (
           <AnalysisTabs
             label="Analysis results"
-            tabs={tabsFor(result, settings, onSettings, live.parameters.length > 0)}
-            onOpen={(key) => onSettings({ sweepShown: key === "sweep" })}
+            tabs={tabsFor(live, result, settings, onSettings)}
+            onOpen={(key) => onSettings({ sweepShown: key === "sweep", implementationShown: key === "implementation" })}
           />
         )}
       </div>
@@ -95,8 +97,10 @@ export function AnalysisPanel({ live, settings, onSettings, onPickProblem }: Pro
   );
 }
 
-function tabsFor(result: NonNullable<LiveAnalysis["result"]>, settings: AnalysisSettings, onSettings: Props["onSettings"], hasParameters: boolean): TabSpec[] {
+function tabsFor(live: LiveAnalysis, result: NonNullable<LiveAnalysis["result"]>, settings: AnalysisSettings, onSettings: Props["onSettings"]): TabSpec[] {
   const { analysis, sweep } = result;
+  const hasParameters = live.parameters.length > 0;
+  const request = settings.implementation ?? DEFAULT_IMPLEMENT_REQUEST;
   return [
     { key: "stability", label: "Stability", render: () => <StabilityView analysis={analysis} /> },
     { key: "routh", label: "Routh array", render: () => <RouthView analysis={analysis} /> },
@@ -108,6 +112,14 @@ function tabsFor(result: NonNullable<LiveAnalysis["result"]>, settings: Analysis
       label: "Parameter sweep",
       // The sweep is computed only while this tab is open: the first answer after opening it brings it.
       render: () => (sweep || !hasParameters ? <SweepView sweep={sweep} analysis={analysis} negative={settings.sweepNegative} onNegative={(sweepNegative) => onSettings({ sweepNegative })} /> : <p className="text-sm text-ink-soft">Computing the root locus…</p>),
+    },
+    {
+      key: "implementation",
+      label: "Implementation",
+      // Computed only while this tab is open, like the sweep.
+      render: () => (
+        <ImplementationView view={live.implementation} request={request} pair={`${analysis.input} → ${analysis.output}`} onRequest={(change) => onSettings({ implementation: { ...request, ...change } })} />
+      ),
     },
     { key: "help", label: "Definitions", render: () => <AnalysisHelp /> },
   ];

@@ -5,6 +5,7 @@ import type { BodeData } from "@shared/analysis/frequency";
 import type { LoopAnalysis } from "@shared/analysis/loopAnalysis";
 import { Tex } from "@/features/editor/components/Tex";
 import { formatNumber } from "@/features/editor/lib/analysisFormat";
+import { logTicks } from "@/features/editor/lib/logTicks";
 
 type Which = "closed" | "loop";
 
@@ -39,12 +40,6 @@ export function FrequencyView({ analysis }: { analysis: Analysis }) {
   );
 }
 
-/** Powers of ten inside [lo, hi]: the ticks of a log axis. */
-const decades = (lo: number, hi: number): number[] => {
-  const out: number[] = [];
-  for (let k = Math.ceil(Math.log10(lo) - 1e-9); k <= Math.floor(Math.log10(hi) + 1e-9); k++) out.push(10 ** k);
-  return out;
-};
 
 /** The curve's value at ω, interpolated linearly in log ω between the samples around it. */
 function valueAt(omega: readonly number[], ys: readonly number[], w: number): number {
@@ -75,7 +70,7 @@ function BodePlots({ data, title, loop, bandwidth }: { data: BodeData; title: st
   const phase = data.phaseDeg;
   const rows = useMemo(() => data.omega.map((w, i) => ({ w, mag: data.magDb[i], phase: data.phaseDeg[i] })), [data]);
   const domain: [number, number] = [data.omega[0], data.omega[data.omega.length - 1]];
-  const ticks = decades(...domain);
+  const ticks = logTicks(...domain);
   const [pMin, pMax] = [Math.min(...phase), Math.max(...phase)];
   // −180° and its unwrapped copies that the phase curve actually reaches.
   const [kLo, kHi] = [Math.ceil((pMin + 180) / 360), Math.floor((pMax + 180) / 360)];

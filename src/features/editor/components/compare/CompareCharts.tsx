@@ -3,6 +3,7 @@ import { CartesianGrid, Legend, Line, LineChart, Tooltip, XAxis, YAxis } from "r
 import type { Analysis } from "@shared/analysis/analyze";
 import { sampleResponse } from "@shared/analysis/stepMetrics";
 import { formatNumber } from "@/features/editor/lib/analysisFormat";
+import { frequencyAxisProps } from "@/features/editor/lib/logTicks";
 
 /** One version's curve: its label in the legend and its analysis (null: nothing to draw, e.g. saved with problems). */
 export interface Curve {
@@ -23,12 +24,6 @@ const styleOf = (i: number, count: number) => STYLES[count === 1 ? 1 : i];
 
 /** "v1 and v2", or "v3" for one curve. */
 const labels = (curves: readonly Curve[]) => curves.map((c) => c.label).join(" and ");
-
-const logTicks = (lo: number, hi: number): number[] => {
-  const out: number[] = [];
-  for (let k = Math.ceil(Math.log10(lo) - 1e-9); k <= Math.floor(Math.log10(hi) + 1e-9); k++) out.push(10 ** k);
-  return out;
-};
 
 /** The versions' unit-step responses (one or two) on one time axis, long enough for the slowest; `height` in px. */
 export function StepOverlay({ curves, height = 240 }: { curves: readonly Curve[]; height?: number }) {
@@ -69,8 +64,7 @@ export function BodeOverlay({ curves, height = 190 }: { curves: readonly Curve[]
   const plot = (key: "mag" | "phase", unit: string) => (
     <LineChart responsive style={{ width: "100%", height }} syncId="compare-bode" margin={{ top: 8, right: 16, bottom: 8, left: 4 }}>
       <CartesianGrid className="text-rule" stroke="currentColor" strokeDasharray="2 4" />
-      <XAxis type="number" dataKey="w" scale="log" domain={domain} ticks={logTicks(...domain)} allowDataOverflow fontSize={11}
-        tickFormatter={(w: number) => formatNumber(w, 3)} label={{ value: "ω (rad/s)", position: "insideBottomRight", offset: -4, fontSize: 11 }} />
+      <XAxis {...frequencyAxisProps(domain)} />
       <YAxis type="number" domain={["auto", "auto"]} width={56} fontSize={11} tickFormatter={(v: number) => formatNumber(v, 3)}
         label={{ value: unit, angle: -90, position: "insideLeft", fontSize: 11 }} />
       <Tooltip labelFormatter={(w) => `ω = ${formatNumber(Number(w), 5)} rad/s`} formatter={(v) => `${formatNumber(Number(v), 5)} ${unit}`} />

@@ -1,5 +1,4 @@
 import { useId } from "react";
-import { toast } from "sonner";
 import { Button } from "@/components/Button";
 import type { Analysis } from "@shared/analysis/analyze";
 import { useEditorActions } from "@/features/editor/components/EditorContext";
@@ -8,6 +7,7 @@ import { TransferBox } from "@/features/editor/components/panels/TransferBox";
 import { ClosedLoopAtValues } from "@/features/editor/components/panels/ClosedLoopAtValues";
 import { pairKey, pairName, type ResultView } from "@/features/editor/lib/resultView";
 import { resultLatex, resultPlainText } from "@/features/editor/lib/resultText";
+import { copyText } from "@/features/editor/lib/copyText";
 import type { LiveResult } from "@/features/editor/hooks/useLiveDiagram";
 import { plural } from "@shared/text/words";
 
@@ -21,11 +21,7 @@ interface Props {
   atValues?: { analysis: Analysis; moved: boolean } | null;
 }
 
-const copy = (text: string, what: string) =>
-  navigator.clipboard.writeText(text).then(
-    () => toast.success(`Copied the result as ${what}.`),
-    () => toast.error("The browser refused clipboard access; select the text and copy it instead."),
-  );
+const copy = (text: string, what: string) => copyText(text, `result as ${what}`);
 
 /** The closed-loop transfer function of the chosen pair, its characteristic polynomial and cancelled modes. */
 export function ResultsPanel({ live, view, stale, onPair, atValues = null }: Props) {

@@ -10,6 +10,9 @@ import { StabilityView } from "@/features/editor/components/analysis/StabilityVi
 import { SteadyStateView } from "@/features/editor/components/analysis/SteadyStateView";
 import { SweepView } from "@/features/editor/components/analysis/SweepView";
 import { AnalysisHelp } from "@/features/editor/components/analysis/AnalysisHelp";
+import { ImplementationView } from "@/features/editor/components/analysis/ImplementationView";
+import { DEFAULT_IMPLEMENT_REQUEST, implementationView } from "@shared/implement/view";
+import { reduced } from "../../../../support/reduced";
 import { hiddenUnstableLoop, makeDoc, unityFeedback } from "../../../../support/docBuilder";
 
 
@@ -18,7 +21,7 @@ const open = (g: string) => makeDoc([{ id: "r", type: "input" }, { id: "g", type
 
 /** Visible text: tags dropped, entities decoded, KaTeX's hidden MathML annotations left in (they are text too). */
 const text = (html: string) =>
-  html.replace(/<[^>]+>/g, " ").replace(/&lt;/g, "<").replace(/&gt;/g, ">").replace(/&#x27;|&apos;/g, "'").replace(/&amp;/g, "&").replace(/\s+/g, " ");
+  html.replace(/<[^>]+>/g, " ").replace(/&lt;/g, "<").replace(/&gt;/g, ">").replace(/&#x27;|&apos;/g, "'").replace(/&quot;/g, '"').replace(/&amp;/g, "&").replace(/\s+/g, " ");
 
 const headings = (html: string) => [...html.matchAll(/<h3[^>]*>([^<]*)<\/h3>/g)].map((m) => m[1]);
 
@@ -109,6 +112,39 @@ describe("AnalysisHelp", () => {
     for (const name of ["position error constant", "velocity error constant", "acceleration error constant"]) expect(t).toContain(`the ${name}`);
     expect(t).toContain("so that none is read as a parameter of the diagram");
     expect(t).toContain("K_{\\mathrm{acc}} = \\lim_{s\\to 0} s^2 L(s)");
+  });
+
+  it("the Definitions say what each discretisation method is and what the minimal realisation means", () => {
+    const t = text(renderToStaticMarkup(<AnalysisHelp />));
+    for (const words of ["Tustin (bilinear): s = (2/Ts)·(z − 1)/(z + 1)", "Zero-order hold", "Matched pole-zero", "z = e^(s·Ts)", "Nyquist frequency π/Ts"]) expect(t).toContain(words);
+    expect(t).toContain("Minimal : a realisation of the least possible order n");
+    expect(t).toContain("balanced realisation");
+  });
+});
+
+describe("ImplementationView", () => {
+  const loop = unityFeedback("2*(s + 1)/(s*(s + 3))");
+  const render = (block: string | null, ts: number) => {
+    const request = { ...DEFAULT_IMPLEMENT_REQUEST, block, ts };
+    const view = implementationView(reduced(loop), request, { input: "r", output: "y", bandwidth: 2, values: {} });
+    return text(renderToStaticMarkup(<ImplementationView view={view} request={request} pair="r → y" onRequest={() => {}} />));
+  };
+
+  it("shows H(z⁻¹), the coefficients to 17 digits, the listings with copy buttons and the matrices with downloads", () => {
+    // By hand with s = 200(z − 1)/(z + 1): G = 2(s + 1)/(s(s + 3)) → 2(201z − 199)(z + 1)/(200(z − 1)(203z − 197)),
+    // so b0 = 402/40600 and a1 = −(200·197 + 200·203)/40600 = −80000/40600.
+    const t = render("g", 0.01);
+    expect(t).toContain("Discrete equivalent: Tustin (bilinear), Ts = 0.01 s");
+    const row = /power of z⁻¹ numerator b denominator a 0 (\S+) 1\.0000000000000000 1 \S+ (\S+)/.exec(t);
+    expect(Math.abs(Number(row?.[1]) - 402 / 40600)).toBeLessThan(1e-18);
+    expect(Math.abs(Number(row?.[2]) + 80000 / 40600)).toBeLessThan(1e-15);
+    for (const words of ["Copy difference equation", "Copy C code", "double g_step(double u)", "Download matrices (CSV)", "Download matrices (JSON)", "The controllable canonical form, order 2."]) expect(t).toContain(words);
+    expect(t).toContain("2π/Ts is 314 times the closed-loop bandwidth 2 rad/s of r → y");
+  });
+
+  it("warns about a long Ts against the bandwidth, and refuses what cannot be done in words", () => {
+    expect(render("g", 1)).toContain("Ts = 1 s is too large for the loop");
+    expect(render("e", 0.01)).toContain('The summing junction "e" has no transfer of its own to implement');
   });
 });
 
