@@ -43,24 +43,24 @@ const CASES: Case[] = [
 
 /** Warm-up and measuring spans: small diagrams need many runs before the JIT has optimised the hot paths. */
 const WARM_MS = 1_000;
-const MEASURE_MS = 500;
+const MEASURE_MS = 4_000;
 
 /**
- * Best time of each variant over runs of its own (at least `runs`, and for MEASURE_MS), after rounds that take every
- * variant in turn for WARM_MS to warm up the JIT (not counted). The best, not the median: other work on a shared
- * machine only ever adds time.
+ * Best time of each variant, after rounds that warm up the JIT (not counted), over rounds that take every variant in
+ * turn for MEASURE_MS (at least `runs` rounds), so a busy spell on a shared machine hits all of them alike. The
+ * best, not the median: other work only ever adds time.
  */
 function timeEach(runs: number, variants: (() => void)[]): number[] {
   for (const warmStart = performance.now(); performance.now() - warmStart < WARM_MS; ) for (const work of variants) work();
-  return variants.map((work) => {
-    let best = Infinity;
-    for (let i = 0, start = performance.now(); i < runs || performance.now() - start < MEASURE_MS; i++) {
+  const best = variants.map(() => Infinity);
+  for (let round = 0, start = performance.now(); round < runs || performance.now() - start < MEASURE_MS; round++) {
+    variants.forEach((work, i) => {
       const t0 = performance.now();
       work();
-      best = Math.min(best, performance.now() - t0);
-    }
-    return best;
-  });
+      best[i] = Math.min(best[i], performance.now() - t0);
+    });
+  }
+  return best;
 }
 
 /** Child-process side: time our three variants of one case and report them as JSON on stdout. */
