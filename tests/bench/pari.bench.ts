@@ -1,10 +1,11 @@
-import { spawn, spawnSync } from "node:child_process";
+import { spawnSync } from "node:child_process";
 import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import { cpus, tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { reduceDocument, reduceDocumentExact } from "@shared/reduce/reduceDiagram";
-import { benchDiagram, type BenchFamily } from "./diagrams";
+import { caseName, caseOf, docOf, runCase, type Case } from "./cases";
+import { median, powerLawExponent } from "./figures";
 import { pariMissing, PariTimeout, runPari, type PariAnswer } from "../support/pari";
 
 /**
@@ -18,12 +19,6 @@ import { pariMissing, PariTimeout, runPari, type PariAnswer } from "../support/p
 const LIMIT_MS = 120_000;
 const PROCESS_RUNS = 3;
 const SELF = fileURLToPath(import.meta.url);
-
-interface Case {
-  family: BenchFamily;
-  blocks: number;
-  symbolic: boolean;
-}
 
 /** Best of warm runs, in ms, and our printed transfer and χ for the exact comparison. */
 interface OursFigures {
@@ -45,36 +40,32 @@ const CASES: Case[] = [
   ...(["ladder", "nested"] as const).map((family) => ({ family, blocks: 30, symbolic: true })),
 ];
 
-const caseName = (c: Case) => `${c.family}:${c.blocks}${c.symbolic ? ":sym" : ""}`;
-const docOf = (c: Case) => benchDiagram(c.family, c.blocks, { symbolic: c.symbolic });
-const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 
 /** Warm-up and measuring spans: small diagrams need many runs before the JIT has optimised the hot paths. */
 const WARM_MS = 1_000;
-const MEASURE_MS = 500;
+const MEASURE_MS = 4_000;
 
 /**
- * Best time of each variant over runs of its own (at least `runs`, and for MEASURE_MS), after rounds that take every
- * variant in turn for WARM_MS to warm up the JIT (not counted). The best, not the median: other work on a shared
- * machine only ever adds time.
+ * Best time of each variant, after rounds that warm up the JIT (not counted), over rounds that take every variant in
+ * turn for MEASURE_MS (at least `runs` rounds), so a busy spell on a shared machine hits all of them alike. The
+ * best, not the median: other work only ever adds time.
  */
 function timeEach(runs: number, variants: (() => void)[]): number[] {
   for (const warmStart = performance.now(); performance.now() - warmStart < WARM_MS; ) for (const work of variants) work();
-  return variants.map((work) => {
-    let best = Infinity;
-    for (let i = 0, start = performance.now(); i < runs || performance.now() - start < MEASURE_MS; i++) {
+  const best = variants.map(() => Infinity);
+  for (let round = 0, start = performance.now(); round < runs || performance.now() - start < MEASURE_MS; round++) {
+    variants.forEach((work, i) => {
       const t0 = performance.now();
       work();
-      best = Math.min(best, performance.now() - t0);
-    }
-    return best;
-  });
+      best[i] = Math.min(best[i], performance.now() - t0);
+    });
+  }
+  return best;
 }
 
 /** Child-process side: time our three variants of one case and report them as JSON on stdout. */
 function measureCase(name: string): void {
-  const [family, blocks, sym] = name.split(":");
-  const doc = docOf({ family: family as BenchFamily, blocks: Number(blocks), symbolic: sym === "sym" });
+  const doc = docOf(caseOf(name));
   const printed = reduceDocument(doc);
   if (!printed.ok) {
     process.stdout.write(JSON.stringify({ error: printed.problems.map((p) => p.code).join(", ") }));
@@ -98,24 +89,10 @@ function measureCase(name: string): void {
   process.stdout.write(JSON.stringify(figures));
 }
 
-function runOurs(c: Case): Promise<OursFigures | string> {
-  return new Promise((resolve) => {
-    const child = spawn(process.execPath, [...process.execArgv, SELF, "--case", caseName(c)], { stdio: ["ignore", "pipe", "pipe"] });
-    let out = "";
-    let err = "";
-    const timer = setTimeout(() => child.kill("SIGKILL"), LIMIT_MS);
-    child.stdout.on("data", (d: Buffer) => (out += d.toString()));
-    child.stderr.on("data", (d: Buffer) => (err += d.toString()));
-    child.on("close", (code, signal) => {
-      clearTimeout(timer);
-      if (signal) resolve("over the time limit");
-      else if (code !== 0) resolve(`failed: ${err.trim().split("\n")[0]}`);
-      else {
-        const figures = JSON.parse(out) as OursFigures;
-        resolve(figures.error ? `refused: ${figures.error}` : figures);
-      }
-    });
-  });
+async function runOurs(c: Case): Promise<OursFigures | string> {
+  const figures = await runCase<OursFigures>(SELF, c, LIMIT_MS);
+  if (figures === "timeout") return "over the time limit";
+  return typeof figures === "string" ? figures : figures.error ? `refused: ${figures.error}` : figures;
 }
 
 /** Median wall time of the compiled CLI on the case's file (node start-up, reading, reducing, printing JSON). */
@@ -149,17 +126,6 @@ const fmt = (ms: number | null | undefined) =>
   ms === null || ms === undefined || !Number.isFinite(ms) ? "-" : ms < 10 ? ms.toFixed(2) : ms < 100 ? ms.toFixed(1) : ms.toFixed(0);
 const pad = (s: string, n: number) => s.padStart(n);
 
-/** Least-squares slope of log(time) against log(blocks). */
-function growthExponent(points: { blocks: number; ms: number }[]): number {
-  const xs = points.map((p) => Math.log(p.blocks));
-  const ys = points.map((p) => Math.log(p.ms));
-  const mx = xs.reduce((a, b) => a + b, 0) / xs.length;
-  const my = ys.reduce((a, b) => a + b, 0) / ys.length;
-  const sxy = xs.reduce((a, x, i) => a + (x - mx) * (ys[i] - my), 0);
-  const sxx = xs.reduce((a, x) => a + (x - mx) ** 2, 0);
-  return sxy / sxx;
-}
-
 interface Row {
   c: Case;
   ours: OursFigures | null;
@@ -186,8 +152,8 @@ function printTargets(rows: Row[]): void {
     const numeric = rows.filter((r) => r.c.family === family && !r.c.symbolic);
     const oursPts = numeric.filter((r) => r.ours).map((r) => ({ blocks: r.c.blocks, ms: r.ours!.exactMs }));
     const pariPts = numeric.filter((r) => pariMs(r) !== null).map((r) => ({ blocks: r.c.blocks, ms: pariMs(r)! }));
-    const eo = oursPts.length >= 2 ? growthExponent(oursPts) : NaN;
-    const ep = pariPts.length >= 2 ? growthExponent(pariPts) : NaN;
+    const eo = oursPts.length >= 2 ? powerLawExponent(oursPts) : NaN;
+    const ep = pariPts.length >= 2 ? powerLawExponent(pariPts) : NaN;
     const ok = Number.isFinite(eo) && Number.isFinite(ep) ? eo <= ep + 0.05 : null;
     console.log(`  growth of ${family}s 60→500 (time ∝ blocks^k) no steeper than PARI's: k = ${eo.toFixed(2)} vs ${ep.toFixed(2)} → ${verdict(ok)}`);
   }

@@ -1,9 +1,9 @@
-import { spawn } from "node:child_process";
 import { existsSync, mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import type { DiagramDocument } from "@shared/diagram/schema";
+import { runChild } from "./childRun";
 
 /**
  * The one way benchmarks run the PARI/GP reference (tests/reference/pari_reduce.gp, Debian's pari-gp): the document
@@ -102,29 +102,14 @@ export function runPari(doc: DiagramDocument, opts: PariOptions): Promise<PariAn
   const data = join(dir, "diagram.gp");
   writeFileSync(data, gpInput(doc, opts));
   const limit = opts.timeoutMs ?? 120_000;
-  return new Promise<PariAnswer>((resolve, reject) => {
-    const started = performance.now();
-    // -q: no banner; -f: no gprc; parisizemax: the stack may grow to 2 GB (not stop at 8 MB), debugmem=0: silently.
-    const child = spawn(GP, ["-q", "-f", "-D", "parisizemax=2G", "-D", "debugmem=0", data, PARI_SCRIPT], { stdio: ["ignore", "pipe", "pipe"] });
-    let out = "";
-    let err = "";
-    const timer = setTimeout(() => {
-      child.kill("SIGKILL");
-      reject(new PariTimeout(`${PARI_SCRIPT} exceeded ${limit} ms`));
-    }, limit);
-    child.stdout.on("data", (d: Buffer) => (out += d.toString()));
-    child.stderr.on("data", (d: Buffer) => (err += d.toString()));
-    child.on("error", (e) => {
-      clearTimeout(timer);
-      reject(e);
-    });
-    child.on("close", (code, signal) => {
-      const processMs = performance.now() - started;
-      clearTimeout(timer);
-      if (signal) return; // killed by the timer, already rejected
-      const line = out.trim().split("\n").pop() ?? "";
-      if (code !== 0 || !line.startsWith("{")) return reject(new Error(`gp failed (exit ${code}): ${(err || out).trim().slice(-400)}`));
-      resolve({ ...(JSON.parse(line) as Omit<PariAnswer, "processMs">), processMs });
-    });
-  }).finally(() => rmSync(dir, { recursive: true, force: true }));
+  // -q: no banner; -f: no gprc; parisizemax: the stack may grow to 2 GB (not stop at 8 MB), debugmem=0: silently.
+  const args = ["-q", "-f", "-D", "parisizemax=2G", "-D", "debugmem=0", data, PARI_SCRIPT];
+  const timeout = () => new PariTimeout(`${PARI_SCRIPT} exceeded ${limit} ms`);
+  return runChild(GP, args, { timeoutMs: limit, timeout })
+    .then(({ code, stdout, stderr, ms }) => {
+      const line = stdout.trim().split("\n").pop() ?? "";
+      if (code !== 0 || !line.startsWith("{")) throw new Error(`gp failed (exit ${code}): ${(stderr || stdout).trim().slice(-400)}`);
+      return { ...(JSON.parse(line) as Omit<PariAnswer, "processMs">), processMs: ms };
+    })
+    .finally(() => rmSync(dir, { recursive: true, force: true }));
 }
