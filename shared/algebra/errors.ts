@@ -8,7 +8,9 @@ export type AlgebraErrorCode =
   | "missing-parameter" // numeric evaluation without a value for a parameter
   | "not-univariate" // a one-parameter routine got s or several parameters
   | "bad-number" // a numeric literal that is not a finite decimal or p/q
-  | "size-limit"; // an expression whose exact numbers or terms would grow past the limits (sizeLimits.ts)
+  | "size-limit" // an expression whose exact numbers or terms would grow past the limits (sizeLimits.ts)
+  | "too-complex" // the reduction's time limit passed inside the arithmetic (see timeGuard.ts)
+  | "gcd-time-limit"; // a gcd in several variables ran past the gcd fallback's own time budget
 
 export class AlgebraError extends Error {
   readonly code: AlgebraErrorCode;

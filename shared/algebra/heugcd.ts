@@ -1,4 +1,5 @@
 // Own heuristic multivariate gcd on BigInt: nerdamer/mathjs are too slow and inexact for the reduction hot path.
+import { checkClock } from "@shared/algebra/timeGuard";
 import { zContentInt, zDivExact, zDivInt, zLeadNum, zMake, zNormSign, zScale, zAdd, zSub, type ZPoly, type ZRec } from "@shared/algebra/zpoly";
 
 const ATTEMPTS = 6;
@@ -19,6 +20,7 @@ export function heuristicGcd(a: ZRec, b: ZRec, gcd: (x: ZPoly, y: ZPoly) => ZPol
   const rb = ratio(nb, b);
   let xi = max(min(bound, 99n * isqrt(bound)), 2n * min(ra, rb) + 2n);
   for (let i = 0; i < ATTEMPTS; i++) {
+    checkClock();
     const h = gcd(evalAt(a, xi), evalAt(b, xi));
     const candidate = primitiveInMain(interpolate(h, xi, a.v), gcd);
     if (candidate !== null && zDivExact(a, candidate) !== null && zDivExact(b, candidate) !== null) return candidate;
@@ -52,7 +54,10 @@ function maxNorm(a: ZPoly): bigint {
 /** a with its main variable replaced by ξ (Horner). */
 function evalAt(a: ZRec, xi: bigint): ZPoly {
   let acc: ZPoly = 0n;
-  for (let i = a.c.length - 1; i >= 0; i--) acc = zAdd(zScale(acc, xi), a.c[i]);
+  for (let i = a.c.length - 1; i >= 0; i--) {
+    checkClock();
+    acc = zAdd(zScale(acc, xi), a.c[i]);
+  }
   return acc;
 }
 
@@ -71,6 +76,7 @@ function symmetricMod(h: ZPoly, xi: bigint): ZPoly {
 function interpolate(h: ZPoly, xi: bigint, v: string): ZPoly {
   const digits: ZPoly[] = [];
   while (h !== 0n) {
+    checkClock();
     const g = symmetricMod(h, xi);
     digits.push(g);
     const next = zDivInt(zSub(h, g), xi);

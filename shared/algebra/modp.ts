@@ -25,8 +25,15 @@ function isPrime(n: number): boolean {
   return true;
 }
 
-/** a·b mod p. Example: mulMod(3, 5, 7) === 1. */
-export const mulMod = (a: number, b: number, p: number): number => (a * b) % p;
+/**
+ * a·b mod p for residues a, b. The product is exact in a double; its quotient is taken by a floating division and
+ * corrected, several times faster than the `%` of doubles. Example: mulMod(3, 5, 7) === 1.
+ */
+export function mulMod(a: number, b: number, p: number): number {
+  const x = a * b;
+  const r = x - p * Math.floor(x / p);
+  return r < 0 ? r + p : r >= p ? r - p : r;
+}
 
 /** Inverse of a non-zero residue. Example: invMod(3, 7) === 5. */
 export function invMod(a: number, p: number): number {
@@ -39,9 +46,11 @@ export function invMod(a: number, p: number): number {
   return t0 < 0 ? t0 + p : t0;
 }
 
-/** Residue of an integer in [0, p). Example: bigMod(-1n, 7) === 6. */
+const SAFE = BigInt(Number.MAX_SAFE_INTEGER);
+
+/** Residue of an integer in [0, p); one that fits a double is reduced as a double. Example: bigMod(-1n, 7) === 6. */
 export function bigMod(a: bigint, p: number): number {
-  const r = Number(a % BigInt(p));
+  const r = a <= SAFE && a >= -SAFE ? Number(a) % p : Number(a % BigInt(p));
   return r < 0 ? r + p : r;
 }
 
@@ -90,6 +99,9 @@ function evalFull(a: ZPoly, point: (name: string) => number, p: number): number 
   if (typeof a === "bigint") return bigMod(a, p);
   const x = point(a.v);
   let acc = 0;
-  for (let i = a.c.length - 1; i >= 0; i--) acc = (mulMod(acc, x, p) + evalFull(a.c[i], point, p)) % p;
+  for (let i = a.c.length - 1; i >= 0; i--) {
+    acc = mulMod(acc, x, p) + evalFull(a.c[i], point, p);
+    if (acc >= p) acc -= p;
+  }
   return acc;
 }

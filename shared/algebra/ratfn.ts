@@ -6,9 +6,9 @@ import { zSplitFactors } from "@shared/algebra/factor";
 import { polyFromZ, polyMonic, polyZero, type Poly } from "@shared/algebra/poly";
 import { polyToLatex, polyToText, polyToTextAndLatex } from "@shared/algebra/polytext";
 import { q, qDiv, qEquals, qInv, qIsOne, qMul, qOne, qPow, qZero, type Q } from "@shared/algebra/rational";
-import { zGcd, zUnitContent } from "@shared/algebra/zgcd";
+import { zGcd, zGcdSplit, zUnitContent, type GcdSplit } from "@shared/algebra/zgcd";
 import {
-  S, zAdd, zDeg, zEquals, zLeadNum, zMul, zPow, zQuo, zScale, zVarPoly, zVars, type ZPoly,
+  S, zAdd, zDeg, zEquals, zLeadNum, zMul, zOnlyS, zPow, zQuo, zScale, zVarPoly, zVars, type ZPoly,
 } from "@shared/algebra/zpoly";
 import type { ExprNode } from "@shared/expr/ast";
 
@@ -58,15 +58,18 @@ export function ratAdd(a: RatFn, b: RatFn): RatFn {
   const x1 = a.k.n * b.k.d;
   const x2 = b.k.n * a.k.d;
   const k = q(1n, a.k.d * b.k.d);
-  const g = a.d === 1n || b.d === 1n ? 1n : zEquals(a.d, b.d) ? a.d : zGcd(a.d, b.d);
-  const da = zQuo(a.d, g);
-  const db = zQuo(b.d, g);
+  const { g, ca: da, cb: db } = split(a.d, b.d);
   const t = zAdd(zScale(zMul(a.n, db), x1), zScale(zMul(b.n, da), x2));
   if (t === 0n) return ratZero;
   if (g === 1n) return normalised(k, t, zMul(a.d, b.d));
-  const g2 = zGcd(t, g);
-  return normalised(k, zQuo(t, g2), zMul(da, zQuo(b.d, g2)));
+  // b.d / gcd(t, g) = db · (g / gcd(t, g)): a product of known cofactors, not a division.
+  const { ca: n, cb: rest } = zGcdSplit(t, g);
+  return normalised(k, n, zMul(zMul(da, db), rest));
 }
+
+/** gcd with cofactors, without a gcd where one side is 1 or both are equal (common in loops). */
+const split = (x: ZPoly, y: ZPoly): GcdSplit =>
+  x === 1n || y === 1n ? { g: 1n, ca: x, cb: y } : zEquals(x, y) ? { g: x, ca: 1n, cb: 1n } : zGcdSplit(x, y);
 
 /** Negation. Example: ratNeg(1/s) is -1/s. */
 export const ratNeg = (a: RatFn): RatFn => ({ k: { n: -a.k.n, d: a.k.d }, n: a.n, d: a.d });
@@ -74,17 +77,11 @@ export const ratNeg = (a: RatFn): RatFn => ({ k: { n: -a.k.n, d: a.k.d }, n: a.n
 /** Difference. Example: ratSub(s, s) is 0. */
 export const ratSub = (a: RatFn, b: RatFn): RatFn => ratAdd(a, ratNeg(b));
 
-const gcdOrOne = (x: ZPoly, y: ZPoly): ZPoly => (x === 1n || y === 1n ? 1n : zGcd(x, y));
-
 /** Product, cancelling crosswise first so the pieces stay small. Example: ratMul((s+1)/s, s/(s+1)) is 1. */
 export function ratMul(a: RatFn, b: RatFn): RatFn {
   if (a.k.n === 0n || b.k.n === 0n) return ratZero;
-  const g1 = gcdOrOne(a.n, b.d);
-  const g2 = gcdOrOne(b.n, a.d);
-  const n1 = zQuo(a.n, g1);
-  const n2 = zQuo(b.n, g2);
-  const d1 = zQuo(a.d, g2);
-  const d2 = zQuo(b.d, g1);
+  const { ca: n1, cb: d2 } = split(a.n, b.d);
+  const { ca: n2, cb: d1 } = split(b.n, a.d);
   refuseDegree(Math.max(zDeg(n1, S) + zDeg(n2, S), zDeg(d1, S) + zDeg(d2, S))); // degrees add: check before multiplying
   // Quotients of primitive, positive-leading polynomials by such gcds keep both properties: no renormalising.
   return { k: qMul(a.k, b.k), n: zMul(n1, n2), d: zMul(d1, d2) };
@@ -113,6 +110,8 @@ export function ratPow(a: RatFn, e: number): RatFn {
 }
 
 export const ratIsZero = (a: RatFn): boolean => a.k.n === 0n;
+/** True when no parameter occurs. Example: ratOnlyS(1/(s + 1)) === true, ratOnlyS(K/s) === false. */
+export const ratOnlyS = (a: RatFn): boolean => zOnlyS(a.n) && zOnlyS(a.d);
 export const ratIsOne = (a: RatFn): boolean => qIsOne(a.k) && a.n === 1n && a.d === 1n;
 /** Exact equality of values (the representation is canonical). Example: ratEquals(ratAdd(x, x), ratMul(2, x)). */
 export const ratEquals = (a: RatFn, b: RatFn): boolean => qEquals(a.k, b.k) && zEquals(a.n, b.n) && zEquals(a.d, b.d);

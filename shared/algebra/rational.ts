@@ -10,13 +10,38 @@ export interface Q {
 
 const SAFE = 9007199254740991n;
 
-/** Non-negative gcd of two integers. Example: bigGcd(-12n, 18n) === 6n. */
+/** Bits of |x|, or one more (a double's logarithm where the double is finite: far cheaper than printing it). */
+function bitLength(x: bigint): number {
+  if (x < 0n) x = -x;
+  const approx = Number(x);
+  return approx < Infinity ? Math.floor(Math.log2(approx)) + 1 : x.toString(16).length * 4;
+}
+
+/**
+ * Non-negative gcd of two integers. Large ones by Lehmer's method: Euclid's steps are run on the leading 48 bits
+ * in doubles while they are sure to match the full numbers' (Knuth's Algorithm L), then applied to the BigInts at
+ * once as one 2×2 matrix: a few BigInt products replace dozens of BigInt divisions (printing a 500-block result
+ * takes a gcd of hundreds-of-digit numbers per coefficient). Example: bigGcd(-12n, 18n) === 6n.
+ */
 export function bigGcd(a: bigint, b: bigint): bigint {
   if (a < 0n) a = -a;
   if (b < 0n) b = -b;
+  if (a < b) [a, b] = [b, a];
   while (b !== 0n) {
-    if (a <= SAFE && b <= SAFE) return BigInt(numGcd(Number(a), Number(b)));
-    [a, b] = [b, a % b];
+    if (a <= SAFE) return BigInt(numGcd(Number(a), Number(b)));
+    const shift = BigInt(bitLength(a) - 48); // leading bits < 2^48: every sum and product below stays exact
+    let x = Number(a >> shift);
+    let y = Number(b >> shift);
+    let [A, B, C, D] = [1, 0, 0, 1];
+    while (y + C !== 0 && y + D !== 0) {
+      const q = Math.floor((x + A) / (y + C));
+      if (q !== Math.floor((x + B) / (y + D))) break;
+      [A, C] = [C, A - q * C];
+      [B, D] = [D, B - q * D];
+      [x, y] = [y, x - q * y];
+    }
+    if (B === 0) [a, b] = [b, a % b]; // no step was sure: one full division
+    else [a, b] = [BigInt(A) * a + BigInt(B) * b, BigInt(C) * a + BigInt(D) * b];
   }
   return a;
 }
@@ -117,8 +142,6 @@ export function qFromString(text: string): Q {
 export function qToString(a: Q): string {
   return a.d === 1n ? a.n.toString() : `${a.n}/${a.d}`;
 }
-
-const bitLength = (x: bigint): number => (x < 0n ? -x : x).toString(2).length;
 
 /** The exact rational value of a finite double (its binary mantissa times a power of 2). Example: qFromDouble(0.75) is 3/4. */
 export function qFromDouble(x: number): Q {

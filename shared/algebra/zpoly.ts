@@ -1,5 +1,6 @@
 // Own exact polynomial code on BigInt: nerdamer/mathjs are too slow and not exact enough for the reduction hot path.
 import { bigGcd } from "@shared/algebra/rational";
+import { checkClock } from "@shared/algebra/timeGuard";
 
 /**
  * Polynomials with integer coefficients in s and the diagram's parameters, stored recursively: an integer, or a
@@ -97,6 +98,7 @@ function convolve(A: readonly ZPoly[], B: readonly ZPoly[]): ZPoly[] {
   if (allInt(A) && allInt(B)) {
     const c: bigint[] = new Array(A.length + B.length - 1).fill(0n);
     for (let i = 0; i < A.length; i++) {
+      checkClock();
       const ai = A[i];
       if (ai === 0n) continue;
       for (let j = 0; j < B.length; j++) c[i + j] += ai * B[j];
@@ -105,6 +107,7 @@ function convolve(A: readonly ZPoly[], B: readonly ZPoly[]): ZPoly[] {
   }
   const c: ZPoly[] = new Array(A.length + B.length - 1).fill(0n);
   for (let i = 0; i < A.length; i++) {
+    checkClock();
     if (A[i] === 0n) continue;
     for (let j = 0; j < B.length; j++) c[i + j] = zAdd(c[i + j], zMul(A[i], B[j]));
   }
@@ -235,6 +238,7 @@ function divCoeffs(A: readonly ZPoly[], B: readonly ZPoly[]): ZPoly[] | null {
     return Q;
   }
   for (let k = da - db; k >= 0; k--) {
+    checkClock();
     const t = zDivExact(R[k + db], lb);
     if (t === null) return null;
     Q[k] = t;
@@ -249,6 +253,9 @@ export function zDerivS(a: ZPoly): ZPoly {
   const c = zCoeffsS(a);
   return zMake(S, c.slice(1).map((x, i) => zScale(x, BigInt(i + 1))));
 }
+
+/** True when no variable but s occurs (no parameter). Example: zOnlyS(2*s + 1) === true, zOnlyS(K*s) === false. */
+export const zOnlyS = (a: ZPoly): boolean => typeof a === "bigint" || (a.v === S && allInt(a.c));
 
 /** Names of the variables that occur. Example: zVars(K*s) is {"s", "K"}. */
 export function zVars(a: ZPoly, into: Set<string> = new Set()): Set<string> {

@@ -1,10 +1,19 @@
 import type { ExprNode } from "@shared/expr/ast";
 import { BLOCK_KINDS, hasExpression } from "@shared/diagram/blockKinds";
+import { boundedMemo } from "@shared/expr/boundedMemo";
 import { exprDegreeBound } from "@shared/expr/degree";
 import { inDecimalRange, MAX_DECIMAL_EXPONENT } from "@shared/expr/decimal";
-import { parseExpression } from "@shared/expr/parse";
+import { parseExpression, type ParseResult } from "@shared/expr/parse";
 import type { Problem } from "@shared/diagram/problems";
 import { LIMITS, type DiagramDocument } from "@shared/diagram/schema";
+
+const SEP = "\u0000"; // never in an expression or a parameter name
+
+/** Block expressions parsed once per text, kind and parameter list (a diagram repeats them; an edit changes few). */
+const parseBlockExpression = boundedMemo(4000, (key: string): ParseResult => {
+  const [allowS, sRefusal, parameters, text] = key.split(SEP);
+  return parseExpression(text, { allowS: allowS === "s", sRefusal: sRefusal || undefined, parameters: parameters ? parameters.split(",") : [] });
+});
 
 /**
  * Parses every block expression against the declared parameters and checks the cheap
@@ -16,14 +25,14 @@ import { LIMITS, type DiagramDocument } from "@shared/diagram/schema";
 export function expressionProblems(doc: DiagramDocument): { problems: Problem[]; expressions: Map<string, ExprNode> } {
   const problems: Problem[] = [];
   const expressions = new Map<string, ExprNode>();
-  const parameters = Object.keys(doc.parameters ?? {});
+  const parameters = Object.keys(doc.parameters ?? {}).join(",");
   let degree = 0;
   for (const block of doc.blocks) {
     const fixed = BLOCK_KINDS[block.type].fixedTransfer;
     if (fixed) degree += exprDegreeBound(fixed);
     if (!hasExpression(block)) continue;
     const { mayContainS, sRefusal } = BLOCK_KINDS[block.type].expression;
-    const parsed = parseExpression(block.expr, { allowS: mayContainS, sRefusal, parameters });
+    const parsed = parseBlockExpression([mayContainS ? "s" : "", sRefusal ?? "", parameters, block.expr].join(SEP));
     if (!parsed.ok) {
       for (const { code, message, position } of parsed.errors) {
         problems.push({ severity: "error", code, message: `Block "${block.id}", expr: ${message}`, blockId: block.id, field: "expr", position });

@@ -1,3 +1,4 @@
+import { boundedMemo } from "@shared/expr/boundedMemo";
 import { lexExpression } from "@shared/expr/lexer";
 import { parseExpression } from "@shared/expr/parse";
 import type { ExprNode } from "@shared/expr/ast";
@@ -116,21 +117,6 @@ function textFactor(node: ExprNode, denominator = false): string {
   const loose =
     isSum(node) || node.kind === "neg" || node.kind === "div" || (node.kind === "num" && node.den !== 1n) || (denominator && node.kind === "mul");
   return loose ? `(${text})` : text;
-}
-
-/**
- * `compute` remembered for the last `limit` keys (oldest dropped first): a diagram repeats few expressions, so
- * each is parsed or typeset once per page. Example: boundedMemo(2, f)("a") calls f("a") once however often asked.
- */
-export function boundedMemo<V>(limit: number, compute: (key: string) => V): (key: string) => V {
-  const kept = new Map<string, V>();
-  return (key) => {
-    if (kept.has(key)) return kept.get(key) as V;
-    const value = compute(key);
-    if (kept.size >= limit) kept.delete(kept.keys().next().value as string);
-    kept.set(key, value);
-    return value;
-  };
 }
 
 /** The tree of a block expression as typed; names count whether declared or not (validation reports those). */

@@ -36,10 +36,11 @@ export function checkLoops(
     loopDeterminants(graph.subgraph(ids), ratField, budget, weighRat).map(({ nodes, det }) => ({ nodes, factors: [det] }));
   const loops = apart(inLoops.filter((id) => !onPath.has(id)));
   const nodes = inLoops.filter((id) => onPath.has(id));
-  let group: FactoredLoop | null = first?.pivots && nodes.length > 0 ? { nodes, factors: first.pivots } : null;
-  if (group && loopProblems([group], gains).length > 0) {
+  const group: FactoredLoop | null = first?.pivots && nodes.length > 0 ? { nodes, factors: first.pivots } : null;
+  const groupProblems = group ? loopProblems([group], gains) : [];
+  if (group && groupProblems.length > 0) {
     loops.unshift(...apart(nodes));
-    group = null;
+    return { group: null, loops, problems: loopProblems(loops, gains) };
   }
-  return { group, loops, problems: loopProblems(group ? [group, ...loops] : loops, gains) };
+  return { group, loops, problems: [...groupProblems, ...loopProblems(loops, gains)] };
 }

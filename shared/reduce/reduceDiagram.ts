@@ -12,7 +12,7 @@ import { weighRat } from "@shared/reduce/ratView";
 import { listBlocks } from "@shared/reduce/wellPosed";
 import { buildSignalGraph } from "@shared/reduce/build";
 import { wellFormedLoopProblems } from "@shared/reduce/wellFormedLoops";
-import { createBudget, ReductionLimitError } from "@shared/reduce/budget";
+import { createBudget, ReductionLimitError, withinLimits, type Limits } from "@shared/reduce/budget";
 import { SingularLoopError } from "@shared/reduce/dense";
 import type { SignalFlowGraph } from "@shared/reduce/graph";
 import { printReduction } from "@shared/reduce/printReduction";
@@ -25,8 +25,10 @@ export interface ReduceOptions {
   input?: string;
   /** Only pairs with this output block. */
   output?: string;
-  /** Work limits (defaults: 2,000,000 new edges, 30 s). */
-  limits?: { maxEdges?: number; timeLimitMs?: number };
+  /** Work limits (defaults: 2,000,000 new edges, 30 s in all, 5 s for each gcd in several variables). */
+  limits?: Partial<Limits>;
+  /** false: no steps are recorded (steps: []), for callers that need only the values. */
+  trace?: boolean;
 }
 
 /** One (input, output) pair's closed-loop transfer, exact. */
@@ -68,9 +70,14 @@ const isError = (p: Problem) => p.severity === "error";
  * Improper blocks (deg num > deg den, e.g. a PD controller "K*(s+1)") are reduced like any other; a loop whose
  * return difference vanishes as s → ∞ is refused ("improper-loop") only when all its blocks are proper.
  * Refused for a wrong pair id or a gain that cannot be formed, it still names the loop problems of the rest.
+ * A reduction that runs past its time limit, even inside one long expansion or gcd, ends with a problem naming it.
  * Example: reduceDiagram(parsed).reduction.transfers[0].gain is K·(s + 2)/(s² + …) for the spindle loop.
  */
 export function reduceDiagram(diagram: ParsedDiagram, opts: ReduceOptions = {}): ExactOutcome {
+  return withinLimits(opts.limits, () => reduceParsed(diagram, opts));
+}
+
+function reduceParsed(diagram: ParsedDiagram, opts: ReduceOptions): ExactOutcome {
   const { doc } = diagram;
   const selection = selectPairs(doc, opts);
   const found = [...diagram.warnings, ...selection.problems];
@@ -92,8 +99,12 @@ export function reduceDiagram(diagram: ParsedDiagram, opts: ReduceOptions = {}):
  * Example: reduceDocumentExact(json).reduction.transfers[0].gain is K·(s + 2)/(s² + …) for the spindle loop.
  */
 export function reduceDocumentExact(raw: unknown, opts: ReduceOptions = {}): ExactOutcome {
+  return withinLimits(opts.limits, () => reduceRaw(raw, opts));
+}
+
+function reduceRaw(raw: unknown, opts: ReduceOptions): ExactOutcome {
   const parsed = parseDiagram(raw);
-  if (parsed.ok) return reduceDiagram(parsed.diagram, opts);
+  if (parsed.ok) return reduceParsed(parsed.diagram, opts);
   if (!parsed.doc) return { ok: false, problems: parsed.problems };
   // Name a wrong pair id together with the validation problems, as one answer.
   const found = [...parsed.problems, ...selectPairs(parsed.doc, opts).problems];
@@ -136,7 +147,7 @@ function reduceChecked(
   const budget = createBudget(opts.limits);
   let reduced: ReturnType<typeof reducePairs<RatFn>>;
   try {
-    reduced = reducePairs(graph, ratField, pairs, budget, { determinant: true, weigh: weighRat });
+    reduced = reducePairs(graph, ratField, pairs, budget, { determinant: true, weigh: weighRat, trace: opts.trace });
   } catch (err) {
     // A singular loop on a pair's paths: name it through the loop-by-loop check.
     const named = err instanceof SingularLoopError ? checkLoops(graph, gains, undefined, budget).problems : [];

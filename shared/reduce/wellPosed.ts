@@ -2,7 +2,7 @@ import { polyCoeffsS, polyConst, polyGcd, polyLeading, polyParams, type Poly } f
 import { qOne } from "@shared/algebra/rational";
 import { polyToText } from "@shared/algebra/polytext";
 import {
-  ratDegrees, ratDenominator, ratDiv, ratField, ratIsZero, ratNumerator, ratReduceTracked, type RatFn,
+  ratDegrees, ratDenominator, ratDiv, ratField, ratIsZero, ratNumerator, ratOnlyS, ratReduceTracked, type RatFn,
 } from "@shared/algebra/ratfn";
 import { polyParamRoots } from "@shared/algebra/roots";
 import { ratAtZero } from "@shared/algebra/substitute";
@@ -59,8 +59,8 @@ const content = (p: Poly): Poly => (polyParams(p).length === 0 ? ONE : polyCoeff
  */
 function shape(factors: readonly RatFn[]) {
   const order = factors.reduce((n, f) => n + ratDegrees(f).num - ratDegrees(f).den, 0);
+  if (factors.every(ratOnlyS)) return { order, params: null };
   const parts = factors.map((f) => [ratNumerator(f), ratDenominator(f)] as const);
-  if (parts.every(([num, den]) => polyParams(num).length === 0 && polyParams(den).length === 0)) return { order, params: null };
   const leads = parts.map(([num, den]) => ratio(polyLeading(num), polyLeading(den)));
   const contents = parts.map(([num, den]) => ratio(content(num), content(den)));
   return { order, params: { lead: fieldProduct(ratField, leads), content: fieldProduct(ratField, contents) } };

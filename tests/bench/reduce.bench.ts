@@ -1,8 +1,9 @@
-import { spawn } from "node:child_process";
 import { cpus } from "node:os";
 import { fileURLToPath } from "node:url";
 import { reduceDocument } from "@shared/reduce/reduceDiagram";
-import { benchDiagram, type BenchFamily } from "./diagrams";
+import type { BenchFamily } from "./diagrams";
+import { caseOf, docOf, runCase, type Case } from "./cases";
+import { median, powerLawExponent } from "./figures";
 import { sympyBench, SympyTimeout, type SympyMethod } from "../support/sympy";
 
 /**
@@ -15,12 +16,6 @@ import { sympyBench, SympyTimeout, type SympyMethod } from "../support/sympy";
  */
 const LIMIT_MS = 120_000;
 const SELF = fileURLToPath(import.meta.url);
-
-interface Case {
-  family: BenchFamily;
-  blocks: number;
-  symbolic: boolean;
-}
 
 interface OursFigures {
   medianMs: number;
@@ -38,21 +33,18 @@ const CASES: Case[] = [
   ...(["ladder", "nested"] as const).flatMap((family) => [10, 30].map((blocks) => ({ family, blocks, symbolic: true }))),
 ];
 
-const caseName = (c: Case) => `${c.family}:${c.blocks}${c.symbolic ? ":sym" : ""}`;
-const docOf = (c: Case) => benchDiagram(c.family, c.blocks, { symbolic: c.symbolic });
 
 /** Degree in s of a polynomial written in the result syntax (bench display only). */
 const degreeOf = (poly: string): number =>
   Math.max(/\bs\b/.test(poly) ? 1 : 0, ...[...poly.matchAll(/\bs\^(\d+)/g)].map((m) => Number(m[1])));
 
-const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 
 /** Child-process side: time our reduction of one case and report figures as JSON on stdout. */
 function measureCase(name: string): void {
-  const [family, blocks, sym] = name.split(":");
-  const doc = docOf({ family: family as BenchFamily, blocks: Number(blocks), symbolic: sym === "sym" });
+  const c = caseOf(name);
+  const doc = docOf(c);
   const startRssMB = process.memoryUsage().rss / 1048576;
-  const runs = Number(blocks) >= 500 ? 3 : 7;
+  const runs = c.blocks >= 500 ? 3 : 7;
   const times: number[] = [];
   let degree = 0;
   let error: string | undefined;
@@ -72,22 +64,7 @@ function measureCase(name: string): void {
   process.stdout.write(JSON.stringify(figures));
 }
 
-function runOurs(c: Case): Promise<OursFigures | "timeout" | string> {
-  return new Promise((resolve) => {
-    const child = spawn(process.execPath, [...process.execArgv, SELF, "--case", caseName(c)], { stdio: ["ignore", "pipe", "pipe"] });
-    let out = "";
-    let err = "";
-    const timer = setTimeout(() => child.kill("SIGKILL"), LIMIT_MS);
-    child.stdout.on("data", (d: Buffer) => (out += d.toString()));
-    child.stderr.on("data", (d: Buffer) => (err += d.toString()));
-    child.on("close", (code, signal) => {
-      clearTimeout(timer);
-      if (signal) resolve("timeout");
-      else if (code !== 0) resolve(`failed: ${err.trim().split("\n")[0]}`);
-      else resolve(JSON.parse(out) as OursFigures);
-    });
-  });
-}
+const runOurs = (c: Case) => runCase<OursFigures>(SELF, c, LIMIT_MS);
 
 type SympyOutcome = { seconds: number; degree: number } | "timeout" | string;
 
@@ -102,17 +79,6 @@ async function runSympy(c: Case, method: SympyMethod): Promise<SympyOutcome> {
 
 const pad = (s: string, n: number) => s.padStart(n);
 const fmtMs = (ms: number) => (ms < 10 ? ms.toFixed(2) : ms < 100 ? ms.toFixed(1) : ms.toFixed(0));
-
-/** Least-squares slope of log(time) against log(blocks). */
-function powerLawExponent(points: { blocks: number; ms: number }[]): number {
-  const xs = points.map((p) => Math.log(p.blocks));
-  const ys = points.map((p) => Math.log(p.ms));
-  const mx = xs.reduce((a, b) => a + b, 0) / xs.length;
-  const my = ys.reduce((a, b) => a + b, 0) / ys.length;
-  const sxy = xs.reduce((a, x, i) => a + (x - mx) * (ys[i] - my), 0);
-  const sxx = xs.reduce((a, x) => a + (x - mx) ** 2, 0);
-  return sxy / sxx;
-}
 
 const cell = (o: SympyOutcome) => (o === "timeout" ? "> limit" : typeof o === "object" ? o.seconds.toFixed(3) : "error");
 const seconds = (o: SympyOutcome) => (typeof o === "object" ? o.seconds : null);

@@ -5,12 +5,19 @@ import { parseReduceArgs } from "@server/tools/cli/args";
 // `--name=value` and `--name value` are the same).
 describe("parseReduceArgs", () => {
   it.each([
-    [["d.json"], { file: "d.json", json: false }],
-    [["--json", "d.json"], { file: "d.json", json: true }],
-    [["d.json", "--input", "r", "--output=y"], { file: "d.json", json: false, input: "r", output: "y" }],
-    [["--", "--odd-name.json"], { file: "--odd-name.json", json: false }],
+    [["d.json"], { file: "d.json", json: false, timing: false }],
+    [["--json", "d.json"], { file: "d.json", json: true, timing: false }],
+    [["d.json", "--input", "r", "--output=y"], { file: "d.json", json: false, timing: false, input: "r", output: "y" }],
+    [["--", "--odd-name.json"], { file: "--odd-name.json", json: false, timing: false }],
+    [["d.json", "--timing", "--json"], { file: "d.json", json: true, timing: true }],
   ])("%j runs", (argv, args) => {
-    expect(parseReduceArgs(argv)).toEqual({ kind: "run", args });
+    expect(parseReduceArgs(argv, { timing: true })).toEqual({ kind: "run", args });
+  });
+
+  it("--timing is an option of reduce only: analyze, which shares the parser, refuses it", () => {
+    const r = parseReduceArgs(["d.json", "--timing"]);
+    expect(r.kind).toBe("usage-error");
+    if (r.kind === "usage-error") expect(r.message).toContain('unknown option "--timing"');
   });
 
   it("--help and -h print the help; an unknown option before them is still an error", () => {

@@ -89,6 +89,26 @@ describe("reduce CLI: success", { timeout: SPAWN_TIMEOUT }, () => {
     expect(cClose(evalTransfer(one.transfers[0], s, { K: 4 }), evalExpr(tc.expected["d→y"], s, { K: 4 }), 1e-10)).toBe(true);
   });
 
+  it("--timing adds timing: { reduceMs, totalMs } to the JSON, the reduction a part of the whole command; the result is unchanged", async () => {
+    const path = file("spindle-timing.json", spindle);
+    const plain = JSON.parse((await reduce(path, "--json")).stdout) as Record<string, unknown>;
+    const run = await reduce(path, "--json", "--timing");
+    expect(run.stderr).toBe("");
+    expect(run.code).toBe(0);
+    const { timing, ...rest } = JSON.parse(run.stdout) as { timing: Record<string, unknown> } & Record<string, unknown>;
+    expect(rest).toEqual(plain);
+    expect(Object.keys(timing).sort()).toEqual(["reduceMs", "totalMs"]);
+    const { reduceMs, totalMs } = timing as { reduceMs: number; totalMs: number };
+    for (const ms of [reduceMs, totalMs]) expect(Number.isFinite(ms) && ms > 0, String(ms)).toBe(true);
+    expect(reduceMs).toBeLessThanOrEqual(totalMs);
+
+    const text = await reduce(path, "--timing");
+    expect(text.code).toBe(0);
+    const line = /^Timing: reduction ([\d.]+) ms, whole command ([\d.]+) ms$/m.exec(text.stdout);
+    expect(line, text.stdout.slice(-200)).not.toBeNull();
+    expect(Number(line![1])).toBeLessThanOrEqual(Number(line![2]));
+  });
+
   it("warnings do not fail the run: they are in the JSON (a block that reaches no output)", async () => {
     const doc = makeDoc(
       [

@@ -1,5 +1,6 @@
-import { spawn, spawnSync } from "node:child_process";
+import { spawnSync } from "node:child_process";
 import { existsSync } from "node:fs";
+import { runChild } from "./childRun";
 
 /**
  * The one way tests and benchmarks run a Python reference: Debian's /usr/bin/python3 (the python3 first on PATH
@@ -59,30 +60,9 @@ export function runPythonSync<T>(program: PythonProgram, input: unknown, timeout
 export function runPython<T>(program: PythonProgram, input: unknown, timeoutMs = 120_000): Promise<T> {
   const missing = missingInterpreter();
   if (missing) return Promise.reject(missing);
-  return new Promise((resolve, reject) => {
-    const child = spawn(SYSTEM_PYTHON, argsOf(program), { stdio: ["pipe", "pipe", "pipe"] });
-    let out = "";
-    let err = "";
-    const timer = setTimeout(() => {
-      child.kill("SIGKILL");
-      reject(new PythonTimeout(`${nameOf(program)} exceeded ${timeoutMs} ms`));
-    }, timeoutMs);
-    child.stdout.on("data", (d: Buffer) => (out += d.toString()));
-    child.stderr.on("data", (d: Buffer) => (err += d.toString()));
-    child.on("error", (e) => {
-      clearTimeout(timer);
-      reject(e);
-    });
-    child.on("close", (code, signal) => {
-      clearTimeout(timer);
-      if (signal) return; // killed by the timer, already rejected
-      if (code !== 0) return reject(failure(program, code, err));
-      try {
-        resolve(parsed<T>(program, out));
-      } catch (e) {
-        reject(e);
-      }
-    });
-    child.stdin.end(JSON.stringify(input));
+  const timeout = () => new PythonTimeout(`${nameOf(program)} exceeded ${timeoutMs} ms`);
+  return runChild(SYSTEM_PYTHON, argsOf(program), { input: JSON.stringify(input), timeoutMs, timeout }).then(({ code, stdout, stderr }) => {
+    if (code !== 0) throw failure(program, code, stderr);
+    return parsed<T>(program, stdout);
   });
 }

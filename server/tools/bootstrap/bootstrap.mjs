@@ -5,7 +5,7 @@ import { spawn, spawnSync } from "node:child_process";
 import { DB, PORTS, ROOT, bin, fail, step } from "./common.mjs";
 import { buildClient, buildCompiled, compiledPath } from "./build.mjs";
 import { ensureDatabase, ensurePostgres, localUrl, migrate } from "./database.mjs";
-import { ensureChromium, ensureNodeModules, ensurePythonReferences } from "./packages.mjs";
+import { ensureChromium, ensureNodeModules, ensurePari, ensurePythonReferences } from "./packages.mjs";
 import { runTests } from "./testRun.mjs";
 
 /** Runs a long-lived child; Ctrl-C stops it and then the database this process started. */
@@ -30,6 +30,7 @@ function serve(cmd, args, env, pg) {
 
 async function bench(only) {
   ensurePythonReferences();
+  ensurePari();
   ensureChromium();
   const pg = await ensurePostgres();
   ensureDatabase(pg, DB.test);

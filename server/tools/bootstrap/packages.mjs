@@ -28,9 +28,29 @@ export function aptInstall(packages, why) {
   run("apt-get", ["install", "-y", "-q", ...packages], `apt-get install ${packages.join(" ")} failed`, { env });
 }
 
+/** Like aptInstall, but a failure is only reported: for references a run can do without. True when installed. */
+function tryAptInstall(packages, why) {
+  if (!isRoot) {
+    step(`${why} is missing and only root can install it (apt-get install -y ${packages.join(" ")}): going on without it`);
+    return false;
+  }
+  step(`Installing ${packages.join(", ")} (${why})…`);
+  const env = { ...process.env, DEBIAN_FRONTEND: "noninteractive" };
+  const apt = (args) => spawnSync("apt-get", args, { stdio: "inherit", env }).status === 0;
+  if (!aptUpdated) aptUpdated = apt(["update", "-q"]);
+  const ok = aptUpdated && apt(["install", "-y", "-q", ...packages]);
+  if (!ok) step(`apt-get install ${packages.join(" ")} failed: going on without ${why}`);
+  return ok;
+}
+
 export function ensurePythonReferences() {
   const probe = spawnSync("/usr/bin/python3", ["-c", "import sympy, scipy, numpy"], { stdio: "ignore" });
   if (probe.status !== 0) aptInstall(["python3-sympy", "python3-scipy", "python3-numpy"], "the Python reference libraries for tests");
+}
+
+/** PARI/GP, the benchmark's second reference; the benchmark skips its column with a note when it cannot be had. */
+export function ensurePari() {
+  if (!existsSync("/usr/bin/gp")) tryAptInstall(["pari-gp"], "PARI/GP for the engine benchmark");
 }
 
 export function ensureChromium() {

@@ -1,22 +1,25 @@
 /**
- * Command line of `reduce`: FILE [--json] [--input ID] [--output ID] [--help]. Usage mistakes are
- * returned (not thrown) so the caller prints them with the usage line and exits 2.
+ * Command line of `reduce`: FILE [--json] [--timing] [--input ID] [--output ID] [--help] (`analyze` shares it
+ * without --timing). Usage mistakes are returned (not thrown) so the caller prints them with the usage line and exits 2.
  */
-export const USAGE = "usage: reduce FILE.json [--json] [--input ID] [--output ID]   (reduce --help for details)";
+export const USAGE = "usage: reduce FILE.json [--json] [--timing] [--input ID] [--output ID]   (reduce --help for details)";
 
 export interface ReduceArgs {
   file: string;
   json: boolean;
+  /** Report how long the reduction and the whole command took. */
+  timing: boolean;
   input?: string;
   output?: string;
 }
 
 export type ParsedArgs = { kind: "help" } | { kind: "run"; args: ReduceArgs } | { kind: "usage-error"; message: string };
 
-export function parseReduceArgs(argv: readonly string[]): ParsedArgs {
+export function parseReduceArgs(argv: readonly string[], opts: { timing?: boolean } = {}): ParsedArgs {
   const files: string[] = [];
   const picked: { input?: string; output?: string } = {};
   let json = false;
+  let timing = false;
   let optionsEnded = false;
   for (let i = 0; i < argv.length; i++) {
     const arg = argv[i];
@@ -30,6 +33,8 @@ export function parseReduceArgs(argv: readonly string[]): ParsedArgs {
       return { kind: "help" };
     } else if (arg === "--json") {
       json = true;
+    } else if (arg === "--timing" && opts.timing) {
+      timing = true;
     } else {
       const m = /^--(input|output)(?:=(.*))?$/.exec(arg);
       if (!m) return { kind: "usage-error", message: `unknown option "${arg}"` };
@@ -44,7 +49,7 @@ export function parseReduceArgs(argv: readonly string[]): ParsedArgs {
   }
   if (files.length === 0) return { kind: "usage-error", message: "no diagram file given" };
   if (files.length > 1) return { kind: "usage-error", message: `one diagram file at a time, got ${files.length}: ${files.join(", ")}` };
-  return { kind: "run", args: { file: files[0], json, ...picked } };
+  return { kind: "run", args: { file: files[0], json, timing, ...picked } };
 }
 
 export const HELP = `reduce — closed-loop transfer functions of a Loopwright diagram, with every reduction step
@@ -54,6 +59,9 @@ ${USAGE}
   FILE.json     a Loopwright diagram document (format "loopwright-diagram", version 1)
   --json        print the result as one JSON object: { transfers, characteristic, characteristicLatex,
                 steps, warnings } (transfers: input, output, numerator, denominator, latex, cancelled)
+  --timing      also report how long it took: with --json the object gets "timing": { "reduceMs", "totalMs" }
+                (reduceMs: from the read document to the exact result, printing excluded; totalMs: the whole
+                command, from the process start to the output ready), otherwise a last line says the same
   --input ID    only the transfers from this input block (and their steps)
   --output ID   only the transfers to this output block (and their steps)
   -h, --help    this text

@@ -41,6 +41,26 @@ describe("exact rationals", () => {
     expect(bigGcd(2n ** 200n * 3n, 2n ** 100n * 9n)).toBe(2n ** 100n * 3n);
   });
 
+  it("bigGcd on large integers equals Euclid's algorithm written out, with planted common factors (fast-check; common practice)", () => {
+    const euclid = (x: bigint, y: bigint): bigint => {
+      [x, y] = [x < 0n ? -x : x, y < 0n ? -y : y];
+      while (y !== 0n) [x, y] = [y, x % y];
+      return x;
+    };
+    const big = (bits: number) => fc.bigInt({ min: -(1n << BigInt(bits)), max: 1n << BigInt(bits) });
+    fc.assert(
+      fc.property(big(3000), big(3000), big(600), (x, y, g) => {
+        for (const [u, v] of [[x, y], [x * g, y * g], [x * g, g], [g, 0n], [0n, y]]) expect(bigGcd(u, v)).toBe(euclid(u, v));
+      }),
+      { numRuns: 300 },
+    );
+    // Consecutive Fibonacci numbers: the longest run of Euclid steps for their size, every quotient 1.
+    const fib = [1n, 1n];
+    while (fib.length < 2000) fib.push(fib[fib.length - 1] + fib[fib.length - 2]);
+    expect(bigGcd(fib[1999], fib[1998])).toBe(1n);
+    expect(bigGcd(fib[1999] * 12345n, fib[1998] * 12345n)).toBe(12345n);
+  });
+
   it("qToNumber stays finite and accurate for huge numerators and denominators (common practice)", () => {
     expect(qToNumber(q(1, 4))).toBe(0.25);
     const huge = q(10n ** 400n + 1n, 3n * 10n ** 400n);

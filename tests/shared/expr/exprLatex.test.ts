@@ -2,7 +2,7 @@ import katex from "katex";
 import { describe, expect, it } from "vitest";
 import { parseExpression } from "@shared/expr/parse";
 import { runPythonSync } from "../../support/python";
-import { boundedMemo, expressionFraction, expressionLatex, exprLatex, exprText } from "@shared/expr/exprLatex";
+import { expressionFraction, expressionLatex, exprLatex, exprText } from "@shared/expr/exprLatex";
 import { nameLatex } from "@shared/expr/names";
 
 const latexOf = (text: string, parameters: string[] = ["K", "tau", "K_p", "T_i", "Kp", "Kpos", "Kv", "a"]) => {
@@ -101,17 +101,5 @@ describe("block expressions as plain text (the far-zoom drawing)", () => {
     expect(expressionFraction("Kd*s/(T*s+1)")).toEqual({ num: "Kd·s", den: "Ts + 1" });
     expect(expressionFraction("3*(s+1)")).toEqual({ num: "3(s + 1)", den: null });
     expect(expressionFraction("K/(s+")).toBeNull();
-  });
-});
-
-describe("bounded memo (common practice: a cache that evicts its oldest entry when full)", () => {
-  it("computes each key once while kept, and again after being evicted", () => {
-    const calls: string[] = [];
-    const upper = boundedMemo(2, (k) => (calls.push(k), k.toUpperCase()));
-    expect([upper("a"), upper("a"), upper("b"), upper("a")]).toEqual(["A", "A", "B", "A"]);
-    expect(calls).toEqual(["a", "b"]);
-    upper("c"); // evicts "a", the oldest
-    upper("a");
-    expect(calls).toEqual(["a", "b", "c", "a"]);
   });
 });

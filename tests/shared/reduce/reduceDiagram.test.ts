@@ -233,6 +233,35 @@ describe("refusals", () => {
     expect(out.ok).toBe(false);
     if (!out.ok) expect(out.problems.map((p) => p.code)).toEqual(["too-complex"]);
   });
+
+  // A loop around one expression whose expansion alone runs for minutes: the clock is watched inside the arithmetic.
+  const heavyLoop = (expr: string) =>
+    diagram(
+      [["r", "input"], ["e", "sum", ["+", "-"]], ["g", "transfer", expr], ["y", "output"]],
+      ["r>e:0", "e>g", "g>y", "g>e:1"],
+      { K: 1, a: 2, b: 3, c: 4 },
+    );
+
+  test("an expansion past the time limit (s + K + a + b + c)^20 ends with a problem naming the block and the limit", () => {
+    // 10,626 terms: inside the size limits (sizeLimits.ts), so it is the time guard that stops it.
+    const out = reduceDocument(heavyLoop("(K + a + b + c + s)^20"), { limits: { timeLimitMs: 50 } });
+    expect(out.ok).toBe(false);
+    if (out.ok) return;
+    expect(out.problems.map((p) => [p.code, p.blockId])).toEqual([["too-complex", "g"]]);
+    expect(out.problems[0].message).toContain("time limit of 0.05 s");
+  });
+
+  test("a gcd in four parameters past its own budget ends with a problem naming the block, the budget and the parameters", () => {
+    const common = "(s + K + a + b + c + 1)^5";
+    const expr = `((K*s + a + 2*b + 3)^5*${common})/((c*s + K + 3*a + 5)^5*${common})`;
+    const out = reduceDocument(heavyLoop(expr), { limits: { gcdTimeLimitMs: 5 } });
+    expect(out.ok).toBe(false);
+    if (out.ok) return;
+    expect(out.problems.map((p) => [p.code, p.blockId])).toEqual([["gcd-time-limit", "g"]]);
+    expect(out.problems[0].message).toContain("gcd time budget of 0.005 s");
+    // Which gcd runs out (the whole one, or one of its contents) depends on the machine: it names its parameters.
+    expect(out.problems[0].message).toMatch(/polynomials in [Kabc](, [Kabc])* took longer/);
+  });
 });
 
 describe("generated ladders and nested-loop chains", () => {

@@ -1,7 +1,7 @@
 import { memo } from "react";
 import katex from "katex";
 import "katex/dist/katex.min.css";
-import { boundedMemo } from "@shared/expr/exprLatex";
+import { boundedMemo } from "@shared/expr/boundedMemo";
 
 /** Longer formulas (whole closed-loop results) rarely repeat: not worth keeping. */
 const KEPT_LENGTH = 2000;
