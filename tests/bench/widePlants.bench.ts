@@ -1,6 +1,7 @@
 import fc from "fast-check";
 import { analyzeDocument } from "@shared/analysis/analyzeDiagram";
 import { wellPosedDiagram } from "../support/arbitraries";
+import { unityFeedback } from "../support/docBuilder";
 
 /**
  * Analysis of hard real plants and of random diagrams up to 30 blocks: the wall time of one whole analysis
@@ -8,13 +9,6 @@ import { wellPosedDiagram } from "../support/arbitraries";
  * Run: npx tsx tests/bench/widePlants.bench.ts
  */
 const TARGET_MS = 2000;
-const unity = (G: string) => ({
-  format: "loopwright-diagram",
-  version: 1,
-  parameters: {},
-  blocks: [{ id: "r", type: "input" }, { id: "e", type: "sum", signs: ["+", "-"] }, { id: "G", type: "transfer", expr: G }, { id: "y", type: "output" }],
-  wires: [{ from: "r", to: "e", port: 0 }, { from: "e", to: "G" }, { from: "G", to: "y" }, { from: "G", to: "e", port: 1 }],
-});
 const PLANTS = [
   "1/(s*(s+0.000001))",
   "1e-300/((s+1)*(s+2))",
@@ -31,7 +25,7 @@ const timed = (doc: unknown) => {
 console.log("\nhard plants in unity feedback, one whole analysis each");
 console.log("plant".padEnd(52), "ms".padStart(8), " result");
 for (const G of PLANTS) {
-  const { ms, ok } = timed(unity(G));
+  const { ms, ok } = timed(unityFeedback(G));
   console.log(G.padEnd(52), ms.toFixed(1).padStart(8), ok ? " analysed" : " refused with problems");
 }
 

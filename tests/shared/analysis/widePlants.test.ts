@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { runPythonSync } from "../../support/python";
+import { unityFeedback } from "../../support/docBuilder";
 import { analyzeDocument } from "@shared/analysis/analyzeDiagram";
 import type { Analysis } from "@shared/analysis/analyze";
 import { q, qFromDouble, qToNumber } from "@shared/algebra/rational";
@@ -11,17 +12,9 @@ import { clockwiseEncirclements } from "@shared/analysis/nyquist";
 // almost no damping. Each case used to fail (an array of billions of grid points, a hang in an integer square
 // root, a coefficient lost to cancellation); each now ends with figures or says what it cannot resolve.
 
-/** Unity negative feedback around G. */
-const unity = (G: string) => ({
-  format: "loopwright-diagram",
-  version: 1,
-  parameters: {},
-  blocks: [{ id: "r", type: "input" }, { id: "e", type: "sum", signs: ["+", "-"] }, { id: "G", type: "transfer", expr: G }, { id: "y", type: "output" }],
-  wires: [{ from: "r", to: "e", port: 0 }, { from: "e", to: "G" }, { from: "G", to: "y" }, { from: "G", to: "e", port: 1 }],
-});
 
 function analysed(G: string): Analysis {
-  const out = analyzeDocument(unity(G));
+  const out = analyzeDocument(unityFeedback(G));
   if (!out.ok) throw new Error(JSON.stringify(out.problems));
   return out.analysis;
 }
