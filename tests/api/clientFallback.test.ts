@@ -57,3 +57,18 @@ it("announces the editor's chunks and the diagram's data in the HTML of a diagra
   // The manifest itself is not served (dot-folders are not static files; the path gets the plain page).
   expect((await request(t.app).get("/.vite/manifest.json")).text).not.toContain("isEntry");
 });
+
+it("sends a Content-Security-Policy that allows only this origin, and no inline script (common practice: CSP Level 3)", async () => {
+  const page = await request(t.app).get("/teams/123").set("Accept", "text/html");
+  const csp = Object.fromEntries(
+    String(page.headers["content-security-policy"]).split(";").map((d) => d.trim().split(/\s+/)).map(([name, ...values]) => [name, values]),
+  );
+  expect(csp["default-src"]).toEqual(["'self'"]);
+  expect(csp["script-src"]).toEqual(["'self'"]);
+  expect(csp["script-src-attr"]).toEqual(["'none'"]);
+  expect(csp["object-src"]).toEqual(["'none'"]);
+  // No other origin anywhere: every source is 'self', a keyword, or data:/blob: for generated images and fonts.
+  for (const [name, values] of Object.entries(csp)) {
+    for (const v of values as string[]) expect(v, name).toMatch(/^('[a-z-]+'|data:|blob:)$/);
+  }
+});
