@@ -42,10 +42,11 @@ const size = (x: TimeResponse["terms"][number], t: number): number => Math.abs(x
  * falls, so one bisection replaces a test at every grid point. −Infinity when it never reaches tol.
  */
 export function negligibleFrom(x: TimeResponse["terms"][number], tol: number): number {
+  if (!(tol > 0)) return Infinity; // a tolerance that underflowed to 0 is never reached
   const peak = Math.max(0, x.power / x.decay - 1);
   if (size(x, peak) < tol) return -Infinity;
   let [a, b] = [peak, peak + 1 / x.decay];
-  while (size(x, b) >= tol) [a, b] = [b, b + 2 * (b - peak)];
+  while (size(x, b) >= tol && Number.isFinite(b)) [a, b] = [b, b + 2 * (b - peak)];
   for (let i = 0; i < 200 && b - a > 1e-15 * b; i++) {
     const m = (a + b) / 2;
     if (size(x, m) >= tol) a = m;

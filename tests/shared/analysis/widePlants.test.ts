@@ -7,6 +7,7 @@ import { q, qFromDouble, qToNumber } from "@shared/algebra/rational";
 import { qSqrtToNumber, surdToNumber } from "@shared/analysis/surd";
 import type { Complex } from "@shared/analysis/frequency";
 import { clockwiseEncirclements } from "@shared/analysis/nyquist";
+import { negligibleFrom } from "@shared/analysis/stepMetrics";
 
 // Real plants, not tidy ones: time constants decades apart, gains near the ends of the double range, modes with
 // almost no damping. Each case used to fail (an array of billions of grid points, a hang in an integer square
@@ -126,6 +127,14 @@ print(json.dumps(int(sum(1 for r in np.roots(np.polyadd(d, [1])) if r.real > 0))
       return [Math.cos(th) - 1, Math.sin(th)];
     };
     expect(clockwiseEncirclements(noise, [], 10, 1e-3)).toBeNull();
+  });
+});
+
+describe("a tolerance that underflows", () => {
+  it("a term compared with a tolerance of 0 is never negligible, and the search ends (it used to double t forever)", () => {
+    const term = { kind: "exp" as const, coefficient: 5e-324, power: 0, decay: 1, frequency: 0, text: "", latex: "" };
+    expect(negligibleFrom(term, 1e-3 * 5e-324)).toBe(Infinity);
+    expect(negligibleFrom({ ...term, coefficient: 1 }, 1e-300)).toBeCloseTo(Math.log(1e300), 6); // e^(−t) = 1e-300
   });
 });
 
