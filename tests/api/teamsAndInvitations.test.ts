@@ -1,6 +1,10 @@
+import { Writable } from "node:stream";
+import { pino } from "pino";
+import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { createApp } from "@server/app";
 import { Invitation } from "@server/db/models/team";
-import { PASSWORD, invitationToken, signedUp, startTestApp, uniqueEmail, type TestApp } from "./support/harness";
+import { ORIGIN, PASSWORD, invitationToken, signedUp, startTestApp, uniqueEmail, type TestApp } from "./support/harness";
 
 let t: TestApp;
 beforeAll(async () => {
@@ -124,5 +128,29 @@ describe("diagrams", () => {
     const detail = await owner.client.get(`/api/diagrams/${id}`);
     expect(detail.body.diagram).toMatchObject({ title: "Hopper level loop", role: "owner", teamName: "ana's cell", archivedAt: null });
     expect(detail.body.latestVersion).toBeNull();
+  });
+});
+
+describe("what the request log holds", () => {
+  it("never an invitation token, a password or a session id (common practice: credentials stay out of logs)", async () => {
+    const lines: string[] = [];
+    const sink = new Writable({ write: (chunk, _enc, done) => (lines.push(String(chunk)), done()) });
+    const logged = createApp({ ...t.deps, log: pino({ level: "info" }, sink) });
+    const { owner, teamId } = await teamOf("rhea");
+    const email = uniqueEmail("sami");
+    await owner.client.post(`/api/teams/${teamId}/invitations`).send({ email, role: "viewer" }).expect(201);
+    const token = invitationToken(t.mailbox, email);
+    const guest = request.agent(logged).set("Origin", ORIGIN);
+    const signUp = await guest.post("/api/auth/sign-up").send({ name: "sami", email, password: PASSWORD }).expect(201);
+    await guest.get(`/api/invitations/${token}`).expect(200);
+    await guest.post(`/api/invitations/${token}/accept`).expect(200);
+    const signIn = await guest.post("/api/auth/sign-in").send({ email, password: PASSWORD }).expect(200);
+    const sessionIds = [signUp, signIn].flatMap((r) => ([] as string[]).concat(r.headers["set-cookie"] ?? []).map((c) => c.split(";")[0].split("=")[1]));
+    expect(sessionIds.every((id) => id.length > 10)).toBe(true);
+    const text = lines.join("");
+    for (const secret of [token, PASSWORD, ...sessionIds]) expect(text).not.toContain(secret);
+    const paths = lines.map((l) => JSON.parse(l).path);
+    expect(paths).toContain("/api/invitations/[token]");
+    expect(paths).toContain("/api/invitations/[token]/accept");
   });
 });
