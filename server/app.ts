@@ -23,7 +23,7 @@ import { createSaveCheck, type SaveCheck } from "@server/features/versions/check
 import { clientPages } from "@server/http/clientPages";
 import { originCheck } from "@server/http/csrf";
 import { errorHandler, unknownApiRoute } from "@server/http/errors";
-import { authLimiter } from "@server/http/rateLimit";
+import { authLimiter, shareLookupLimiter, uploadLimiter } from "@server/http/rateLimit";
 import { requestLog } from "@server/http/requestLog";
 import { sessionMiddleware } from "@server/http/session";
 import { paths } from "@shared/routes";
@@ -75,12 +75,13 @@ export function createApp(deps: AppDeps): Express {
   api.use(originCheck(config.publicUrl));
   api.use(sessionMiddleware(deps.lucia));
   api.use(systemRouter({ sequelize: deps.sequelize, mailbox: deps.mailbox, demo: config.demo }));
+  api.post(["/teams/:teamId/diagrams/import", "/diagrams/:id/versions/import"], uploadLimiter(config.uploadRateLimit));
   api.use("/auth", authRouter(deps.lucia, limiter));
   api.use("/teams", teamsRouter(), teamInvitationsRouter({ mailer: deps.mailer, publicUrl: config.publicUrl }, limiter), teamDiagramsRouter(saveCheck), teamShareLinksRouter());
   api.use("/teams", teamAuditRouter());
   api.use("/invitations", invitationLinkRouter(limiter));
   api.use("/diagrams", diagramsRouter(), versionsRouter(saveCheck), versionImportRouter(saveCheck), exportRouter(), diagramShareLinksRouter({ publicUrl: config.publicUrl }));
-  api.use("/shared", capabilityHeaders, sharedExportRouter(), sharedLinkRouter());
+  api.use("/shared", shareLookupLimiter(config.shareRateLimit), capabilityHeaders, sharedExportRouter(), sharedLinkRouter());
   api.use("/diagrams", commentsRouter({ mailer: deps.mailer, publicUrl: config.publicUrl, log }));
   api.use(unknownApiRoute);
   app.use("/api", api);

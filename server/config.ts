@@ -20,6 +20,8 @@ const envSchema = z.object({
   MAIL_FROM: z.string().default("Loopwright <no-reply@loopwright.invalid>"),
   FAKE_MAIL_PORT: z.coerce.number().int().default(ports.mail),
   RATE_LIMIT_AUTH_PER_15_MIN: z.coerce.number().int().min(1).default(30),
+  RATE_LIMIT_SHARE_PER_MIN: z.coerce.number().int().min(1).default(300),
+  RATE_LIMIT_UPLOADS_PER_15_MIN: z.coerce.number().int().min(1).default(60),
   DEMO_SEED: z.enum(["true", "false"]).default("true"),
 });
 
@@ -36,6 +38,8 @@ export type Config = {
   mailFrom: string;
   fakeMailPort: number;
   authRateLimit: number;
+  shareRateLimit: number;
+  uploadRateLimit: number;
   demo: boolean;
 };
 
@@ -64,6 +68,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     mailFrom: e.MAIL_FROM,
     fakeMailPort: e.FAKE_MAIL_PORT,
     authRateLimit: e.RATE_LIMIT_AUTH_PER_15_MIN,
+    shareRateLimit: e.RATE_LIMIT_SHARE_PER_MIN,
+    uploadRateLimit: e.RATE_LIMIT_UPLOADS_PER_15_MIN,
     demo: e.DEMO_SEED === "true",
   };
 }

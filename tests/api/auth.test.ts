@@ -115,4 +115,26 @@ describe("request hygiene", () => {
       await limited.close();
     }
   });
+
+  it("rate-limits share-link lookups and uploads per client, each with a 429 and its own sentence", async () => {
+    const limited = await startTestApp({ RATE_LIMIT_SHARE_PER_MIN: "3", RATE_LIMIT_UPLOADS_PER_15_MIN: "2" });
+    try {
+      const lookups: number[] = [];
+      for (let i = 0; i < 5; i++) {
+        const res = await limited.client().get(`/api/shared/${"x".repeat(43)}`);
+        lookups.push(res.status);
+        if (res.status === 429) expect(res.body.error).toMatchObject({ code: "rate_limited", message: expect.stringMatching(/share-link/) });
+      }
+      expect(lookups).toEqual([404, 404, 404, 429, 429]);
+      const uploads: number[] = [];
+      for (let i = 0; i < 4; i++) {
+        const res = await limited.client().post("/api/diagrams/00000000-0000-0000-0000-000000000000/versions/import").attach("file", Buffer.from("{}"), "x.json");
+        uploads.push(res.status);
+      }
+      // Signed out, the first two are refused by access (401); the limiter counts them and stops the rest.
+      expect(uploads).toEqual([401, 401, 429, 429]);
+    } finally {
+      await limited.close();
+    }
+  });
 });

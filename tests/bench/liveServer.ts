@@ -90,6 +90,8 @@ export async function startLiveServer(databaseUrl: string, { compiled = false, c
         NODE_ENV: "test",
         LOG_LEVEL: "warn",
         RATE_LIMIT_AUTH_PER_15_MIN: "10000",
+        RATE_LIMIT_SHARE_PER_MIN: "100000000", // the load bench reads share pages at 200 connections
+        RATE_LIMIT_UPLOADS_PER_15_MIN: "10000",
         DATABASE_URL: databaseUrl,
       },
     });

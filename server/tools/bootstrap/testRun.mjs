@@ -65,6 +65,8 @@ async function e2e(databaseUrl) {
       CLIENT_DIR: clientDir,
       LOG_LEVEL: "warn",
       RATE_LIMIT_AUTH_PER_15_MIN: "10000", // every e2e test signs people up from one address
+      RATE_LIMIT_SHARE_PER_MIN: "10000",
+      RATE_LIMIT_UPLOADS_PER_15_MIN: "10000",
     },
   });
   try {

@@ -33,6 +33,8 @@ export async function startTestApp(env: Record<string, string> = {}): Promise<Te
     PUBLIC_URL: ORIGIN,
     LOG_LEVEL: "silent",
     RATE_LIMIT_AUTH_PER_15_MIN: "100000",
+    RATE_LIMIT_SHARE_PER_MIN: "100000",
+    RATE_LIMIT_UPLOADS_PER_15_MIN: "100000",
     FAKE_MAIL_PORT: "0",
     ...env,
   });
